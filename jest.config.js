@@ -1,0 +1,33 @@
+/** Two projects: `node` for shared/ and server/ (real MariaDB), `client` for screens and components. */
+const expoPreset = require('jest-expo/jest-preset');
+
+const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
+// Append to jest-expo's own allow-list rather than replacing it.
+const clientIgnore = (expoPreset.transformIgnorePatterns || []).map((pattern) =>
+  pattern.replace('(?!(', '(?!(victory|'),
+);
+
+module.exports = {
+  testTimeout: 30000,
+  cacheDirectory: '<rootDir>/.cache/jest',
+  projects: [
+    {
+      displayName: 'node',
+      testEnvironment: 'node',
+      roots: ['<rootDir>/tests/shared', '<rootDir>/tests/server'],
+      testMatch: ['**/*.test.ts'],
+      moduleNameMapper,
+      transform: {
+        '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.test.json', diagnostics: false }],
+      },
+    },
+    {
+      displayName: 'client',
+      preset: 'jest-expo/web',
+      roots: ['<rootDir>/tests/components', '<rootDir>/tests/app'],
+      testMatch: ['**/*.test.tsx'],
+      moduleNameMapper,
+      transformIgnorePatterns: clientIgnore,
+    },
+  ],
+};

@@ -1,0 +1,85 @@
+import connectSessionSequelize from 'connect-session-sequelize';
+import express from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { authRouter } from './features/auth/auth.router';
+import { configurePassport } from './features/auth/passport';
+import { clubsRouter } from './features/clubs/clubs.router';
+import { healthRouter } from './features/health/health.router';
+import { stationsRouter } from './features/stations/stations.router';
+import type { Logger } from './lib/logger';
+import type { FakeSmtp } from './mail/fake-smtp';
+import { inboxRouter } from './mail/inbox.router';
+import type { Mailer } from './mail/mailer';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { originCheck } from './middleware/origin-check';
+import { webAppRouter } from './web/static';
+
+export type AppDeps = {
+  config: Config;
+  sequelize: Sequelize;
+  mailer: Mailer;
+  logger: Logger;
+  /** The in-process fake SMTP server, when there is one: its inbox is served at /dev/inbox. */
+  fakeSmtp?: FakeSmtp;
+};
+
+const CSP = {
+  useDefaults: false,
+  directives: {
+    defaultSrc: ["'self'"],
+    baseUri: ["'self'"],
+    fontSrc: ["'self'"],
+    formAction: ["'self'"],
+    frameAncestors: ["'self'"],
+    imgSrc: ["'self'", 'data:', 'blob:'],
+    objectSrc: ["'none'"],
+    scriptSrc: ["'self'"],
+    scriptSrcAttr: ["'none'"],
+    // react-native-web and expo-font add <style> elements at run time.
+    styleSrc: ["'self'", "'unsafe-inline'"],
+    connectSrc: ["'self'"],
+  },
+};
+
+/** The whole HTTP app without listen(), so tests drive it with supertest. */
+export function createApp({ config, sequelize, mailer, logger, fakeSmtp }: AppDeps) {
+  const app = express();
+  const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
+
+  app.use('/api/health', healthRouter(sequelize));
+
+  const SessionStore = connectSessionSequelize(session.Store);
+  const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });
+  const passport = configurePassport();
+  const api = express.Router();
+  api.use(originCheck([config.WEB_ORIGIN]));
+  api.use(express.json({ limit: config.JSON_LIMIT }));
+  api.use(
+    session({
+      name: 'faintline.sid',
+      secret: config.SESSION_SECRET,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: secureCookies, maxAge: 14 * 24 * 3600_000 },
+    }),
+  );
+  api.use(passport.session());
+  api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
+  api.use('/stations', stationsRouter());
+  api.use('/clubs', clubsRouter());
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', inboxRouter(fakeSmtp));
+  app.use(webAppRouter(config.WEB_DIST_DIR));
+  app.use(errorHandler(logger));
+  return app;
+}

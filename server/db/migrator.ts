@@ -1,0 +1,19 @@
+import type { Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+import * as m0001 from './migrations/0001-accounts-and-stations';
+
+// An explicit list: the same code path under tsx, jest and compiled output.
+const migrations = [{ name: '0001-accounts-and-stations', ...m0001 }];
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: migrations.map(({ name, up, down }) => ({ name, up, down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrateToLatest(sequelize: Sequelize) {
+  return createMigrator(sequelize).up();
+}

@@ -1,0 +1,31 @@
+import { Sequelize } from 'sequelize';
+import { ClubModel } from './models/club.model';
+import { MembershipModel } from './models/membership.model';
+import { PasswordResetModel } from './models/password-reset.model';
+import { StationModel } from './models/station.model';
+import { UserModel } from './models/user.model';
+
+/** One Sequelize instance per process; models and associations are set up here only. */
+export function createSequelize(databaseUrl: string): Sequelize {
+  const sequelize = new Sequelize(databaseUrl, {
+    dialect: 'mariadb',
+    logging: false,
+    timezone: '+00:00',
+    dialectOptions: { skipSetTimezone: true },
+    pool: { max: 10, min: 0, idle: 10_000 },
+    define: { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
+  });
+  UserModel.initModel(sequelize);
+  ClubModel.initModel(sequelize);
+  MembershipModel.initModel(sequelize);
+  StationModel.initModel(sequelize);
+  PasswordResetModel.initModel(sequelize);
+
+  UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
+  StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });
+  UserModel.hasMany(MembershipModel, { foreignKey: 'userId', as: 'memberships' });
+  MembershipModel.belongsTo(UserModel, { foreignKey: 'userId', as: 'user' });
+  ClubModel.hasMany(MembershipModel, { foreignKey: 'clubId', as: 'memberships' });
+  MembershipModel.belongsTo(ClubModel, { foreignKey: 'clubId', as: 'club' });
+  return sequelize;
+}

@@ -1,0 +1,84 @@
+import bcrypt from 'bcryptjs';
+import { createHash, randomBytes } from 'node:crypto';
+import { Op, UniqueConstraintError, type Sequelize } from 'sequelize';
+import type { RegisterInput, ResetConfirmInput } from '@/shared/schemas';
+import { PasswordResetModel } from '../../db/models/password-reset.model';
+import { UserModel } from '../../db/models/user.model';
+import { AppError } from '../../lib/app-error';
+import { findByEmail } from './users.repo';
+
+export const RESET_TOKEN_LIFETIME_MIN = 30;
+
+const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
+
+// Compared against when the e-mail is unknown, so both paths cost one bcrypt.
+const NO_USER_HASH = bcrypt.hashSync('no user has this password', 4);
+
+export async function register(input: RegisterInput, bcryptCost: number): Promise<number> {
+  const passwordHash = await bcrypt.hash(input.password, bcryptCost);
+  try {
+    const user = await UserModel.create({
+      email: input.email,
+      displayName: input.displayName,
+      callsign: input.callsign ? input.callsign : null,
+      passwordHash,
+    });
+    return user.id;
+  } catch (error) {
+    if (error instanceof UniqueConstraintError) {
+      throw new AppError('conflict', 'An account with this e-mail already exists', {
+        email: 'An account with this e-mail already exists. Sign in or reset the password.',
+      });
+    }
+    throw error;
+  }
+}
+
+/** The user's id when e-mail and password match, otherwise null. */
+export async function verifyCredentials(email: string, password: string): Promise<number | null> {
+  const user = await findByEmail(email.trim().toLowerCase());
+  const matches = await bcrypt.compare(password, user?.passwordHash ?? NO_USER_HASH);
+  return user && matches ? user.id : null;
+}
+
+/** Creates a single-use token and returns it (to be mailed), or null for an unknown e-mail. */
+export async function createPasswordReset(email: string, now = new Date()) {
+  const user = await findByEmail(email);
+  if (!user) return null;
+  const token = randomBytes(32).toString('base64url');
+  await PasswordResetModel.create({
+    userId: user.id,
+    tokenHash: sha256(token),
+    expiresAt: new Date(now.getTime() + RESET_TOKEN_LIFETIME_MIN * 60_000),
+    usedAt: null,
+  });
+  return { token, email: user.email, displayName: user.displayName };
+}
+
+export async function confirmPasswordReset(
+  sequelize: Sequelize,
+  input: ResetConfirmInput,
+  bcryptCost: number,
+  now = new Date(),
+) {
+  const passwordHash = await bcrypt.hash(input.password, bcryptCost);
+  await sequelize.transaction(async (transaction) => {
+    const reset = await PasswordResetModel.findOne({
+      where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: now } },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
+    if (!reset) {
+      throw new AppError('bad-request', 'This reset link is invalid, already used or expired. Ask for a new one.', {
+        token: 'This reset link is invalid, already used or expired. Ask for a new one.',
+      });
+    }
+    await reset.update({ usedAt: now }, { transaction });
+    await UserModel.update({ passwordHash }, { where: { id: reset.userId }, transaction });
+    // Any other outstanding links for this account stop working too.
+    await PasswordResetModel.update(
+      { usedAt: now },
+      { where: { userId: reset.userId, usedAt: null }, transaction },
+    );
+  });
+}

@@ -1,0 +1,28 @@
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import { findSessionUser } from './users.repo';
+import { verifyCredentials } from './auth.service';
+
+/** Sessions hold only the user id; each request reads the user and memberships afresh. */
+export function configurePassport() {
+  passport.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
+      try {
+        const userId = await verifyCredentials(email, password);
+        if (userId === null) return done(null, false);
+        return done(null, (await findSessionUser(userId)) ?? false);
+      } catch (error) {
+        return done(error);
+      }
+    }),
+  );
+  passport.serializeUser((user, done) => done(null, user.id));
+  passport.deserializeUser(async (id: number, done) => {
+    try {
+      done(null, (await findSessionUser(id)) ?? false);
+    } catch (error) {
+      done(error);
+    }
+  });
+  return passport;
+}

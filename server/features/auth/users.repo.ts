@@ -1,0 +1,28 @@
+import type { SessionUser } from '@/shared/api/contracts';
+import { ClubModel } from '../../db/models/club.model';
+import { MembershipModel } from '../../db/models/membership.model';
+import { UserModel } from '../../db/models/user.model';
+
+export async function findByEmail(email: string) {
+  return UserModel.findOne({ where: { email } });
+}
+
+/** The signed-in user with club memberships, in one query. */
+export async function findSessionUser(id: number): Promise<SessionUser | null> {
+  const user = await UserModel.findByPk(id, {
+    include: [{ model: MembershipModel, as: 'memberships', include: [{ model: ClubModel, as: 'club' }] }],
+  });
+  if (!user) return null;
+  const memberships = (user as unknown as { memberships: (MembershipModel & { club: ClubModel })[] }).memberships;
+  const clubs = memberships
+    .map((m) => ({ clubId: m.clubId, clubName: m.club.name, role: m.role }))
+    .sort((a, b) => a.clubName.localeCompare(b.clubName));
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    callsign: user.callsign,
+    clubs,
+    adminOfClubIds: clubs.filter((c) => c.role === 'admin').map((c) => c.clubId),
+  };
+}

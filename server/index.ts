@@ -1,0 +1,62 @@
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { migrateToLatest } from './db/migrator';
+import { demoSignIns, seedDemoIfEmpty } from './db/seed/demo';
+import { createSequelize } from './db/sequelize';
+import { createLogger } from './lib/logger';
+import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
+import { createMailer } from './mail/mailer';
+
+/** config → fake mail → database (migrate, seed) → listen; drains on SIGINT/SIGTERM. */
+async function main() {
+  const config = loadConfig();
+  const logger = createLogger(config.LOG_LEVEL);
+  let fakeSmtp: FakeSmtp | undefined;
+  if (config.FAKE_SMTP === '1') {
+    fakeSmtp = await startFakeSmtp({ host: '127.0.0.1', port: config.SMTP_PORT, mailDir: config.MAIL_DIR });
+  }
+  const sequelize = createSequelize(config.DATABASE_URL);
+  await sequelize.authenticate();
+  await migrateToLatest(sequelize);
+  const seeded = process.env.FAINTLINE_SEED_DEMO === '0' ? false : await seedDemoIfEmpty(sequelize, config.BCRYPT_COST);
+  const mailer = createMailer(config);
+  const app = createApp({ config, sequelize, mailer, logger, fakeSmtp });
+
+  const server = app.listen(config.PORT, config.HOST, (error?: Error) => {
+    if (error) {
+      logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
+      process.exit(1);
+    }
+    const url = `http://${config.HOST}:${config.PORT}`;
+    console.log(`\nFaintline is running at ${url}${seeded ? ' (demo data seeded)' : ''}`);
+    console.log(`Demo sign-ins (password ${demoSignIns[0].password}):`);
+    for (const d of demoSignIns) console.log(`  ${d.email.padEnd(28)} ${d.role === 'admin' ? 'club admin' : 'operator'}`);
+    if (fakeSmtp) console.log(`Local test inbox: ${url}/dev/inbox  (fake SMTP on 127.0.0.1:${fakeSmtp.port})`);
+    console.log('Press Ctrl-C to stop.\n');
+  });
+
+  let stopping = false;
+  const stop = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    logger.info({ signal }, 'stopping');
+    server.close();
+    server.closeAllConnections();
+    mailer.close();
+    await fakeSmtp?.close();
+    await sequelize.close();
+    process.exit(0);
+  };
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+}
+
+process.on('unhandledRejection', (reason) => {
+  console.error('Unhandled rejection:', reason);
+  process.exit(1);
+});
+
+main().catch((error) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,9 @@
+import type { SessionUser } from '@/shared/api/contracts';
+
+declare global {
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends SessionUser {}
+  }
+}
+export {};

@@ -1,0 +1,25 @@
+import { z } from './zod-setup';
+import { callsignField, emailField, passwordField } from './fields';
+
+export const signInInput = z.object({
+  email: emailField,
+  password: z.string().min(1, 'Enter your password').max(200),
+});
+export type SignInInput = z.infer<typeof signInInput>;
+
+export const registerInput = z.object({
+  email: emailField,
+  displayName: z.string().trim().min(2, 'Use at least 2 characters').max(80, 'Use at most 80 characters'),
+  password: passwordField,
+  callsign: z.union([callsignField, z.literal('')]).optional(),
+});
+export type RegisterInput = z.infer<typeof registerInput>;
+
+export const resetRequestInput = z.object({ email: emailField });
+export type ResetRequestInput = z.infer<typeof resetRequestInput>;
+
+export const resetConfirmInput = z.object({
+  token: z.string().min(20, 'The reset link is incomplete').max(200),
+  password: passwordField,
+});
+export type ResetConfirmInput = z.infer<typeof resetConfirmInput>;
