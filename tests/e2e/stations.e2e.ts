@@ -1,0 +1,52 @@
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, type RunningServer } from './harness';
+
+let server: RunningServer;
+before(async () => {
+  server = await startServer();
+});
+after(() => server.stop());
+
+for (const viewport of VIEWPORTS) {
+  describe(`stations in the browser at ${viewport.width}×${viewport.height}`, () => {
+    it('when the operator adds a station with a bad locator, sees the error, fixes it, edits the station and signs out', async () => {
+      const browser = await openBrowser(viewport);
+      const { page } = browser;
+      try {
+        await signIn(page, 'operator@faintline.example');
+        await page.getByText('Ilse Marrow', { exact: false }).first().waitFor();
+        await page.goto(`${BASE_URL}/stations/new`);
+        const name = `Balcony test ${viewport.name}`;
+        await page.getByLabel('Name').fill(name);
+        await page.getByLabel('Callsign').fill('q1imw');
+        await page.getByLabel('Locator').fill('ZZ99');
+        await page.getByRole('button', { name: 'Save station' }).click();
+        await page.getByText(/4- or 6-character Maidenhead locator/).first().waitFor();
+        await screenshot(page, `e2e-station-error-${viewport.name}`);
+
+        await page.getByLabel('Locator').fill('IO91wm');
+        await page.getByRole('button', { name: 'Save station' }).click();
+        await page.waitForURL(/\/stations\/\d+$/);
+        await page.getByText('IO91WM').first().waitFor();
+
+        await page.goto(`${BASE_URL}/stations`);
+        await page.getByText(name).first().click();
+        await page.waitForURL(/\/stations\/\d+$/);
+        await page.getByRole('button', { name: 'Edit' }).click();
+        await page.getByLabel('Name').fill(`${name} (edited)`);
+        await page.getByRole('button', { name: 'Save station' }).click();
+        await page.getByText(`${name} (edited)`).first().waitFor();
+
+        await page.goto(`${BASE_URL}/settings`);
+        await page.getByRole('button', { name: 'Sign out' }).click();
+        await page.getByRole('button', { name: 'Sign in' }).waitFor();
+        const me = await page.evaluate(async () => (await fetch('/api/auth/me')).status);
+        assert.equal(me, 401);
+        assert.deepEqual(browser.errors, []);
+      } finally {
+        await browser.close();
+      }
+    });
+  });
+}
