@@ -1,0 +1,261 @@
+/**
+ * The `faintline` command: a thin layer over shared/domain. JSON goes to
+ * stdout, one line per result; refusals go to stderr with exit code 1.
+ */
+import { Command, InvalidArgumentError } from 'commander';
+import {
+  bandFor,
+  bandsFor,
+  chainOutput,
+  commandForBand,
+  dbmToMw,
+  designLowPass,
+  encodeMessage,
+  FILTER_KINDS,
+  latLonToLocator,
+  LICENCE_REGIONS,
+  locatorToLatLon,
+  pathBetweenLocators,
+  planMessages,
+  planSynth,
+  predictOffsets,
+  requiredFilterAttenuation,
+  toneFrequenciesHz,
+  type FilterKind,
+  type LicenceRegion,
+  type Refusal,
+} from '../../shared/domain';
+
+export type CliIo = { out: (line: string) => void; err: (line: string) => void; setExitCode: (code: number) => void };
+
+const defaultIo: CliIo = {
+  out: (line) => process.stdout.write(line + '\n'),
+  err: (line) => process.stderr.write(line + '\n'),
+  setExitCode: (code) => {
+    process.exitCode = code;
+  },
+};
+
+function number(label: string) {
+  return (value: string): number => {
+    const n = Number(value);
+    if (value.trim() === '' || !Number.isFinite(n)) throw new InvalidArgumentError(`${label} must be a number; got '${value}'.`);
+    return n;
+  };
+}
+
+function region(value: string): LicenceRegion {
+  const r = value.toLowerCase();
+  if (!(LICENCE_REGIONS as readonly string[]).includes(r)) {
+    throw new InvalidArgumentError(`Region must be one of ${LICENCE_REGIONS.join(', ')}; got '${value}'.`);
+  }
+  return r as LicenceRegion;
+}
+
+/** Drops the `ok` flag and turns typed arrays into plain arrays for JSON. */
+function plain<T extends { ok: true }>(result: T): Omit<T, 'ok'> {
+  const { ok: _ok, ...rest } = result;
+  return JSON.parse(JSON.stringify(rest, (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as unknown as ArrayLike<number>) : v)));
+}
+
+export function buildProgram(io: CliIo = defaultIo): Command {
+  const fail = (refusal: Refusal | string): void => {
+    io.err(`faintline: ${typeof refusal === 'string' ? refusal : refusal.reason}`);
+    io.setExitCode(1);
+  };
+  const emit = (value: unknown): void => io.out(JSON.stringify(value));
+
+  const program = new Command('faintline')
+    .description('Faintline beacon computations: WSPR messages and symbols, locators, paths, tones, synthesizer plans, power and filters.')
+    .showHelpAfterError()
+    .configureOutput({ writeOut: (s) => io.out(s.trimEnd()), writeErr: (s) => io.err(s.trimEnd()) });
+
+  program
+    .command('encode')
+    .description('Encode WSPR messages into 162 channel symbols (one JSON line per message).')
+    .argument('<message...>', 'messages such as "K1ABC FN42 37", "PJ4/K1ABC 37", "<PJ4/K1ABC> FK52UD 37"; quote each one')
+    .action((args: string[]) => {
+      // unquoted words (encode K1ABC FN42 37) form one message
+      const messages = args.some((a) => /\s/.test(a)) ? args : [args.join(' ')];
+      for (const text of messages) {
+        const r = encodeMessage(text);
+        if (!r.ok) {
+          fail(`'${text}': ${r.reason}`);
+          continue;
+        }
+        if (r.power.rounded) io.err(`faintline: power ${r.power.requestedDbm} dBm is not a WSPR level; sending ${r.power.reportedDbm} dBm.`);
+        emit({ message: r.message, type: r.type, symbols: Array.from(r.symbols), power: r.power });
+      }
+    });
+
+  program
+    .command('messages')
+    .description('The WSPR messages a station sends in turn for its callsign, locator and power.')
+    .requiredOption('--callsign <callsign>', 'your callsign, plain (K1ABC) or with one prefix or suffix (PJ4/K1ABC, K1ABC/P)')
+    .requiredOption('--locator <locator>', '4- or 6-character Maidenhead locator')
+    .requiredOption('--power <dBm>', 'transmit power in dBm, 0 to 60')
+    .action((opts: { callsign: string; locator: string; power: string }) => {
+      const r = planMessages({ callsign: opts.callsign, locator: opts.locator, powerDbm: opts.power });
+      if (!r.ok) return fail(r);
+      emit({ messages: r.texts, types: r.types, callsign: r.callsign, locator: r.locator, power: r.power });
+    });
+
+  program
+    .command('locator')
+    .description('Locator → centre latitude/longitude, or --lat/--lon → locator.')
+    .argument('[locator]', 'Maidenhead locator of 2, 4, 6 or 8 characters')
+    .option('--lat <degrees>', 'latitude, north positive (write --lat=-34.9 for south)', number('Latitude'))
+    .option('--lon <degrees>', 'longitude, east positive (write --lon=-56.2 for west)', number('Longitude'))
+    .option('--precision <characters>', '2, 4, 6 or 8', number('Precision'), 6)
+    .action((locator: string | undefined, opts: { lat?: number; lon?: number; precision: number }) => {
+      if (locator !== undefined) {
+        const r = locatorToLatLon(locator);
+        return r.ok ? emit({ locator: r.locator, lat: r.lat, lon: r.lon }) : fail(r);
+      }
+      if (opts.lat === undefined || opts.lon === undefined) return fail('Give a locator, or both --lat and --lon.');
+      const r = latLonToLocator({ lat: opts.lat, lon: opts.lon }, opts.precision);
+      return r.ok ? emit({ locator: r.locator }) : fail(r);
+    });
+
+  program
+    .command('path')
+    .description('Great-circle distance (km) and initial bearing (degrees true) between two locators, on WGS84.')
+    .argument('<from>', 'locator of the transmitter')
+    .argument('<to>', 'locator of the receiver')
+    .action((from: string, to: string) => {
+      const r = pathBetweenLocators(from, to);
+      return r.ok ? emit({ distanceKm: r.distanceKm, bearingDeg: r.bearingDeg }) : fail(r);
+    });
+
+  program
+    .command('tones')
+    .description('The four tones on a band, corrected for calibration, and whether they sit inside the 200 Hz window.')
+    .requiredOption('--band <band>', `band: ${bandsFor('itu1').map((b) => b.id).join(', ')}`)
+    .option('--offset <Hz>', 'audio offset of tone 0 above the dial frequency', number('Offset'), 1500)
+    .option('--ppm <ppm>', 'reference error in ppm (positive = runs fast)', number('ppm'), 0)
+    .option('--band-offset <Hz>', 'extra measured offset on this band, in Hz', number('Band offset'), 0)
+    .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
+    .action((opts: { band: string; offset: number; ppm: number; bandOffset: number; region: LicenceRegion }) => {
+      const b = bandFor(opts.band, opts.region);
+      if (!b.ok) return fail(b);
+      const cmd = commandForBand(b.band.dialHz, opts.offset, { referenceErrorPpm: opts.ppm, bandOffsetHz: opts.bandOffset });
+      emit({ band: b.band.id, region: opts.region, ...cmd });
+      if (!cmd.window.inside) io.err(`faintline: warning: a tone falls outside ${cmd.window.windowLowHz}–${cmd.window.windowHighHz} Hz; choose an offset between 1400 and 1595 Hz.`);
+    });
+
+  program
+    .command('calibrate')
+    .description('From one measurement (commanded vs observed), the reference error and the predicted offset on every band.')
+    .requiredOption('--commanded <Hz>', 'frequency the generator was told to make', number('Commanded frequency'))
+    .requiredOption('--observed <Hz>', 'frequency actually measured', number('Observed frequency'))
+    .option('--offset <Hz>', 'audio offset used on each band', number('Offset'), 1500)
+    .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
+    .action((opts: { commanded: number; observed: number; offset: number; region: LicenceRegion }) => {
+      const bands = bandsFor(opts.region);
+      const r = predictOffsets(
+        { commandedHz: opts.commanded, observedHz: opts.observed },
+        bands.map((b) => ({ id: b.id, frequencyHz: b.dialHz + opts.offset })),
+      );
+      return r.ok ? emit(plain(r)) : fail(r);
+    });
+
+  program
+    .command('synth')
+    .description('Divider settings and register bytes (Silicon Labs AN619 layout) for the four tones on a band, or for given frequencies.')
+    .option('--band <band>', 'band whose four tones to plan')
+    .option('--offset <Hz>', 'audio offset of tone 0', number('Offset'), 1500)
+    .option('--frequency <Hz...>', 'plan these frequencies instead of a band')
+    .option('--reference <Hz>', 'reference crystal or TCXO, usually 25000000 or 27000000', number('Reference'), 25e6)
+    .option('--ppm <ppm>', 'reference error in ppm; the plan compensates for it', number('ppm'), 0)
+    .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
+    .action((opts: { band?: string; offset: number; frequency?: string[]; reference: number; ppm: number; region: LicenceRegion }) => {
+      let targetsHz: number[];
+      if (opts.frequency) {
+        targetsHz = opts.frequency.map(Number);
+        if (targetsHz.some((f) => !Number.isFinite(f))) return fail('Each --frequency must be a number of Hz.');
+      } else if (opts.band) {
+        const b = bandFor(opts.band, opts.region);
+        if (!b.ok) return fail(b);
+        targetsHz = toneFrequenciesHz(b.band.dialHz + opts.offset);
+      } else {
+        return fail('Give --band or --frequency.');
+      }
+      const r = planSynth({ referenceHz: opts.reference, referenceErrorPpm: opts.ppm, targetsHz });
+      return r.ok ? emit(plain(r)) : fail(r);
+    });
+
+  program
+    .command('power')
+    .description('Output power of generator → attenuator → amplifier → filter, and the WSPR level to report (with the working).')
+    .option('--generator <dBm>', 'generator output level', number('Generator level'))
+    .option('--mw <mW>', 'a power in mW to convert instead of a chain', number('Power in mW'))
+    .option('--attenuator <dB>', 'attenuator', number('Attenuator'), 0)
+    .option('--gain <dB>', 'amplifier gain', number('Gain'))
+    .option('--saturation <dBm>', "amplifier's saturated output", number('Saturation'))
+    .option('--filter-loss <dB>', 'low-pass filter insertion loss', number('Filter loss'), 0)
+    .action((opts: { generator?: number; mw?: number; attenuator: number; gain?: number; saturation?: number; filterLoss: number }) => {
+      if (opts.mw !== undefined) {
+        if (!(opts.mw > 0)) return fail('Power in mW must be positive.');
+        const dbm = 10 * Math.log10(opts.mw);
+        return emit({ powerMw: opts.mw, powerDbm: dbm, report: chainOutput({ generatorDbm: dbm }).report });
+      }
+      if (opts.generator === undefined) return fail('Give --generator DBM (or --mw MW).');
+      const r = chainOutput({
+        generatorDbm: opts.generator,
+        attenuatorDb: opts.attenuator,
+        amplifierGainDb: opts.gain,
+        amplifierSaturationDbm: opts.saturation,
+        filterLossDb: opts.filterLoss,
+      });
+      emit({ ...r, generatorMw: dbmToMw(opts.generator) });
+    });
+
+  program
+    .command('filter')
+    .description('Harmonics of the square-wave drive, the attenuation needed, and a low-pass filter design with toroid turns.')
+    .option('--band <band>', 'band to filter for (its dial frequency is the fundamental)')
+    .option('--frequency <Hz>', 'fundamental frequency instead of a band', number('Frequency'))
+    .option('--cutoff <Hz>', 'filter cutoff; default 1.15 × the fundamental (common practice, no source)', number('Cutoff'))
+    .option('--kind <kind>', `filter kind: ${FILTER_KINDS.join(', ')}`, 'chebyshev-0.5')
+    .option('--order <n>', '3, 5 or 7', number('Order'), 5)
+    .option('--core <core>', 'iron-powder toroid for the inductors, e.g. T-50-2', 'T-50-2')
+    .option('--duty <fraction>', 'duty cycle of the drive, 0 to 1', number('Duty cycle'), 0.5)
+    .option('--limit <dB>', 'spurious limit below the fundamental; default 43 dB under 30 MHz, 60 dB above (47 CFR 97.307)', number('Limit'))
+    .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
+    .action((opts: { band?: string; frequency?: number; cutoff?: number; kind: string; order: number; core: string; duty: number; limit?: number; region: LicenceRegion }) => {
+      let fundamentalHz: number;
+      if (opts.frequency !== undefined) fundamentalHz = opts.frequency;
+      else if (opts.band) {
+        const b = bandFor(opts.band, opts.region);
+        if (!b.ok) return fail(b);
+        fundamentalHz = b.band.dialHz + 1500;
+      } else return fail('Give --band or --frequency.');
+      if (!(opts.duty > 0 && opts.duty < 1)) return fail('Duty cycle must be between 0 and 1.');
+      const harmonics = requiredFilterAttenuation(fundamentalHz, { dutyCycle: opts.duty, limitDb: opts.limit });
+      const r = designLowPass({
+        kind: opts.kind as FilterKind,
+        order: opts.order,
+        cutoffHz: opts.cutoff ?? fundamentalHz * 1.15,
+        core: opts.core,
+        atFrequenciesHz: harmonics.map((h) => h.frequencyHz),
+      });
+      if (!r.ok) return fail(r);
+      const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
+      emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
+      if (!meets) io.err('faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.');
+    });
+
+  return program;
+}
+
+export async function runCli(argv: string[], io: CliIo = defaultIo): Promise<void> {
+  const program = buildProgram(io);
+  program.exitOverride();
+  try {
+    await program.parseAsync(argv);
+  } catch (error) {
+    const code = (error as { exitCode?: number }).exitCode;
+    // --help and --version end through here with exit code 0
+    io.setExitCode(typeof code === 'number' ? code : 1);
+  }
+}
