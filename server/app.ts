@@ -9,6 +9,8 @@ import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
 import { healthRouter } from './features/health/health.router';
 import { stationsRouter } from './features/stations/stations.router';
+import { unitsRouter } from './features/units/units.router';
+import { createStorage, type FileStorage } from './storage';
 import type { Logger } from './lib/logger';
 import type { FakeSmtp } from './mail/fake-smtp';
 import { inboxRouter } from './mail/inbox.router';
@@ -24,6 +26,8 @@ export type AppDeps = {
   logger: Logger;
   /** The in-process fake SMTP server, when there is one: its inbox is served at /dev/inbox. */
   fakeSmtp?: FakeSmtp;
+  /** Where uploads go; defaults to the driver named in the config. */
+  storage?: FileStorage;
 };
 
 const CSP = {
@@ -45,7 +49,7 @@ const CSP = {
 };
 
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
-export function createApp({ config, sequelize, mailer, logger, fakeSmtp }: AppDeps) {
+export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
   const app = express();
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
@@ -73,7 +77,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp }: AppDe
   );
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
-  api.use('/stations', stationsRouter());
+  api.use('/stations', stationsRouter({ sequelize }));
+  api.use('/units', unitsRouter({ storage, logger }));
   api.use('/clubs', clubsRouter());
   api.use(apiNotFound);
   app.use('/api', api);

@@ -21,6 +21,13 @@ const configSchema = z.object({
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
   SIGN_IN_ATTEMPTS: z.coerce.number().int().min(1).default(10),
   JSON_LIMIT: z.string().default('100kb'),
+  STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
+  UPLOAD_DIR: z.string().default('.data/uploads'),
+  S3_ENDPOINT: z.string().default(''),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().default('faintline-uploads'),
+  S3_ACCESS_KEY_ID: z.string().default(''),
+  S3_SECRET_ACCESS_KEY: z.string().default(''),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),
 });
 

@@ -20,7 +20,7 @@ function measure(name: string, unit: string, minSeconds: number, batch: () => nu
   return { name, operations, seconds, perSecond: operations / seconds, unit };
 }
 
-const MESSAGES = ['K1ABC FN42 37', 'PJ4/K1ABC 37', '<PJ4/K1ABC> FK52UD 37', 'K1ABC/P 23', '<K1ABC> FN42AB 10', 'W8ZLW AA00 3'];
+const MESSAGES = ['K1ABC FN42 37', 'PJ4/K1ABC 37', '<PJ4/K1ABC> FK52UD 37', 'K1ABC/P 23', '<K1ABC> FN42AB 10', 'Q1IMW IO91 23'];
 
 /** Full encodings: text → parse → pack → 162 symbols. */
 export function benchEncoder(minSeconds = 1): BenchResult {

@@ -1,4 +1,4 @@
-/** Entry point of the `faintline` command (bin/faintline.js loads it through tsx). */
+/** Entry point of the `faintline` command (server/cli/bin.js loads it through tsx). */
 import { runCli } from './program';
 
 void runCli(process.argv);

@@ -2,7 +2,10 @@ import { Sequelize } from 'sequelize';
 import { ClubModel } from './models/club.model';
 import { MembershipModel } from './models/membership.model';
 import { PasswordResetModel } from './models/password-reset.model';
+import { StationBandModel } from './models/station-band.model';
 import { StationModel } from './models/station.model';
+import { UnitPhotoModel } from './models/unit-photo.model';
+import { UnitModel } from './models/unit.model';
 import { UserModel } from './models/user.model';
 
 /** One Sequelize instance per process; models and associations are set up here only. */
@@ -20,6 +23,9 @@ export function createSequelize(databaseUrl: string): Sequelize {
   MembershipModel.initModel(sequelize);
   StationModel.initModel(sequelize);
   PasswordResetModel.initModel(sequelize);
+  UnitModel.initModel(sequelize);
+  UnitPhotoModel.initModel(sequelize);
+  StationBandModel.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });
@@ -27,5 +33,9 @@ export function createSequelize(databaseUrl: string): Sequelize {
   MembershipModel.belongsTo(UserModel, { foreignKey: 'userId', as: 'user' });
   ClubModel.hasMany(MembershipModel, { foreignKey: 'clubId', as: 'memberships' });
   MembershipModel.belongsTo(ClubModel, { foreignKey: 'clubId', as: 'club' });
+  UserModel.hasMany(UnitModel, { foreignKey: 'ownerId', as: 'units' });
+  UnitModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });
+  UnitModel.hasMany(UnitPhotoModel, { foreignKey: 'unitId', as: 'photos' });
+  StationModel.hasMany(StationBandModel, { foreignKey: 'stationId', as: 'bands' });
   return sequelize;
 }

@@ -1,3 +1,4 @@
 export * from './fields';
 export * from './auth';
+export * from './unit';
 export * from './station';

@@ -2,7 +2,7 @@ import { execFile } from 'node:child_process';
 import path from 'node:path';
 import { workedExample } from './fixtures/wspr-vectors';
 
-const BIN = path.join(__dirname, '..', '..', 'bin', 'faintline.js');
+const BIN = path.join(__dirname, '..', '..', 'server', 'cli', 'bin.js');
 
 type Run = { code: number; stdout: string; stderr: string };
 
@@ -42,7 +42,7 @@ describe('faintline command', () => {
   });
 
   it('when converting between locator and position, prints both ways', async () => {
-    // Tyson (N5JTY), QST January 1989: Munich 48.14666 N, 11.60833 E is JN58td
+    // E. T. Tyson, QST January 1989: Munich 48.14666 N, 11.60833 E is JN58td
     const [to, from] = await Promise.all([
       run('locator', '--lat=48.14666', '--lon=11.60833', '--precision=6'),
       run('locator', 'JN58td'),

@@ -1,7 +1,7 @@
 import { latLonToLocator, locatorToLatLon, validateLocator } from '@/shared/domain/locator';
 
-// Positions and locators: the first four from E. T. Tyson (N5JTY), "Conversion Between Geodetic and
-// Grid Locator Systems", QST January 1989; W1AW and K6WRU from W. Underwood (K6WRU)'s published
+// Positions and locators: the first four from E. T. Tyson, "Conversion Between Geodetic and
+// Grid Locator Systems", QST January 1989; Newington and Palo Alto from W. Underwood's published
 // converter self-test (ham.stackexchange answer "How can one convert from lat/long to grid square").
 describe('latLonToLocator', () => {
   it.each([

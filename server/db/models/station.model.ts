@@ -7,6 +7,11 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
   declare callsign: string;
   declare locator: string;
   declare notes: string;
+  declare unitId: number | null;
+  declare region: string;
+  declare audioOffsetHz: number;
+  declare transmitEnabled: boolean;
+  declare referenceErrorPpm: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -19,6 +24,11 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
         callsign: { type: DataTypes.STRING(12), allowNull: false },
         locator: { type: DataTypes.STRING(8), allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false },
+        unitId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        region: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'itu1' },
+        audioOffsetHz: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1500 },
+        transmitEnabled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        referenceErrorPpm: { type: DataTypes.DOUBLE, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

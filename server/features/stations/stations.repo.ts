@@ -1,9 +1,21 @@
-import { Op, type WhereOptions } from 'sequelize';
-import type { Station, StationInput, StationPatch } from '@/shared/schemas';
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import type { BandId, LicenceRegion } from '@/shared/domain/bands';
+import type { Station, StationBand, StationPatch } from '@/shared/schemas';
+import { StationBandModel } from '../../db/models/station-band.model';
 import { StationModel } from '../../db/models/station.model';
 import { UserModel } from '../../db/models/user.model';
 
-type Row = StationModel & { owner?: UserModel };
+type Row = StationModel & { owner?: UserModel; bands?: StationBandModel[] };
+
+function toBand(row: StationBandModel): StationBand {
+  return {
+    bandId: row.bandId as BandId,
+    enabled: row.enabled,
+    calibrationOffsetHz: row.calibrationOffsetHz,
+    calibrationSource: row.calibrationSource,
+    calibratedAt: row.calibratedAt ? row.calibratedAt.toISOString() : null,
+  };
+}
 
 function toStation(row: Row): Station {
   return {
@@ -14,36 +26,74 @@ function toStation(row: Row): Station {
     callsign: row.callsign,
     locator: row.locator,
     notes: row.notes,
+    unitId: row.unitId,
+    region: row.region as LicenceRegion,
+    audioOffsetHz: row.audioOffsetHz,
+    transmitEnabled: row.transmitEnabled,
+    referenceErrorPpm: row.referenceErrorPpm,
+    bands: (row.bands ?? []).map(toBand).sort((a, b) => a.bandId.localeCompare(b.bandId)),
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };
 }
 
-const withOwner = { include: [{ model: UserModel, as: 'owner', attributes: ['id', 'displayName'] }] };
+const include = [
+  { model: UserModel, as: 'owner', attributes: ['id', 'displayName'] },
+  { model: StationBandModel, as: 'bands' },
+];
 
 async function findAllWhere(where: WhereOptions<StationModel>) {
-  const rows = await StationModel.findAll({ where, ...withOwner, order: [['name', 'ASC'], ['id', 'ASC']] });
+  const rows = await StationModel.findAll({ where, include, order: [['name', 'ASC'], ['id', 'ASC']] });
   return rows.map((row) => toStation(row as Row));
 }
 
 export const findByOwner = (ownerId: number) => findAllWhere({ ownerId });
 export const findByOwners = (ownerIds: number[]) => findAllWhere({ ownerId: { [Op.in]: ownerIds } });
+export const findByUnit = (unitId: number) => findAllWhere({ unitId });
 
-export async function findById(id: number) {
-  const row = await StationModel.findByPk(id, withOwner);
+export async function findById(id: number, transaction?: Transaction) {
+  const row = await StationModel.findByPk(id, { include, transaction });
   return row ? toStation(row as Row) : null;
 }
 
-export async function insert(ownerId: number, input: Required<StationInput>) {
-  const row = await StationModel.create({ ...input, ownerId });
+export type StationValues = {
+  name: string;
+  callsign: string;
+  locator: string;
+  notes: string;
+  unitId: number | null;
+  region: LicenceRegion;
+  audioOffsetHz: number;
+  transmitEnabled: boolean;
+};
+
+export async function insert(ownerId: number, values: StationValues) {
+  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null });
   return (await findById(row.id))!;
 }
 
-export async function update(id: number, patch: StationPatch) {
-  await StationModel.update(patch, { where: { id } });
-  return (await findById(id))!;
+export async function update(id: number, patch: StationPatch, transaction?: Transaction) {
+  await StationModel.update(patch as Partial<StationValues>, { where: { id }, transaction });
+  return (await findById(id, transaction))!;
 }
 
 export async function remove(id: number) {
   await StationModel.destroy({ where: { id } });
+}
+
+export async function upsertBand(
+  stationId: number,
+  bandId: BandId,
+  values: Partial<Pick<StationBandModel, 'enabled' | 'calibrationOffsetHz' | 'calibrationSource' | 'calibratedAt'>>,
+  transaction?: Transaction,
+) {
+  const existing = await StationBandModel.findOne({ where: { stationId, bandId }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+  if (existing) await existing.update(values, { transaction });
+  else await StationBandModel.create({ stationId, bandId, enabled: false, calibrationOffsetHz: null, calibrationSource: null, calibratedAt: null, ...values }, { transaction });
+  // Changing a band touches the station, so anything keyed on its updatedAt sees the change.
+  await StationModel.update({ updatedAt: new Date() }, { where: { id: stationId }, transaction, silent: false });
+}
+
+export async function setReferenceError(id: number, referenceErrorPpm: number | null, transaction?: Transaction) {
+  await StationModel.update({ referenceErrorPpm }, { where: { id }, transaction });
 }

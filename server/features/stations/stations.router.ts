@@ -1,12 +1,15 @@
 import { Router } from 'express';
-import { stationInput, stationPatch } from '@/shared/schemas';
+import type { Sequelize } from 'sequelize';
+import { calibrationInput, measurementInput, stationBandInput, stationInput, stationPatch, bandIdField } from '@/shared/schemas';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
+import { AppError } from '../../lib/app-error';
 import * as stations from './stations.service';
 
-export function stationsRouter() {
+export function stationsRouter({ sequelize }: { sequelize: Sequelize }) {
   const router = Router();
   router.use(requireSignedIn);
+  const id = (value: unknown) => parseId(value, 'Station');
 
   router.get('/', async (req, res) => {
     res.json(await stations.listFor(currentUser(req)));
@@ -16,15 +19,35 @@ export function stationsRouter() {
     res.status(201).json(await stations.create(currentUser(req), input));
   });
   router.get('/:id', async (req, res) => {
-    res.json(await stations.getFor(currentUser(req), parseId(req.params.id, 'Station')));
+    res.json(await stations.getFor(currentUser(req), id(req.params.id)));
   });
   router.patch('/:id', async (req, res) => {
     const patch = stationPatch.parse(req.body);
-    res.json(await stations.update(currentUser(req), parseId(req.params.id, 'Station'), patch));
+    res.json(await stations.update(currentUser(req), id(req.params.id), patch));
   });
   router.delete('/:id', async (req, res) => {
-    await stations.remove(currentUser(req), parseId(req.params.id, 'Station'));
+    await stations.remove(currentUser(req), id(req.params.id));
     res.status(204).end();
+  });
+
+  router.put('/:id/bands/:bandId', async (req, res) => {
+    const bandId = bandIdField.safeParse(req.params.bandId);
+    if (!bandId.success) throw new AppError('not-found', `There is no band ${req.params.bandId}`);
+    res.json(await stations.setBand(sequelize, currentUser(req), id(req.params.id), bandId.data, stationBandInput.parse(req.body)));
+  });
+  router.post('/:id/calibration', async (req, res) => {
+    res.json(await stations.saveCalibration(sequelize, currentUser(req), id(req.params.id), calibrationInput.parse(req.body)));
+  });
+  router.post('/:id/calibration/proposal', async (req, res) => {
+    res.json(await stations.proposeCalibration(currentUser(req), id(req.params.id), measurementInput.parse(req.body)));
+  });
+  router.get('/:id/config', async (req, res) => {
+    const config = await stations.configFor(currentUser(req), id(req.params.id));
+    if (req.query.download !== undefined) {
+      const name = `faintline-${config.station.callsign.replace(/\W+/g, '-')}-station-${config.station.id}.json`;
+      res.setHeader('Content-Disposition', `attachment; filename="${name}"`);
+    }
+    res.json(config);
   });
   return router;
 }

@@ -1,7 +1,12 @@
+import type { Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
-import type { Station, StationInput, StationPatch } from '@/shared/schemas';
+import { bandFor, type BandId } from '@/shared/domain/bands';
+import { predictOffsets } from '@/shared/domain/calibration';
+import { buildStationConfig, filterCoverage } from '@/shared/domain/workshop';
+import type { CalibrationInput, MeasurementInput, Station, StationBandInput, StationInput, StationPatch, Unit } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import { adminSharesClubWith } from '../clubs/clubs.repo';
+import * as unitsRepo from '../units/units.repo';
 import * as repo from './stations.repo';
 
 const notFound = (id: number) => new AppError('not-found', `Station ${id} does not exist`);
@@ -19,7 +24,7 @@ export async function getFor(user: SessionUser, id: number): Promise<Station> {
 }
 
 /** Only the owner changes a station; an admin who can read it is told why not. */
-async function getOwnedBy(user: SessionUser, id: number) {
+export async function getOwnedBy(user: SessionUser, id: number) {
   const station = await getFor(user, id);
   if (station.ownerId !== user.id) {
     throw new AppError('forbidden', `Station ${id} belongs to ${station.ownerName}; only its owner can change it`);
@@ -27,14 +32,107 @@ async function getOwnedBy(user: SessionUser, id: number) {
   return station;
 }
 
-export const create = (user: SessionUser, input: Required<StationInput>) => repo.insert(user.id, input);
+async function ownUnit(user: SessionUser, unitId: number | null | undefined): Promise<Unit | null> {
+  if (unitId === null || unitId === undefined) return null;
+  const unit = await unitsRepo.findById(unitId);
+  if (!unit || unit.ownerId !== user.id) {
+    throw new AppError('bad-request', `Unit ${unitId} is not one of your units`, { unitId: 'Choose one of your own units' });
+  }
+  return unit;
+}
+
+export async function create(user: SessionUser, input: Required<StationInput>) {
+  await ownUnit(user, input.unitId);
+  return repo.insert(user.id, input as repo.StationValues);
+}
 
 export async function update(user: SessionUser, id: number, patch: StationPatch) {
   await getOwnedBy(user, id);
+  if (patch.unitId !== undefined) await ownUnit(user, patch.unitId);
   return repo.update(id, patch);
 }
 
 export async function remove(user: SessionUser, id: number) {
   await getOwnedBy(user, id);
   await repo.remove(id);
+}
+
+async function unitOf(station: Station) {
+  return station.unitId === null ? null : unitsRepo.findById(station.unitId);
+}
+
+function bandOrRefuse(bandId: BandId, station: Station) {
+  const found = bandFor(bandId, station.region);
+  if (!found.ok) throw new AppError('bad-request', found.reason, { bandId: found.reason });
+  return found.band;
+}
+
+/** Enables or disables a band; a band no installed filter covers cannot be enabled. */
+export async function setBand(sequelize: Sequelize, user: SessionUser, id: number, bandId: BandId, input: StationBandInput) {
+  const station = await getOwnedBy(user, id);
+  const band = bandOrRefuse(bandId, station);
+  if (input.enabled) {
+    const unit = await unitOf(station);
+    if (!unit) {
+      throw new AppError('bad-request', `Assign a unit to this station before enabling ${band.name}`, { enabled: 'Assign a unit first: its filters decide which bands may transmit' });
+    }
+    const coverage = filterCoverage(unit.filters, band);
+    if (!coverage.covered) throw new AppError('bad-request', coverage.reason, { enabled: coverage.reason });
+  }
+  await sequelize.transaction(async (transaction) => {
+    const values: Parameters<typeof repo.upsertBand>[2] = { enabled: input.enabled };
+    if (input.calibrationOffsetHz !== undefined) {
+      values.calibrationOffsetHz = input.calibrationOffsetHz;
+      values.calibrationSource = input.calibrationOffsetHz === null ? null : 'typed';
+      values.calibratedAt = input.calibrationOffsetHz === null ? null : new Date();
+    }
+    await repo.upsertBand(id, bandId, values, transaction);
+  });
+  return (await repo.findById(id))!;
+}
+
+/** Saves typed offsets, or the accepted proposals of a guided measurement, in one transaction. */
+export async function saveCalibration(sequelize: Sequelize, user: SessionUser, id: number, input: CalibrationInput) {
+  const station = await getOwnedBy(user, id);
+  for (const offset of input.offsets) bandOrRefuse(offset.bandId, station);
+  const now = new Date();
+  await sequelize.transaction(async (transaction) => {
+    for (const offset of input.offsets) {
+      await repo.upsertBand(id, offset.bandId, { calibrationOffsetHz: offset.calibrationOffsetHz, calibrationSource: input.source, calibratedAt: now }, transaction);
+    }
+    if (input.source === 'measured' && input.referenceErrorPpm !== undefined) {
+      await repo.setReferenceError(id, input.referenceErrorPpm, transaction);
+    }
+  });
+  return (await repo.findById(id))!;
+}
+
+/** From one measurement, the reference error and a proposed offset for every enabled band (nothing is saved). */
+export async function proposeCalibration(user: SessionUser, id: number, input: MeasurementInput) {
+  const station = await getOwnedBy(user, id);
+  bandOrRefuse(input.bandId, station);
+  const targets = station.bands
+    .filter((b) => b.enabled || b.bandId === input.bandId)
+    .map((b) => bandOrRefuse(b.bandId, station))
+    .map((band) => ({ id: band.id, frequencyHz: band.dialHz + station.audioOffsetHz }));
+  if (!targets.some((t) => t.id === input.bandId)) {
+    const band = bandOrRefuse(input.bandId, station);
+    targets.push({ id: band.id, frequencyHz: band.dialHz + station.audioOffsetHz });
+  }
+  const result = predictOffsets({ commandedHz: input.commandedHz, observedHz: input.observedHz }, targets);
+  if (!result.ok) throw new AppError('bad-request', result.reason, { observedHz: result.reason });
+  if (Math.abs(result.referenceErrorPpm) > 1000) {
+    const reason = 'The two frequencies differ by more than 1000 ppm: check that both are in Hz and on the same band';
+    throw new AppError('bad-request', reason, { observedHz: reason });
+  }
+  return {
+    referenceErrorPpm: result.referenceErrorPpm,
+    errorHz: input.observedHz - input.commandedHz,
+    offsets: result.offsets.map((o) => ({ bandId: o.id as BandId, frequencyHz: o.frequencyHz, calibrationOffsetHz: Number(o.offsetHz.toFixed(2)) })),
+  };
+}
+
+export async function configFor(user: SessionUser, id: number, now = new Date()) {
+  const station = await getFor(user, id);
+  return buildStationConfig(station, await unitOf(station), now);
 }

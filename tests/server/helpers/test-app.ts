@@ -61,7 +61,7 @@ export async function startTestServer(overrides: Record<string, string> = {}): P
   };
 }
 
-const TABLES = ['Sessions', 'password_resets', 'stations', 'club_memberships', 'clubs', 'users'];
+const TABLES = ['Sessions', 'password_resets', 'station_bands', 'unit_photos', 'stations', 'units', 'club_memberships', 'clubs', 'users'];
 
 export async function truncateAll(sequelize: Sequelize) {
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
@@ -99,3 +99,25 @@ export async function makeClub(name: string, adminId: number, memberIds: number[
   for (const userId of memberIds) await MembershipModel.create({ clubId: club.id, userId, role: 'member' });
   return club.id;
 }
+
+/** A unit as the workshop e2e registers it: 25 MHz crystal, 20 m and 40 m filters. */
+export const validUnit = {
+  name: 'Bench board',
+  serialLabel: 'BB-1',
+  controller: 'Wi-Fi microcontroller',
+  timeSource: 'network',
+  generatorKind: 'pll',
+  referenceHz: 25e6,
+  tolerancePpm: 10,
+  tempCoPpmPerC: 0.5,
+  disciplined: false,
+  generatorLevelDbm: 10,
+  attenuatorDb: 0,
+  amplifier: null,
+  filters: [
+    { bands: ['20m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 15.6e6 },
+    { bands: ['40m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 7.8e6 },
+  ],
+  antenna: { kind: 'dipole', bands: ['20m', '40m'], gainDbi: 2.15 },
+  notes: '',
+};

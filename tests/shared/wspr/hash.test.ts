@@ -14,7 +14,7 @@ describe('hashLittle', () => {
 });
 
 describe('callsignHash', () => {
-  // The hash fields inside the WSJT-X wsprd unpack-test vectors (see fixtures/wspr-vectors.ts):
+  // The hash fields inside the reference decoder's unpack-test vectors (see fixtures/wspr-vectors.ts):
   // M of "<K1ABC> FN42AA 33" is 834718 = 128·6521 + 30, of "<PJ4/K1ABC> FK52UD 37" 2526106 = 128·19735 + 26
   it.each([
     ['K1ABC', 6521],

@@ -2,4 +2,4 @@
 // Launcher for the faintline command: loads the TypeScript entry through tsx, no build step.
 'use strict';
 require('tsx/cjs');
-require('../server/cli/faintline.ts');
+require('./faintline.ts');

@@ -1,0 +1,64 @@
+import { randomUUID } from 'node:crypto';
+import sharp from 'sharp';
+import type { SessionUser } from '@/shared/api/contracts';
+import { AppError } from '../../lib/app-error';
+import type { Logger } from '../../lib/logger';
+import type { FileStorage } from '../../storage';
+import * as repo from './units.repo';
+import { getFor, getOwnedBy } from './units.service';
+
+const EXTENSIONS: Record<string, string> = { jpeg: 'jpg', png: 'png', webp: 'webp' };
+
+/** Re-encodes the photo (which drops EXIF data such as a GPS position) and makes a thumbnail. */
+async function process(buffer: Buffer) {
+  let format: string | undefined;
+  try {
+    format = (await sharp(buffer).metadata()).format;
+  } catch {
+    format = undefined;
+  }
+  if (!format || !EXTENSIONS[format]) {
+    throw new AppError('bad-request', 'This file is not a JPEG, PNG or WebP image', { photo: 'Choose a JPEG, PNG or WebP photo' });
+  }
+  const base = sharp(buffer).rotate().resize({ width: 2000, height: 2000, fit: 'inside', withoutEnlargement: true });
+  const main = await (format === 'png' ? base.png() : format === 'webp' ? base.webp({ quality: 85 }) : base.jpeg({ quality: 85 })).toBuffer();
+  const thumb = await sharp(buffer).rotate().resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
+  return { main, thumb, contentType: `image/${format}`, extension: EXTENSIONS[format] };
+}
+
+export async function addPhoto(storage: FileStorage, user: SessionUser, unitId: number, buffer: Buffer) {
+  await getOwnedBy(user, unitId);
+  const { main, thumb, contentType, extension } = await process(buffer);
+  const name = randomUUID();
+  const storageKey = `units/${unitId}/${name}.${extension}`;
+  const thumbKey = `units/${unitId}/${name}-thumb.webp`;
+  await storage.put(storageKey, main, contentType);
+  await storage.put(thumbKey, thumb, 'image/webp');
+  return repo.insertPhoto({ unitId, storageKey, thumbKey, contentType, bytes: main.length });
+}
+
+export async function readPhoto(storage: FileStorage, user: SessionUser, unitId: number, photoId: number, which: 'main' | 'thumb') {
+  await getFor(user, unitId);
+  const photo = await repo.findPhoto(unitId, photoId);
+  if (!photo) throw new AppError('not-found', `Photo ${photoId} does not exist`);
+  const stored = await storage.get(which === 'thumb' ? photo.thumbKey : photo.storageKey);
+  if (!stored) throw new AppError('not-found', `Photo ${photoId} is missing from storage`);
+  return stored;
+}
+
+export async function deletePhoto(storage: FileStorage, user: SessionUser, unitId: number, photoId: number) {
+  await getOwnedBy(user, unitId);
+  const photo = await repo.findPhoto(unitId, photoId);
+  if (!photo) throw new AppError('not-found', `Photo ${photoId} does not exist`);
+  await photo.destroy();
+  await removeStored(storage, [photo]);
+}
+
+/** Deletes stored files after their rows are gone; a storage failure is logged, not returned. */
+export async function removeStored(storage: FileStorage, photos: { storageKey: string; thumbKey: string }[], logger?: Logger) {
+  for (const photo of photos) {
+    await Promise.all([storage.delete(photo.storageKey), storage.delete(photo.thumbKey)]).catch((error) =>
+      logger?.warn({ err: error }, 'could not delete a stored photo'),
+    );
+  }
+}

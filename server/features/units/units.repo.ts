@@ -1,0 +1,64 @@
+import type { Transaction } from 'sequelize';
+import { unitInput, type Unit, type UnitPhoto, type UnitValues } from '@/shared/schemas';
+import { UnitPhotoModel } from '../../db/models/unit-photo.model';
+import { UnitModel } from '../../db/models/unit.model';
+import { UserModel } from '../../db/models/user.model';
+
+type Row = UnitModel & { owner?: UserModel; photos?: UnitPhotoModel[] };
+
+export function toPhoto(row: UnitPhotoModel): UnitPhoto {
+  const base = `/api/units/${row.unitId}/photos/${row.id}`;
+  return { id: row.id, url: base, thumbUrl: `${base}/thumb`, contentType: row.contentType, bytes: row.bytes, createdAt: row.createdAt.toISOString() };
+}
+
+function toUnit(row: Row): Unit {
+  // Parsing fills defaults for fields added after the row was written.
+  const spec = unitInput.parse({ ...JSON.parse(row.spec), name: row.name });
+  return {
+    ...spec,
+    id: row.id,
+    ownerId: row.ownerId,
+    ownerName: row.owner?.displayName ?? '',
+    photos: (row.photos ?? []).sort((a, b) => a.id - b.id).map(toPhoto),
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+const include = [
+  { model: UserModel, as: 'owner', attributes: ['id', 'displayName'] },
+  { model: UnitPhotoModel, as: 'photos' },
+];
+
+export async function findByOwner(ownerId: number) {
+  const rows = await UnitModel.findAll({ where: { ownerId }, include, order: [['name', 'ASC'], ['id', 'ASC']] });
+  return rows.map((row) => toUnit(row as Row));
+}
+
+export async function findById(id: number, transaction?: Transaction) {
+  const row = await UnitModel.findByPk(id, { include, transaction });
+  return row ? toUnit(row as Row) : null;
+}
+
+const specOf = ({ name: _name, ...spec }: UnitValues) => JSON.stringify(spec);
+
+export async function insert(ownerId: number, values: UnitValues) {
+  const row = await UnitModel.create({ ownerId, name: values.name, spec: specOf(values) });
+  return (await findById(row.id))!;
+}
+
+export async function update(id: number, values: UnitValues) {
+  await UnitModel.update({ name: values.name, spec: specOf(values) }, { where: { id } });
+  return (await findById(id))!;
+}
+
+export async function remove(id: number) {
+  await UnitModel.destroy({ where: { id } });
+}
+
+export async function insertPhoto(values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number }) {
+  return toPhoto(await UnitPhotoModel.create(values));
+}
+
+export const findPhoto = (unitId: number, photoId: number) => UnitPhotoModel.findOne({ where: { id: photoId, unitId } });
+export const photosOf = (unitId: number) => UnitPhotoModel.findAll({ where: { unitId } });

@@ -1,0 +1,19 @@
+import type { Config } from '../config';
+import { localDiskStorage } from './local-disk';
+import { s3Storage } from './s3';
+import type { FileStorage } from './storage';
+
+export type { FileStorage } from './storage';
+
+export function createStorage(config: Config): FileStorage {
+  if (config.STORAGE_DRIVER === 's3') {
+    return s3Storage({
+      endpoint: config.S3_ENDPOINT || undefined,
+      region: config.S3_REGION,
+      bucket: config.S3_BUCKET,
+      accessKeyId: config.S3_ACCESS_KEY_ID,
+      secretAccessKey: config.S3_SECRET_ACCESS_KEY,
+    });
+  }
+  return localDiskStorage(config.UPLOAD_DIR);
+}

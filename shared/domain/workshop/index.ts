@@ -1,0 +1,4 @@
+export * from './coverage';
+export * from './spurious';
+export * from './on-air';
+export * from './station-config';

@@ -1,0 +1,90 @@
+import { BAND_IDS, type BandId } from '../domain/bands';
+import { z } from './zod-setup';
+
+export const TIME_SOURCES = ['network', 'gps', 'rtc'] as const;
+export const GENERATOR_KINDS = ['pll', 'dds', 'other'] as const;
+export const FILTER_TYPES = ['butterworth', 'chebyshev-0.1', 'chebyshev-0.5', 'elliptic', 'other'] as const;
+export const ANTENNA_KINDS = ['dipole', 'end-fed', 'vertical', 'loop', 'dummy-load', 'other'] as const;
+
+export const timeSourceLabels: Record<(typeof TIME_SOURCES)[number], string> = {
+  network: 'Network time',
+  gps: 'GPS receiver',
+  rtc: 'Real-time clock',
+};
+export const generatorKindLabels: Record<(typeof GENERATOR_KINDS)[number], string> = {
+  pll: 'Fractional-N PLL',
+  dds: 'DDS',
+  other: 'Other',
+};
+
+export const bandIdField = z.enum(BAND_IDS as [BandId, ...BandId[]], { message: `Use one of ${BAND_IDS.join(', ')}` });
+
+const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
+
+export const lowPassFilterInput = z.object({
+  bands: z.array(bandIdField).min(1, 'Name at least one band this filter serves').max(4),
+  type: z.enum(FILTER_TYPES),
+  order: z.number().int('The order is a whole number').min(1, 'The order is at least 1').max(11, 'The order is at most 11'),
+  cutoffHz: z.number().positive('The cut-off must be above 0 Hz').max(500e6, 'The cut-off must be below 500 MHz'),
+});
+export type LowPassFilterInput = z.infer<typeof lowPassFilterInput>;
+
+export const amplifierInput = z.object({
+  gainDb: z.number().min(0, 'Gain cannot be negative').max(60, 'Gain above 60 dB is not a beacon amplifier'),
+  saturatedDbm: z.number().min(-10).max(50, 'Saturated output above 50 dBm (100 W) is beyond a beacon'),
+  supplyV: z.number().min(0).max(60, 'Supply above 60 V is not supported'),
+  supplyA: z.number().min(0).max(20),
+});
+
+export const antennaInput = z.object({
+  kind: z.enum(ANTENNA_KINDS),
+  bands: z.array(bandIdField).max(15),
+  gainDbi: z.number().min(-30, 'Gain below −30 dBi is not plausible').max(20, 'Gain above 20 dBi is not plausible'),
+});
+
+export const unitInput = z.object({
+  name: text(80).min(1, 'Give the unit a name'),
+  serialLabel: text(60).default(''),
+  controller: text(80).default(''),
+  timeSource: z.enum(TIME_SOURCES),
+  generatorKind: z.enum(GENERATOR_KINDS),
+  referenceHz: z.number().min(1e6, 'The reference is at least 1 MHz').max(200e6, 'The reference is at most 200 MHz'),
+  tolerancePpm: z.number().min(0, 'A tolerance cannot be negative: give its size, e.g. 10 for ±10 ppm').max(1000, 'A tolerance above 1000 ppm is not a crystal'),
+  tempCoPpmPerC: z.number().min(0, 'Give the coefficient’s size (no sign)').max(50).nullable().default(null),
+  disciplined: z.boolean().default(false),
+  generatorLevelDbm: z.number().min(-40, 'Below −40 dBm is not a generator output').max(30, 'Above 30 dBm is not a generator output'),
+  attenuatorDb: z.number().min(0, 'Attenuation cannot be negative').max(80).default(0),
+  amplifier: amplifierInput.nullable().default(null),
+  filters: z.array(lowPassFilterInput).max(12, 'At most 12 filters').default([]),
+  antenna: antennaInput.default({ kind: 'dipole', bands: [], gainDbi: 2.15 }),
+  /** duty cycle of the generator's square-wave output, for the harmonic estimate */
+  dutyCycle: z.number().min(0.05).max(0.95).default(0.5),
+  notes: text(2000).default(''),
+});
+export type UnitInput = z.input<typeof unitInput>;
+export type UnitValues = z.output<typeof unitInput>;
+
+/** A partial update: only the fields sent are kept (defaults are not filled in). */
+export const unitPatch = z.record(z.string(), z.unknown()).transform((body, ctx) => {
+  const parsed = unitInput.partial().safeParse(body);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) ctx.addIssue({ ...issue, code: 'custom', message: issue.message, path: issue.path });
+    return z.NEVER;
+  }
+  const sent = Object.keys(body);
+  return Object.fromEntries(Object.entries(parsed.data).filter(([key]) => sent.includes(key))) as Partial<UnitValues>;
+});
+
+export type UnitPhoto = { id: number; url: string; thumbUrl: string; contentType: string; bytes: number; createdAt: string };
+
+export type Unit = UnitValues & {
+  id: number;
+  ownerId: number;
+  ownerName: string;
+  photos: UnitPhoto[];
+  createdAt: string;
+  updatedAt: string;
+};
+
+export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
+export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
