@@ -1,0 +1,55 @@
+import { Stack, useRouter } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+
+import { useSessionQuery } from '@/components/auth/queries';
+import { SafetyCard } from '@/components/overview/safety-card';
+import { StationCountCard } from '@/components/overview/station-count-card';
+import { useStationsQuery } from '@/components/stations/queries';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/ui/theme';
+import { Screen } from '@/components/ui/screen';
+
+export default function OverviewRoute() {
+  const router = useRouter();
+  const user = useSessionQuery().data;
+  const stations = useStationsQuery();
+  return (
+    <Screen>
+      <Stack.Screen options={{ title: 'Overview · Faintline' }} />
+      <View style={styles.greeting}>
+        <Text variant="title" accessibilityRole="header">
+          Hello, {user?.displayName ?? 'operator'}
+        </Text>
+        {user?.callsign ? (
+          <Text variant="monoLarge" tone="primary">
+            {user.callsign}
+          </Text>
+        ) : (
+          <Text tone="muted">Add your callsign in Settings when you have one.</Text>
+        )}
+      </View>
+      <View style={styles.row}>
+        <StationCountCard count={stations.data?.length ?? null} status={stations.status} />
+        <Card style={styles.links}>
+          <Text variant="label" tone="muted">
+            Quick links
+          </Text>
+          <View style={styles.linkButtons}>
+            <Button label="Add a station" onPress={() => router.push('/stations/new')} />
+            <Button label="Your stations" variant="secondary" onPress={() => router.push('/stations')} />
+          </View>
+        </Card>
+      </View>
+      <SafetyCard />
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  greeting: { gap: space.xs },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  links: { flex: 1, minWidth: 220 },
+  linkButtons: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+});

@@ -1,0 +1,71 @@
+import { JetBrainsMono_400Regular } from '@expo-google-fonts/jetbrains-mono/400Regular';
+import { JetBrainsMono_500Medium } from '@expo-google-fonts/jetbrains-mono/500Medium';
+import { SpaceGrotesk_400Regular } from '@expo-google-fonts/space-grotesk/400Regular';
+import { SpaceGrotesk_500Medium } from '@expo-google-fonts/space-grotesk/500Medium';
+import { SpaceGrotesk_700Bold } from '@expo-google-fonts/space-grotesk/700Bold';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useFonts } from 'expo-font';
+import { Stack, ThemeProvider } from 'expo-router';
+import { StatusBar } from 'expo-status-bar';
+import { useState } from 'react';
+import { SafeAreaProvider } from 'react-native-safe-area-context';
+
+import { useSessionQuery } from '@/components/auth/queries';
+import { createQueryClient } from '@/components/query/query-client';
+import { BootScreen } from '@/components/shell/boot-screen';
+import { navigationTheme } from '@/components/ui/navigation-theme';
+import { AppThemeProvider, useAppTheme } from '@/components/ui/theme-provider';
+
+export { ErrorBoundary } from 'expo-router';
+
+// A deep link (e.g. /stations/42) still gets a way back to the overview.
+export const unstable_settings = { initialRouteName: '(tabs)' };
+
+export default function RootLayoutRoute() {
+  const [queryClient] = useState(createQueryClient);
+  const [fontsLoaded, fontError] = useFonts({
+    SpaceGrotesk_400Regular,
+    SpaceGrotesk_500Medium,
+    SpaceGrotesk_700Bold,
+    JetBrainsMono_400Regular,
+    JetBrainsMono_500Medium,
+  });
+  return (
+    <SafeAreaProvider>
+      <QueryClientProvider client={queryClient}>
+        <AppThemeProvider>
+          <ThemedRoot fontsReady={fontsLoaded || fontError != null} />
+        </AppThemeProvider>
+      </QueryClientProvider>
+    </SafeAreaProvider>
+  );
+}
+
+function ThemedRoot({ fontsReady }: { fontsReady: boolean }) {
+  const { scheme, colors } = useAppTheme();
+  return (
+    <ThemeProvider value={navigationTheme(scheme, colors)}>
+      <StatusBar style={scheme === 'dark' ? 'light' : 'dark'} />
+      <RootStack fontsReady={fontsReady} />
+    </ThemeProvider>
+  );
+}
+
+/** Auth is decided here, once: signed-out people see (auth), signed-in people see (tabs). */
+function RootStack({ fontsReady }: { fontsReady: boolean }) {
+  const session = useSessionQuery();
+  if (session.isError) return <BootScreen error={session.error} onRetry={() => session.refetch()} />;
+  if (!fontsReady || session.isPending) return <BootScreen />;
+  const user = session.data;
+  return (
+    <Stack screenOptions={{ headerShown: false }}>
+      <Stack.Protected guard={!user}>
+        <Stack.Screen name="(auth)" />
+      </Stack.Protected>
+      <Stack.Protected guard={!!user}>
+        <Stack.Screen name="(tabs)" />
+      </Stack.Protected>
+      <Stack.Screen name="+not-found" options={{ title: 'Page not found' }} />
+    </Stack>
+  );
+}

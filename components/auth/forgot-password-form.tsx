@@ -1,0 +1,52 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+
+import { resetRequestInput, type ResetRequestInput } from '@/shared/schemas';
+
+import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { FormTextField } from '../form/form-text-field';
+import { Button } from '../ui/button';
+import { Notice } from '../ui/notice';
+
+export type ForgotPasswordFormProps = {
+  onSubmit: (values: ResetRequestInput) => Promise<unknown>;
+  /** The server's answer once the request went through. */
+  sentMessage?: string;
+};
+
+export function ForgotPasswordForm({ onSubmit, sentMessage }: ForgotPasswordFormProps) {
+  const form = useForm<ResetRequestInput>({
+    resolver: zodResolver(resetRequestInput),
+    defaultValues: { email: '' },
+  });
+  const submit = form.handleSubmit(async (values) => {
+    try {
+      await onSubmit(values);
+    } catch (error) {
+      applyServerErrors(form, error);
+    }
+  });
+  const message = serverMessage(form.formState.errors);
+  return (
+    <>
+      {sentMessage ? <Notice tone="success" message={sentMessage} /> : null}
+      {message ? <Notice message={message} /> : null}
+      <FormTextField
+        control={form.control}
+        name="email"
+        label="E-mail"
+        autoComplete="email"
+        keyboardType="email-address"
+        autoCapitalize="none"
+        inputMode="email"
+        onSubmitEditing={submit}
+      />
+      <Button
+        label={sentMessage ? 'Send the link again' : 'Send reset link'}
+        variant={sentMessage ? 'secondary' : 'primary'}
+        onPress={submit}
+        busy={form.formState.isSubmitting}
+      />
+    </>
+  );
+}

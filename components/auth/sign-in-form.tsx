@@ -1,0 +1,49 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+
+import { signInInput, type SignInInput } from '@/shared/schemas';
+
+import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { FormTextField } from '../form/form-text-field';
+import { Button } from '../ui/button';
+import { Notice } from '../ui/notice';
+
+export type SignInFormProps = { onSubmit: (values: SignInInput) => Promise<unknown> };
+
+export function SignInForm({ onSubmit }: SignInFormProps) {
+  const form = useForm<SignInInput>({
+    resolver: zodResolver(signInInput),
+    defaultValues: { email: '', password: '' },
+  });
+  const submit = form.handleSubmit(async (values) => {
+    try {
+      await onSubmit(values); // the session cache updates, and the guard shows the signed-in screens
+    } catch (error) {
+      applyServerErrors(form, error);
+    }
+  });
+  const message = serverMessage(form.formState.errors);
+  return (
+    <>
+      {message ? <Notice message={message} /> : null}
+      <FormTextField
+        control={form.control}
+        name="email"
+        label="E-mail"
+        autoComplete="email"
+        keyboardType="email-address"
+        autoCapitalize="none"
+        inputMode="email"
+      />
+      <FormTextField
+        control={form.control}
+        name="password"
+        label="Password"
+        secureTextEntry
+        autoComplete="current-password"
+        onSubmitEditing={submit}
+      />
+      <Button label="Sign in" onPress={submit} busy={form.formState.isSubmitting} />
+    </>
+  );
+}

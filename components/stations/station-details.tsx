@@ -1,0 +1,54 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { Station } from '@/shared/schemas';
+
+import { Card } from '../ui/card';
+import { Text } from '../ui/text';
+import { formatUtcDateTime } from '../ui/format';
+import { space } from '../ui/theme';
+
+export type StationDetailsProps = { station: Station; readOnly: boolean };
+
+export function StationDetails({ station, readOnly }: StationDetailsProps) {
+  return (
+    <View style={styles.wrap}>
+      {readOnly ? (
+        <Card tone="signal">
+          <Text variant="label">Read-only: this station belongs to {station.ownerName}</Text>
+        </Card>
+      ) : null}
+      <Card>
+        <Fact label="Callsign" value={station.callsign} mono />
+        <Fact label="Locator" value={station.locator} mono />
+        <Fact label="Created" value={formatUtcDateTime(station.createdAt)} />
+        <Fact label="Updated" value={formatUtcDateTime(station.updatedAt)} />
+      </Card>
+      <Card>
+        <Text variant="label" tone="muted">
+          Notes
+        </Text>
+        <Text tone={station.notes ? 'default' : 'muted'}>{station.notes || 'No notes yet.'}</Text>
+      </Card>
+    </View>
+  );
+}
+
+function Fact({ label, value, mono = false }: { label: string; value: string; mono?: boolean }) {
+  return (
+    <View style={styles.fact}>
+      <Text variant="label" tone="muted" style={styles.factLabel}>
+        {label}
+      </Text>
+      <Text variant={mono ? 'monoLarge' : 'body'} style={styles.factValue}>
+        {value}
+      </Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  fact: { flexDirection: 'row', alignItems: 'baseline', flexWrap: 'wrap', gap: space.md, paddingVertical: space.xs },
+  factLabel: { width: 96 },
+  factValue: { flexShrink: 1 },
+});

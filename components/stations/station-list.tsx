@@ -1,0 +1,144 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+
+import type { Station } from '@/shared/schemas';
+
+import { Text } from '../ui/text';
+import { formatUtcDateTime } from '../ui/format';
+import { radius, space } from '../ui/theme';
+import { useAppTheme } from '../ui/theme-provider';
+
+export type StationListProps = {
+  stations: Station[];
+  /** Cards on phones, a table with columns on wide screens. */
+  layout: 'cards' | 'table';
+  /** Club view: show whose station it is. */
+  showOwner?: boolean;
+};
+
+export function StationList({ stations, layout, showOwner = false }: StationListProps) {
+  return layout === 'table' ? (
+    <StationTable stations={stations} showOwner={showOwner} />
+  ) : (
+    <View style={styles.cards}>
+      {stations.map((station) => (
+        <StationCard key={station.id} station={station} showOwner={showOwner} />
+      ))}
+    </View>
+  );
+}
+
+function openLabel(station: Station) {
+  return `Open station ${station.name}, ${station.callsign}`;
+}
+
+export function StationCard({ station, showOwner = false }: { station: Station; showOwner?: boolean }) {
+  const { colors } = useAppTheme();
+  return (
+    <Link href={{ pathname: '/stations/[id]', params: { id: String(station.id) } }} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={openLabel(station)}
+        style={({ pressed }) => [
+          styles.card,
+          { backgroundColor: colors.surface, borderColor: pressed ? colors.primary : colors.border },
+        ]}
+      >
+        <View style={styles.cardTop}>
+          <Text variant="heading" numberOfLines={1} style={styles.flex}>
+            {station.name}
+          </Text>
+          <Text variant="mono" tone="primary">
+            {station.callsign}
+          </Text>
+        </View>
+        <View style={styles.cardMeta}>
+          <Text variant="caption" tone="muted">
+            Locator <Text variant="mono">{station.locator}</Text>
+          </Text>
+          <Text variant="caption" tone="muted">
+            Updated {formatUtcDateTime(station.updatedAt)}
+          </Text>
+        </View>
+        {showOwner ? (
+          <Text variant="caption" tone="muted">
+            Operator: {station.ownerName}
+          </Text>
+        ) : null}
+      </Pressable>
+    </Link>
+  );
+}
+
+function StationTable({ stations, showOwner }: { stations: Station[]; showOwner: boolean }) {
+  const { colors } = useAppTheme();
+  const header = [
+    { key: 'name', label: 'Name', style: styles.colName },
+    ...(showOwner ? [{ key: 'owner', label: 'Operator', style: styles.colOwner }] : []),
+    { key: 'callsign', label: 'Callsign', style: styles.colCall },
+    { key: 'locator', label: 'Locator', style: styles.colLoc },
+    { key: 'updated', label: 'Updated (UTC)', style: styles.colUpdated },
+  ];
+  return (
+    <View
+      accessibilityRole="list"
+      style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}
+    >
+      <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
+        {header.map((column) => (
+          <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
+            {column.label}
+          </Text>
+        ))}
+      </View>
+      {stations.map((station, index) => (
+        <Link key={station.id} href={{ pathname: '/stations/[id]', params: { id: String(station.id) } }} asChild>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={openLabel(station)}
+            style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
+              styles.row,
+              index < stations.length - 1 && { borderBottomWidth: 1, borderColor: colors.border },
+              (pressed || hovered) && { backgroundColor: colors.primarySoft },
+            ]}
+          >
+            <Text variant="label" numberOfLines={1} style={styles.colName}>
+              {station.name}
+            </Text>
+            {showOwner ? (
+              <Text numberOfLines={1} style={styles.colOwner}>
+                {station.ownerName}
+              </Text>
+            ) : null}
+            <Text variant="mono" tone="primary" style={styles.colCall}>
+              {station.callsign}
+            </Text>
+            <Text variant="mono" style={styles.colLoc}>
+              {station.locator}
+            </Text>
+            <Text variant="caption" tone="muted" style={styles.colUpdated}>
+              {formatUtcDateTime(station.updatedAt).replace(' UTC', '')}
+            </Text>
+          </Pressable>
+        </Link>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  flex: { flex: 1 },
+  cards: { gap: space.md },
+  card: { borderWidth: 1, borderRadius: radius.lg, padding: space.lg, gap: space.sm },
+  cardTop: { flexDirection: 'row', alignItems: 'center', gap: space.md },
+  cardMeta: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs },
+  table: { borderWidth: 1, borderRadius: radius.lg, overflow: 'hidden' },
+  row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.lg, paddingVertical: space.md, gap: space.md },
+  headRow: { borderBottomWidth: 1 },
+  headCell: { textTransform: 'uppercase', letterSpacing: 0.6 },
+  colName: { flex: 3 },
+  colOwner: { flex: 2 },
+  colCall: { flex: 2 },
+  colLoc: { flex: 1.4 },
+  colUpdated: { flex: 2.2 },
+});

@@ -1,0 +1,21 @@
+import { Link, type Href } from 'expo-router';
+import { Pressable, StyleSheet } from 'react-native';
+
+import { Text, type TextProps } from './text';
+
+export type TextLinkProps = { href: Href; label: string; variant?: TextProps['variant'] };
+
+/** An in-app link that reads as text. */
+export function TextLink({ href, label, variant = 'label' }: TextLinkProps) {
+  return (
+    <Link href={href} asChild>
+      <Pressable accessibilityRole="link" accessibilityLabel={label} hitSlop={6}>
+        <Text variant={variant} tone="primary" style={styles.text}>
+          {label}
+        </Text>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({ text: { textDecorationLine: 'underline' } });

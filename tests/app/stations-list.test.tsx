@@ -1,0 +1,67 @@
+import { errorResponse, jsonResponse, pendingFetch, renderRoute, screenText, stubFetch } from '../utils/render';
+
+import { fireEvent, screen, waitFor } from '@testing-library/react-native';
+
+import StationsRoute from '@/app/(tabs)/stations/index';
+import type { Station } from '@/shared/schemas';
+
+function renderStations() {
+  return renderRoute({ 'stations/index': StationsRoute, 'stations/new': () => null }, { initialUrl: '/stations' });
+}
+
+const station = (overrides: Partial<Station>): Station => ({
+  id: 1,
+  ownerId: 7,
+  ownerName: 'Ilse Marrow',
+  name: 'Attic beacon',
+  callsign: 'Q1IMW',
+  locator: 'IO91WM',
+  notes: '',
+  unitId: null,
+  region: 'itu1',
+  audioOffsetHz: 1500,
+  transmitEnabled: false,
+  referenceErrorPpm: null,
+  bands: [],
+  createdAt: '2026-11-30T09:00:00.000Z',
+  updatedAt: '2026-12-01T18:42:00.000Z',
+  ...overrides,
+});
+
+describe('/stations', () => {
+  it('while the list loads, shows a loading state', () => {
+    pendingFetch();
+    renderStations();
+
+    expect(screen.getByLabelText('Loading your stations…')).toBeTruthy();
+  });
+
+  it('when the operator has no stations, shows the empty state with a call to action', async () => {
+    stubFetch(() => jsonResponse(200, []));
+    const router = renderStations();
+
+    await waitFor(() => expect(screenText()).toContain('No stations yet'));
+    fireEvent.press(screen.getByLabelText('Add your first station'));
+
+    await waitFor(() => expect(router.getPathname()).toBe('/stations/new'));
+  });
+
+  it('when the server fails, shows the error and loads again on retry', async () => {
+    let attempts = 0;
+    stubFetch(() => {
+      attempts += 1;
+      return attempts === 1
+        ? errorResponse(503, 'unavailable', 'The database is not answering right now.')
+        : jsonResponse(200, [station({}), station({ id: 2, name: 'Garden mast', locator: 'IO91' })]);
+    });
+    renderStations();
+
+    await waitFor(() => expect(screenText()).toContain('The database is not answering right now.'));
+    fireEvent.press(screen.getByLabelText('Try again'));
+
+    await waitFor(() => expect(screen.getByLabelText('Open station Garden mast, Q1IMW')).toBeTruthy());
+    expect(screen.getByLabelText('Open station Attic beacon, Q1IMW')).toBeTruthy();
+    expect(screenText()).toContain('IO91WM');
+    expect(attempts).toBe(2);
+  });
+});
