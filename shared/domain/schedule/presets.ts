@@ -44,7 +44,7 @@ const byFrequency = (bands: readonly BandId[]) => BAND_IDS.filter((id) => bands.
 export function utcShiftHours(locator: string | undefined): number {
   if (!locator) return 0;
   const found = locatorToLatLon(locator);
-  return found.ok ? -Math.round(found.lon / 15) : 0;
+  return found.ok ? -Math.round(found.lon / 15) || 0 : 0; // || 0 turns −0 into 0
 }
 const utcHour = (localHour: number, shift: number) => (((localHour + shift) % 24) + 24) % 24;
 

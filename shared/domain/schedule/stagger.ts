@@ -14,6 +14,8 @@ import { allowedOffsetRange, type OffsetRange } from './offsets';
 import type { PlannedTransmission } from './expand';
 
 export const DEFAULT_GUARD_HZ = 6;
+/** Carriers closer than guardHz meet; differences within a micro-hertz of the guard count as clear (float noise). */
+export const GUARD_TOLERANCE_HZ = 1e-6;
 
 export type FleetTransmission = { startMs: number; bandId: BandId; dialHz: number; carrierHz: number };
 export type FleetStation = {
@@ -160,8 +162,9 @@ function pairTally(stationCount: number): PairTally {
   };
 }
 
-function sweep(flat: Flat, current: Float64Array, guardHz: number, tally: PairTally | null, degree: Float64Array | null): number {
+function sweep(flat: Flat, current: Float64Array, guard: number, tally: PairTally | null, degree: Float64Array | null): number {
   let instances = 0;
+  const guardHz = guard - GUARD_TOLERANCE_HZ;
   const { order, bucketStart, station } = flat;
   for (let k = 0; k + 1 < bucketStart.length; k++) {
     const end = bucketStart[k + 1];
@@ -194,7 +197,7 @@ export function findFleetConflicts(stations: readonly FleetStation[], options: F
 
 /** The same answer by comparing every two stations slot by slot (O(stations² · transmissions)). */
 export function findFleetConflictsPairwise(stations: readonly FleetStation[], options: FleetOptions = {}): FleetConflict[] {
-  const guardHz = options.guardHz ?? DEFAULT_GUARD_HZ;
+  const guardHz = (options.guardHz ?? DEFAULT_GUARD_HZ) - GUARD_TOLERANCE_HZ;
   const bySlot = stations.map((s) =>
     s.transmissions
       .map((t) => ({ slot: Math.floor(t.startMs / SLOT_MS), band: bandIndex.get(t.bandId) ?? 0, carrierHz: t.carrierHz }))
@@ -254,8 +257,6 @@ export type FleetProposal = {
   unresolved: (number | string)[];
 };
 
-const EPS_HZ = 1e-6;
-
 /**
  * Greedy separation: stations with the most conflicts go first; a station that
  * still meets someone moves by the smallest shift (on a 0.01 Hz grid) that clears
@@ -285,7 +286,7 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
     for (let t = from; t < to && !meets; t++) {
       for (let i = bucketStart[bucket[t]]; i < bucketStart[bucket[t] + 1]; i++) {
         const u = order[i];
-        if (station[u] !== s && Math.abs(current[u] - current[t]) < guardHz) {
+        if (station[u] !== s && Math.abs(current[u] - current[t]) < guardHz - GUARD_TOLERANCE_HZ) {
           meets = true;
           break;
         }
@@ -305,10 +306,10 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
         const u = order[i];
         if (station[u] === s) continue;
         const v = current[u] - current[t];
-        free = subtract(free, v - guardHz - EPS_HZ, v + guardHz + EPS_HZ);
+        free = subtract(free, v - guardHz, v + guardHz);
       }
     }
-    const shift = nearestToZero(free);
+    const shift = nearestShift(free, stations[s].currentOffsetHz);
     if (shift === null) {
       unresolved.push(stations[s].stationId);
       continue;
@@ -325,7 +326,7 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
     proposals: stations.map((st, s) => ({
       stationId: st.stationId,
       currentOffsetHz: st.currentOffsetHz,
-      proposedOffsetHz: Math.round((st.currentOffsetHz + delta[s]) * 100) / 100,
+      proposedOffsetHz: delta[s] === 0 ? st.currentOffsetHz : st.currentOffsetHz + delta[s],
     })),
     conflicts: before.result(stations),
     remaining: after.result(stations),
@@ -350,8 +351,11 @@ function subtract(segments: number[], a: number, b: number): number[] {
   return out;
 }
 
-/** The point of the segments nearest to 0 on a 0.01 grid, rounding away from the forbidden side. */
-function nearestToZero(segments: number[]): number | null {
+/**
+ * The shift in the segments nearest to 0 that lands the base offset on a 0.01 Hz grid
+ * (so a proposed offset reads as 1496.25, not 1496.2487…); null when none does.
+ */
+function nearestShift(segments: number[], baseHz: number): number | null {
   let best: number | null = null;
   for (let i = 0; i < segments.length; i += 2) {
     const lo = segments[i];
@@ -359,9 +363,10 @@ function nearestToZero(segments: number[]): number | null {
     if (lo > hi) continue;
     let x: number;
     if (lo <= 0 && hi >= 0) x = 0;
-    else if (lo > 0) x = Math.ceil(lo * 100) / 100;
-    else x = Math.floor(hi * 100) / 100;
-    if (x < lo || x > hi) continue; // segment narrower than the grid
+    else if (lo > 0) x = Math.ceil((baseHz + lo) * 100) / 100 - baseHz;
+    else x = Math.floor((baseHz + hi) * 100) / 100 - baseHz;
+    // float noise of the grid step stays far inside the guard tolerance
+    if (x < lo - GUARD_TOLERANCE_HZ / 10 || x > hi + GUARD_TOLERANCE_HZ / 10) continue; // segment narrower than the grid
     if (best === null || Math.abs(x) < Math.abs(best)) best = x;
   }
   return best;
