@@ -25,6 +25,10 @@ import {
   type LicenceRegion,
   type Refusal,
 } from '../../shared/domain';
+import { airtimeByDay, effectiveDuty, expandPlan, validateSchedule } from '../../shared/domain/schedule';
+import type { StationSettings, UnitHardware } from '../../shared/domain/workshop';
+import { FILTER_LOSS_DB } from '../../shared/domain/workshop';
+import { scheduleInput } from '../../shared/schemas/schedule';
 
 export type CliIo = { out: (line: string) => void; err: (line: string) => void; setExitCode: (code: number) => void };
 
@@ -58,6 +62,29 @@ function plain<T extends { ok: true }>(result: T): Omit<T, 'ok'> {
   return JSON.parse(JSON.stringify(rest, (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as unknown as ArrayLike<number>) : v)));
 }
 
+const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
+
+type PlanOptions = {
+  callsign: string;
+  locator: string;
+  power: number;
+  band: string[];
+  slots: number;
+  duty?: number;
+  every?: number;
+  from?: string;
+  hours: number;
+  startDate?: string;
+  endDate?: string;
+  offset: number;
+  staggerStep: number;
+  staggerSpan: number;
+  cal?: string[];
+  seed?: string;
+  region: LicenceRegion;
+  summary?: boolean;
+};
+
 export function buildProgram(io: CliIo = defaultIo): Command {
   const fail = (refusal: Refusal | string): void => {
     io.err(`faintline: ${typeof refusal === 'string' ? refusal : refusal.reason}`);
@@ -66,7 +93,7 @@ export function buildProgram(io: CliIo = defaultIo): Command {
   const emit = (value: unknown): void => io.out(JSON.stringify(value));
 
   const program = new Command('faintline')
-    .description('Faintline beacon computations: WSPR messages and symbols, locators, paths, tones, synthesizer plans, power and filters.')
+    .description('Faintline beacon computations: WSPR messages and symbols, locators, paths, tones, synthesizer plans, power, filters and band rotation plans.')
     .showHelpAfterError()
     .configureOutput({ writeOut: (s) => io.out(s.trimEnd()), writeErr: (s) => io.err(s.trimEnd()) });
 
@@ -243,6 +270,117 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
       emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
       if (!meets) io.err('faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.');
+    });
+
+  program
+    .command('plan')
+    .description(
+      'Expand a band rotation into its transmissions: one JSON line per transmission (UTC start, band, dial, audio offset, carrier, message). ' +
+        'Assumes a suitable low-pass filter is fitted for every band you name; check your licence for bands and power.',
+    )
+    .requiredOption('--callsign <callsign>', 'your callsign, plain (K1ABC) or with one prefix or suffix (PJ4/K1ABC)')
+    .requiredOption('--locator <locator>', '4- or 6-character Maidenhead locator; 6 characters send Type 1 and Type 3 in turn')
+    .requiredOption('--power <dBm>', 'reported power in dBm (0, 3, 7, 10, 13 … 60)', number('Power'))
+    .requiredOption('--band <band[@from-to]>', 'a step of the rotation, in order; repeat for more. 40m@20-6 runs 40 m only from 20:00 to 06:00 UTC', collect)
+    .option('--slots <n>', 'transmissions in a row on each band before moving on (1–30; pairs round up)', number('Slots'), 1)
+    .option('--duty <percent>', 'share of the slots to use, drawn afresh each UTC day (1–100; default 20)', number('Duty'))
+    .option('--every <n>', 'use every nth slot instead of a share (2–30)', number('Every'))
+    .option('--from <time>', 'start of the range, ISO 8601 UTC such as 2026-12-02T00:00Z (default: now)')
+    .option('--hours <h>', 'length of the range in hours (at most 744, a month)', number('Hours'), 24)
+    .option('--start-date <date>', 'first UTC day the schedule runs, YYYY-MM-DD (default: the day of --from)')
+    .option('--end-date <date>', 'last UTC day the schedule runs, YYYY-MM-DD (default: open-ended)')
+    .option('--offset <Hz>', 'audio offset of tone 0 above the dial (1400–1595)', number('Offset'), 1500)
+    .option('--stagger-step <Hz>', 'move the audio offset by this much per transmission (0–20)', number('Stagger step'), 0)
+    .option('--stagger-span <Hz>', 'range the stagger walks across, centred on --offset (0–100)', number('Stagger span'), 30)
+    .option('--cal <band=Hz>', "a band's measured generator error in Hz (positive = radiates high), e.g. 20m=+4.5; repeat per band", collect)
+    .option('--seed <text>', 'what the daily share draw is seeded with (default: the callsign)')
+    .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
+    .option('--summary', 'end with one line of minutes on the air per band and UTC day, and the duty reached')
+    .addHelpText(
+      'after',
+      '\nExamples:\n' +
+        '  faintline plan --callsign K1ABC --locator FN42 --power 23 --band 20m --from 2026-12-02T00:00Z\n' +
+        '  faintline plan --callsign K1ABC --locator FN42ab --power 23 --band 20m@7-19 --band 40m@19-7 --every 5 --stagger-step 3\n' +
+        'Every transmission starts 1 s after an even UTC minute. Warnings go to stderr; a schedule with a blocking problem exits 1.',
+    )
+    .action((opts: PlanOptions) => {
+      const fromMs = opts.from === undefined ? Date.now() : Date.parse(opts.from);
+      if (!Number.isFinite(fromMs)) return fail(`--from must be an ISO 8601 time such as 2026-12-02T00:00Z; got '${opts.from}'.`);
+      if (!(opts.hours > 0 && opts.hours <= 744)) return fail('--hours must be more than 0 and at most 744 (a month).');
+      if (opts.duty !== undefined && opts.every !== undefined) return fail('Give --duty or --every, not both.');
+      const steps: { bandId: string; slots: number; activeHoursUtc: { fromHour: number; toHour: number } | null }[] = [];
+      for (const text of opts.band) {
+        const m = /^([^@]+)(?:@(\d{1,2})-(\d{1,2}))?$/.exec(text.trim());
+        if (!m) return fail(`--band '${text}' is not a band or band@from-to (such as 40m@20-6).`);
+        const b = bandFor(m[1], opts.region);
+        if (!b.ok) return fail(b);
+        steps.push({ bandId: b.band.id, slots: opts.slots, activeHoursUtc: m[2] === undefined ? null : { fromHour: Number(m[2]), toHour: Number(m[3]) } });
+      }
+      const calibration = new Map<string, number>();
+      for (const text of opts.cal ?? []) {
+        const m = /^([^=]+)=([-+]?\d+(?:\.\d+)?)$/.exec(text.trim());
+        const b = m && bandFor(m[1], opts.region);
+        if (!m || !b || !b.ok) return fail(`--cal '${text}' must be band=Hz, such as 20m=+4.5.`);
+        calibration.set(b.band.id, Number(m[2]));
+      }
+      const parsed = scheduleInput.safeParse({
+        steps,
+        cadence: opts.every !== undefined ? { kind: 'every-nth', nth: opts.every } : { kind: 'duty', dutyPercent: opts.duty ?? 20 },
+        stagger: { stepHz: opts.staggerStep, spanHz: opts.staggerStep > 0 ? opts.staggerSpan : 0 },
+        startDate: opts.startDate ?? new Date(fromMs).toISOString().slice(0, 10),
+        endDate: opts.endDate ?? null,
+      });
+      if (!parsed.success) {
+        const flag = (path: PropertyKey[]): string =>
+          path[0] === 'steps' && typeof path[1] === 'number' ? `--band ${opts.band[path[1]]}` :
+          path[0] === 'cadence' ? (opts.every !== undefined ? '--every' : '--duty') :
+          path[0] === 'stagger' ? (path[1] === 'spanHz' ? '--stagger-span' : '--stagger-step') :
+          path[0] === 'startDate' ? '--start-date' : path[0] === 'endDate' ? '--end-date' : 'schedule';
+        for (const issue of parsed.error.issues) fail(`${flag(issue.path)}: ${issue.message}`);
+        return;
+      }
+      const bandIds = [...new Set(parsed.data.steps.map((s) => s.bandId))];
+      const station: StationSettings = {
+        callsign: opts.callsign,
+        locator: opts.locator,
+        region: opts.region,
+        audioOffsetHz: opts.offset,
+        bands: bandIds.map((bandId) => ({ bandId, enabled: true, calibrationOffsetHz: calibration.get(bandId) ?? 0 })),
+      };
+      // a unit that reports exactly --power, with a filter assumed fitted for each band named
+      const unit: UnitHardware = {
+        generatorKind: 'pll',
+        referenceHz: 25e6,
+        tolerancePpm: 0,
+        tempCoPpmPerC: null,
+        disciplined: true,
+        generatorLevelDbm: opts.power + FILTER_LOSS_DB,
+        attenuatorDb: 0,
+        amplifier: null,
+        filters: bandIds.flatMap((bandId) => {
+          const b = bandFor(bandId, opts.region);
+          return b.ok ? [{ bands: [bandId], type: 'assumed', order: 5, cutoffHz: b.band.windowHighHz * 1.1 }] : [];
+        }),
+        dutyCycle: 0.5,
+      };
+      const rules = { ...parsed.data, stationId: opts.seed ?? opts.callsign.trim().toUpperCase() };
+      const issues = validateSchedule({ schedule: rules, station, unit });
+      for (const issue of issues) {
+        const where = issue.stepIndex === undefined ? '' : ` (--band ${opts.band[issue.stepIndex]})`;
+        if (issue.level === 'warn') io.err(`faintline: warning${where}: ${issue.message}`);
+      }
+      const blocks = issues.filter((i) => i.level === 'block');
+      if (blocks.length) {
+        for (const issue of blocks) fail(`${issue.stepIndex === undefined ? '' : `--band ${opts.band[issue.stepIndex]}: `}${issue.message}`);
+        return;
+      }
+      const result = expandPlan({ schedule: rules, station, unit, fromMs, toMs: fromMs + opts.hours * 3_600_000 });
+      for (const q of result.quiet) io.err(`faintline: ${q.message}`);
+      for (const t of result.transmissions) {
+        const { stepIndex: _step, ...line } = t;
+        emit(line);
+      }
+      if (opts.summary) emit({ summary: { airtime: airtimeByDay(result.transmissions), duty: effectiveDuty(result), transmissions: result.transmissions.length } });
     });
 
   return program;
