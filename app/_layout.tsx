@@ -16,7 +16,7 @@ import { BootScreen } from '@/components/shell/boot-screen';
 import { navigationTheme } from '@/components/ui/navigation-theme';
 import { AppThemeProvider, useAppTheme } from '@/components/ui/theme-provider';
 
-export { ErrorBoundary } from 'expo-router';
+export { CrashScreen as ErrorBoundary } from '@/components/shell/crash-screen';
 
 // A deep link (e.g. /stations/42) still gets a way back to the overview.
 export const unstable_settings = { initialRouteName: '(tabs)' };

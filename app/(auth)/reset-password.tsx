@@ -9,7 +9,12 @@ import { TextLink } from '@/components/ui/text-link';
 export default function ResetPasswordRoute() {
   const { token } = useLocalSearchParams<{ token?: string }>();
   const confirm = useResetConfirmMutation();
-  const footer = <TextLink href="/sign-in" label="Back to sign in" />;
+  const footer = (
+    <>
+      <TextLink href="/sign-in" label="Back to sign in" />
+      {confirm.isError ? <TextLink href="/forgot-password" label="Ask for a new link" /> : null}
+    </>
+  );
   let body;
   if (confirm.isSuccess) {
     body = (

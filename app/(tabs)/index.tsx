@@ -27,7 +27,7 @@ export default function OverviewRoute() {
             {user.callsign}
           </Text>
         ) : (
-          <Text tone="muted">Add your callsign in Settings when you have one.</Text>
+          <Text tone="muted">No callsign on your account yet.</Text>
         )}
       </View>
       <View style={styles.row}>

@@ -43,7 +43,7 @@ export function RegisterForm({ onSubmit }: RegisterFormProps) {
         control={form.control}
         name="callsign"
         label="Callsign (optional)"
-        hint="Your own licensed callsign. You can add it later."
+        hint="Your own licensed callsign, if you have one."
         upperCase
         mono
         autoCorrect={false}

@@ -4,7 +4,7 @@ import type { Station } from '@/shared/schemas';
 
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { formatUtcDateTime } from '../ui/format';
+import { formatLocator, formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
 
 export type StationDetailsProps = { station: Station; readOnly: boolean };
@@ -19,7 +19,7 @@ export function StationDetails({ station, readOnly }: StationDetailsProps) {
       ) : null}
       <Card>
         <Fact label="Callsign" value={station.callsign} mono />
-        <Fact label="Locator" value={station.locator} mono />
+        <Fact label="Locator" value={formatLocator(station.locator)} mono />
         <Fact label="Created" value={formatUtcDateTime(station.createdAt)} />
         <Fact label="Updated" value={formatUtcDateTime(station.updatedAt)} />
       </Card>

@@ -1,10 +1,10 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 
 import type { Station } from '@/shared/schemas';
 
 import { Text } from '../ui/text';
-import { formatUtcDateTime } from '../ui/format';
+import { formatLocator, formatUtcDateTime } from '../ui/format';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 
@@ -14,15 +14,19 @@ export type StationListProps = {
   layout: 'cards' | 'table';
   /** Club view: show whose station it is. */
   showOwner?: boolean;
+  /** Where a station opens; the operator's own detail screen by default. */
+  hrefFor?: (station: Station) => Href;
 };
 
-export function StationList({ stations, layout, showOwner = false }: StationListProps) {
+const ownDetail = (station: Station): Href => ({ pathname: '/stations/[id]', params: { id: String(station.id) } });
+
+export function StationList({ stations, layout, showOwner = false, hrefFor = ownDetail }: StationListProps) {
   return layout === 'table' ? (
-    <StationTable stations={stations} showOwner={showOwner} />
+    <StationTable stations={stations} showOwner={showOwner} hrefFor={hrefFor} />
   ) : (
     <View style={styles.cards}>
       {stations.map((station) => (
-        <StationCard key={station.id} station={station} showOwner={showOwner} />
+        <StationCard key={station.id} station={station} showOwner={showOwner} href={hrefFor(station)} />
       ))}
     </View>
   );
@@ -32,17 +36,17 @@ function openLabel(station: Station) {
   return `Open station ${station.name}, ${station.callsign}`;
 }
 
-export function StationCard({ station, showOwner = false }: { station: Station; showOwner?: boolean }) {
+export type StationCardProps = { station: Station; href: Href; showOwner?: boolean };
+
+export function StationCard({ station, href, showOwner = false }: StationCardProps) {
   const { colors } = useAppTheme();
   return (
-    <Link href={{ pathname: '/stations/[id]', params: { id: String(station.id) } }} asChild>
+    <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={openLabel(station)}
-        style={({ pressed }) => [
-          styles.card,
-          { backgroundColor: colors.surface, borderColor: pressed ? colors.primary : colors.border },
-        ]}
+        // Link's asChild spreads the child's style into an object: pass one flat object
+        style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
       >
         <View style={styles.cardTop}>
           <Text variant="heading" numberOfLines={1} style={styles.flex}>
@@ -54,7 +58,7 @@ export function StationCard({ station, showOwner = false }: { station: Station; 
         </View>
         <View style={styles.cardMeta}>
           <Text variant="caption" tone="muted">
-            Locator <Text variant="mono">{station.locator}</Text>
+            Locator <Text variant="mono">{formatLocator(station.locator)}</Text>
           </Text>
           <Text variant="caption" tone="muted">
             Updated {formatUtcDateTime(station.updatedAt)}
@@ -70,7 +74,9 @@ export function StationCard({ station, showOwner = false }: { station: Station; 
   );
 }
 
-function StationTable({ stations, showOwner }: { stations: Station[]; showOwner: boolean }) {
+type StationTableProps = { stations: Station[]; showOwner: boolean; hrefFor: (station: Station) => Href };
+
+function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
   const { colors } = useAppTheme();
   const header = [
     { key: 'name', label: 'Name', style: styles.colName },
@@ -92,15 +98,14 @@ function StationTable({ stations, showOwner }: { stations: Station[]; showOwner:
         ))}
       </View>
       {stations.map((station, index) => (
-        <Link key={station.id} href={{ pathname: '/stations/[id]', params: { id: String(station.id) } }} asChild>
+        <Link key={station.id} href={hrefFor(station)} asChild>
           <Pressable
             accessibilityRole="link"
             accessibilityLabel={openLabel(station)}
-            style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
+            style={StyleSheet.flatten([
               styles.row,
               index < stations.length - 1 && { borderBottomWidth: 1, borderColor: colors.border },
-              (pressed || hovered) && { backgroundColor: colors.primarySoft },
-            ]}
+            ])}
           >
             <Text variant="label" numberOfLines={1} style={styles.colName}>
               {station.name}
@@ -114,7 +119,7 @@ function StationTable({ stations, showOwner }: { stations: Station[]; showOwner:
               {station.callsign}
             </Text>
             <Text variant="mono" style={styles.colLoc}>
-              {station.locator}
+              {formatLocator(station.locator)}
             </Text>
             <Text variant="caption" tone="muted" style={styles.colUpdated}>
               {formatUtcDateTime(station.updatedAt).replace(' UTC', '')}

@@ -61,7 +61,7 @@ describe('/stations', () => {
 
     await waitFor(() => expect(screen.getByLabelText('Open station Garden mast, Q1IMW')).toBeTruthy());
     expect(screen.getByLabelText('Open station Attic beacon, Q1IMW')).toBeTruthy();
-    expect(screenText()).toContain('IO91WM');
+    expect(screenText()).toContain('IO91wm'); // subsquare in its usual lower case
     expect(attempts).toBe(2);
   });
 });

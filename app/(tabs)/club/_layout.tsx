@@ -1,5 +1,24 @@
 import { Stack } from 'expo-router';
 
+import { fonts } from '@/components/ui/theme';
+import { useAppTheme } from '@/components/ui/theme-provider';
+
+export const unstable_settings = { initialRouteName: 'index' };
+
 export default function ClubLayoutRoute() {
-  return <Stack screenOptions={{ headerShown: false }} />;
+  const { colors } = useAppTheme();
+  return (
+    <Stack
+      screenOptions={{
+        headerStyle: { backgroundColor: colors.background },
+        headerShadowVisible: false,
+        headerTintColor: colors.primary,
+        headerTitleStyle: { fontFamily: fonts.medium, color: colors.text },
+        contentStyle: { backgroundColor: colors.background },
+      }}
+    >
+      <Stack.Screen name="index" options={{ headerShown: false, title: 'Club · Faintline' }} />
+      <Stack.Screen name="station/[id]" options={{ title: 'Member station' }} />
+    </Stack>
+  );
 }

@@ -46,7 +46,15 @@ function ClubStationsSection({ club }: { club: ClubMembership }) {
     body = <ErrorState title="The club’s stations could not be loaded" error={stations.error} onRetry={() => stations.refetch()} />;
   else if (stations.data.length === 0)
     body = <EmptyState title="No stations yet" message="None of the members has registered a station so far." />;
-  else body = <StationList stations={stations.data} layout={isTablet ? 'table' : 'cards'} showOwner />;
+  else
+    body = (
+      <StationList
+        stations={stations.data}
+        layout={isTablet ? 'table' : 'cards'}
+        showOwner
+        hrefFor={(station) => ({ pathname: '/club/station/[id]', params: { id: String(station.id) } })}
+      />
+    );
   return (
     <View style={styles.section}>
       <View style={styles.sectionHead}>

@@ -1,4 +1,4 @@
-import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -7,6 +7,7 @@ import { useDeleteStationMutation, useStationQuery } from '@/components/stations
 import { StationDetails } from '@/components/stations/station-details';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { formatLocator } from '@/components/ui/format';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -45,7 +46,7 @@ export default function StationDetailRoute() {
               {station.data.name}
             </Text>
             <Text variant="mono" tone="primary">
-              {station.data.callsign} · {station.data.locator}
+              {station.data.callsign} · {formatLocator(station.data.locator)}
             </Text>
           </View>
           {readOnly ? null : (
@@ -96,7 +97,6 @@ export default function StationDetailRoute() {
         />
       }
     >
-      <Stack.Screen options={{ title: station.data?.name ?? 'Station' }} />
       {body}
     </Screen>
   );
