@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 
 import { api } from '@/shared/api/client';
 import type { Station, StationInput, StationPatch } from '@/shared/schemas';
@@ -11,6 +11,14 @@ export const stationKeys = {
   detail: (id: number) => [...stationKeys.all, 'detail', id] as const,
   club: (clubId: number) => [...stationKeys.all, 'club', clubId] as const,
 };
+
+/** The operator's list and any club lists: everything under stationKeys.all except details. */
+function invalidateStationLists(queryClient: QueryClient) {
+  return queryClient.invalidateQueries({
+    queryKey: stationKeys.all,
+    predicate: (query) => query.queryKey[1] !== 'detail',
+  });
+}
 
 export function useStationsQuery() {
   return useQuery({
@@ -44,7 +52,7 @@ export function useCreateStationMutation() {
     mutationFn: (input: StationInput) => api<Station>('/stations', { method: 'POST', body: input }),
     onSuccess: (created) => {
       queryClient.setQueryData(stationKeys.detail(created.id), created);
-      return queryClient.invalidateQueries({ queryKey: stationKeys.list() });
+      return invalidateStationLists(queryClient);
     },
   });
 }
@@ -56,7 +64,7 @@ export function useUpdateStationMutation(id: number) {
       api<Station>(`/stations/${id}`, { method: 'PATCH', body: patch }),
     onSuccess: (updated) => {
       queryClient.setQueryData(stationKeys.detail(id), updated);
-      return queryClient.invalidateQueries({ queryKey: stationKeys.list() });
+      return invalidateStationLists(queryClient);
     },
   });
 }
@@ -65,9 +73,8 @@ export function useDeleteStationMutation(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => api<void>(`/stations/${id}`, { method: 'DELETE' }),
-    onSuccess: () => {
-      queryClient.removeQueries({ queryKey: stationKeys.detail(id) });
-      return queryClient.invalidateQueries({ queryKey: stationKeys.list() });
-    },
+    // the detail screen is still on show while it navigates away: refetch only the lists, so it does
+    // not ask for a station that is gone; its own cache entry is collected once nothing watches it
+    onSuccess: () => invalidateStationLists(queryClient),
   });
 }

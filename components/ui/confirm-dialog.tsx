@@ -1,4 +1,5 @@
-import { Pressable, StyleSheet, View } from 'react-native';
+import { useEffect } from 'react';
+import { Platform, Pressable, StyleSheet, View } from 'react-native';
 
 import { Button } from './button';
 import { Text } from './text';
@@ -35,6 +36,15 @@ export function ConfirmDialog({
   onCancel,
 }: ConfirmDialogProps) {
   const { colors } = useAppTheme();
+  // Escape closes the dialog in the browser, as people expect of a dialog
+  useEffect(() => {
+    if (!visible || busy || Platform.OS !== 'web' || typeof document === 'undefined') return;
+    const onKey = (event: KeyboardEvent) => {
+      if (event.key === 'Escape') onCancel();
+    };
+    document.addEventListener('keydown', onKey);
+    return () => document.removeEventListener('keydown', onKey);
+  }, [visible, busy, onCancel]);
   if (!visible) return null;
   return (
     <View style={[StyleSheet.absoluteFill, styles.backdrop, { backgroundColor: colors.overlay }]}>

@@ -1,0 +1,51 @@
+import { errorResponse, jsonResponse, renderRoute, screenText, stubFetch } from '../utils/render';
+
+import { screen, waitFor } from '@testing-library/react-native';
+
+import SignInRoute from '@/app/(auth)/sign-in';
+import AuthLayoutRoute from '@/app/(auth)/_layout';
+import OverviewRoute from '@/app/(tabs)/index';
+import TabsLayoutRoute from '@/app/(tabs)/_layout';
+import RootLayoutRoute from '@/app/_layout';
+import type { SessionUser } from '@/shared/api/contracts';
+
+const routes = {
+  _layout: RootLayoutRoute,
+  '(auth)/_layout': AuthLayoutRoute,
+  '(auth)/sign-in': SignInRoute,
+  '(tabs)/_layout': TabsLayoutRoute,
+  '(tabs)/index': OverviewRoute,
+  '(tabs)/stations': () => null,
+  '(tabs)/club': () => null,
+  '(tabs)/settings': () => null,
+  '+not-found': () => null,
+};
+
+const operator: SessionUser = {
+  id: 2,
+  email: 'operator@faintline.example',
+  displayName: 'Ilse Marrow',
+  callsign: 'Q1IMW',
+  clubs: [],
+  adminOfClubIds: [],
+};
+
+describe('root layout guards', () => {
+  it('when signed out, a visit to / lands on the sign-in screen', async () => {
+    stubFetch(() => errorResponse(401, 'unauthenticated', 'Sign in first'));
+    const router = renderRoute(routes, { initialUrl: '/' });
+
+    await waitFor(() => expect(screen.getByLabelText('Sign in')).toBeTruthy());
+    expect(router.getPathname()).toBe('/sign-in');
+  });
+
+  it('when signed in, / shows the overview with the greeting and the live clock', async () => {
+    stubFetch((call) => (call.url.endsWith('/auth/me') ? jsonResponse(200, operator) : jsonResponse(200, [])));
+    const router = renderRoute(routes, { initialUrl: '/' });
+
+    await waitFor(() => expect(screenText()).toContain('Hello, Ilse Marrow'));
+    expect(screenText()).toMatch(/\d\d:\d\d:\d\d UTC/);
+    expect(screenText()).toContain('next slot in');
+    expect(router.getPathname()).toBe('/');
+  });
+});
