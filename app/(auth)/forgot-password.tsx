@@ -1,12 +1,10 @@
 import { Stack } from 'expo-router';
-import { Linking } from 'react-native';
 
 import { AuthShell } from '@/components/auth/auth-shell';
 import { ForgotPasswordForm } from '@/components/auth/forgot-password-form';
 import { useResetRequestMutation } from '@/components/auth/queries';
 import { DEV_INBOX_PATH, env } from '@/components/env';
-import { Button } from '@/components/ui/button';
-import { TextLink } from '@/components/ui/text-link';
+import { ServerPageLink, TextLink } from '@/components/ui/text-link';
 
 export default function ForgotPasswordRoute() {
   const request = useResetRequestMutation();
@@ -20,11 +18,10 @@ export default function ForgotPasswordRoute() {
           <>
             <TextLink href="/sign-in" label="Back to sign in" />
             {env.showDevInbox ? (
-              <Button
+              <ServerPageLink
+                path={DEV_INBOX_PATH}
                 label="Open the local test inbox"
-                variant="ghost"
-                accessibilityHint="Opens the development mail inbox of the local server"
-                onPress={() => Linking.openURL(DEV_INBOX_PATH)}
+                hint="Opens the development mail inbox of the local server in a new tab"
               />
             ) : null}
           </>

@@ -1,4 +1,5 @@
 import { Link, type Href } from 'expo-router';
+import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 
 import type { Station } from '@/shared/schemas';
@@ -98,36 +99,56 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
         ))}
       </View>
       {stations.map((station, index) => (
-        <Link key={station.id} href={hrefFor(station)} asChild>
-          <Pressable
-            accessibilityRole="link"
-            accessibilityLabel={openLabel(station)}
-            style={StyleSheet.flatten([
-              styles.row,
-              index < stations.length - 1 && { borderBottomWidth: 1, borderColor: colors.border },
-            ])}
-          >
-            <Text variant="label" numberOfLines={1} style={styles.colName}>
-              {station.name}
-            </Text>
-            {showOwner ? (
-              <Text numberOfLines={1} style={styles.colOwner}>
-                {station.ownerName}
-              </Text>
-            ) : null}
-            <Text variant="mono" tone="primary" style={styles.colCall}>
-              {station.callsign}
-            </Text>
-            <Text variant="mono" style={styles.colLoc}>
-              {formatLocator(station.locator)}
-            </Text>
-            <Text variant="caption" tone="muted" style={styles.colUpdated}>
-              {formatUtcDateTime(station.updatedAt).replace(' UTC', '')}
-            </Text>
-          </Pressable>
-        </Link>
+        <StationRow
+          key={station.id}
+          station={station}
+          href={hrefFor(station)}
+          showOwner={showOwner}
+          last={index === stations.length - 1}
+        />
       ))}
     </View>
+  );
+}
+
+type StationRowProps = { station: Station; href: Href; showOwner: boolean; last: boolean };
+
+function StationRow({ station, href, showOwner, last }: StationRowProps) {
+  const { colors } = useAppTheme();
+  const [hovered, setHovered] = useState(false);
+  return (
+    <Link href={href} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={openLabel(station)}
+        onHoverIn={() => setHovered(true)}
+        onHoverOut={() => setHovered(false)}
+        // Link's asChild spreads the child's style into an object: pass one flat object
+        style={StyleSheet.flatten([
+          styles.row,
+          !last && { borderBottomWidth: 1, borderColor: colors.border },
+          hovered && { backgroundColor: colors.primarySoft },
+        ])}
+      >
+        <Text variant="label" numberOfLines={1} style={styles.colName}>
+          {station.name}
+        </Text>
+        {showOwner ? (
+          <Text numberOfLines={1} style={styles.colOwner}>
+            {station.ownerName}
+          </Text>
+        ) : null}
+        <Text variant="mono" tone="primary" style={styles.colCall}>
+          {station.callsign}
+        </Text>
+        <Text variant="mono" style={styles.colLoc}>
+          {formatLocator(station.locator)}
+        </Text>
+        <Text variant="caption" tone="muted" style={styles.colUpdated}>
+          {formatUtcDateTime(station.updatedAt).replace(' UTC', '')}
+        </Text>
+      </Pressable>
+    </Link>
   );
 }
 

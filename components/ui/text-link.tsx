@@ -1,5 +1,5 @@
 import { Link, type Href } from 'expo-router';
-import { Pressable, StyleSheet } from 'react-native';
+import { Linking, Pressable, StyleSheet } from 'react-native';
 
 import { Text, type TextProps } from './text';
 
@@ -19,3 +19,22 @@ export function TextLink({ href, label, variant = 'label' }: TextLinkProps) {
 }
 
 const styles = StyleSheet.create({ text: { textDecorationLine: 'underline' } });
+
+export type ServerPageLinkProps = { path: string; label: string; hint?: string };
+
+/** A link to a page the server serves outside the app (opened by the browser, not the router). */
+export function ServerPageLink({ path, label, hint }: ServerPageLinkProps) {
+  return (
+    <Pressable
+      accessibilityRole="link"
+      accessibilityLabel={label}
+      accessibilityHint={hint}
+      hitSlop={6}
+      onPress={() => Linking.openURL(path)}
+    >
+      <Text variant="label" tone="primary" style={styles.text}>
+        {label}
+      </Text>
+    </Pressable>
+  );
+}
