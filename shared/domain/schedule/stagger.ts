@@ -45,6 +45,7 @@ type Flat = {
   n: number;
   station: Int32Array;
   slot: Float64Array;
+  firstSlot: number;
   band: Uint8Array;
   carrier: Float64Array;
   audio: Float64Array;
@@ -100,69 +101,53 @@ function flatten(stations: readonly FleetStation[]): Flat {
   for (let t = 0; t < n; t++) order[fill[flat.bucket[t]]++] = t;
   const carrier = flat.carrier;
   for (let k = 0; k < buckets; k++) sortByCarrier(order, bucketStart[k], bucketStart[k + 1], carrier);
-  return { ...flat, order, bucketStart };
+  return { ...flat, firstSlot: n ? minSlot : 0, order, bucketStart };
 }
 
+/** Sorts order[from … to) by carrier, in place (insertion sort for short runs, quicksort above). */
 function sortByCarrier(order: Int32Array, from: number, to: number, carrier: Float64Array): void {
-  if (to - from < 2) return;
-  if (to - from <= 32) {
-    for (let i = from + 1; i < to; i++) {
-      const t = order[i];
-      const c = carrier[t];
-      let j = i - 1;
-      while (j >= from && carrier[order[j]] > c) {
-        order[j + 1] = order[j];
+  while (to - from > 24) {
+    const mid = order[(from + to) >>> 1];
+    const pivot = carrier[mid];
+    let i = from;
+    let j = to - 1;
+    while (i <= j) {
+      while (carrier[order[i]] < pivot) i++;
+      while (carrier[order[j]] > pivot) j--;
+      if (i <= j) {
+        const x = order[i];
+        order[i] = order[j];
+        order[j] = x;
+        i++;
         j--;
       }
-      order[j + 1] = t;
     }
-    return;
+    // recurse into the smaller side, loop on the larger
+    if (j + 1 - from < to - i) {
+      sortByCarrier(order, from, j + 1, carrier);
+      from = i;
+    } else {
+      sortByCarrier(order, i, to, carrier);
+      to = j + 1;
+    }
   }
-  const part = Array.from(order.subarray(from, to)).sort((x, y) => carrier[x] - carrier[y] || x - y);
-  order.set(part, from);
+  for (let i = from + 1; i < to; i++) {
+    const t = order[i];
+    const c = carrier[t];
+    let j = i - 1;
+    while (j >= from && carrier[order[j]] > c) {
+      order[j + 1] = order[j];
+      j--;
+    }
+    order[j + 1] = t;
+  }
 }
 
-/** Conflict instances folded into pairs; keyed by (a, b, band) so the output order is fixed. */
-type PairTally = { add: (a: number, b: number, band: number, slot: number) => void; result: (stations: readonly FleetStation[]) => FleetConflict[] };
-
-function pairTally(stationCount: number): PairTally {
-  const index = new Map<number, number>();
-  const keys: number[] = [];
-  const counts: number[] = [];
-  const firsts: number[] = [];
-  return {
-    add(a, b, band, slot) {
-      const key = (Math.min(a, b) * stationCount + Math.max(a, b)) * BAND_COUNT + band;
-      const at = index.get(key);
-      if (at === undefined) {
-        index.set(key, keys.length);
-        keys.push(key);
-        counts.push(1);
-        firsts.push(slot);
-      } else {
-        counts[at]++;
-        if (slot < firsts[at]) firsts[at] = slot;
-      }
-    },
-    result(stations) {
-      const sorted = Array.from(keys.keys()).sort((x, y) => keys[x] - keys[y]);
-      return sorted.map((i) => {
-        const band = keys[i] % BAND_COUNT;
-        const pair = (keys[i] - band) / BAND_COUNT;
-        const a = Math.floor(pair / stationCount);
-        return {
-          a: stations[a].stationId,
-          b: stations[pair - a * stationCount].stationId,
-          bandId: BAND_IDS[band],
-          slotCount: counts[i],
-          firstSlotUtc: new Date(firsts[i] * SLOT_MS).toISOString(),
-        };
-      });
-    },
-  };
-}
-
-function sweep(flat: Flat, current: Float64Array, guard: number, tally: PairTally | null, degree: Float64Array | null): number {
+/**
+ * One pass over the sorted buckets: calls visit(t, u) for every two transmissions of
+ * different stations on one band in one slot whose carriers are closer than the guard.
+ */
+function sweep(flat: Flat, current: Float64Array, guard: number, visit: ((t: number, u: number) => void) | null): number {
   let instances = 0;
   const guardHz = guard - GUARD_TOLERANCE_HZ;
   const { order, bucketStart, station } = flat;
@@ -176,23 +161,61 @@ function sweep(flat: Flat, current: Float64Array, guard: number, tally: PairTall
         if (current[u] - c >= guardHz) break;
         if (station[u] === station[t]) continue;
         instances++;
-        if (tally) tally.add(station[t], station[u], flat.band[t], flat.slot[t]);
-        if (degree) {
-          degree[station[t]]++;
-          degree[station[u]]++;
-        }
+        if (visit) visit(t, u);
       }
     }
   }
   return instances;
 }
 
+/**
+ * The conflicts as pairs, ordered by (a, b, band) in input order. Two sweeps: the first
+ * counts each lower station's meetings, the second files them under it as
+ * (partner, band, slot) packed in one number; sorting each station's run groups the pairs.
+ */
+function tallyConflicts(flat: Flat, current: Float64Array, guardHz: number, stations: readonly FleetStation[]): FleetConflict[] {
+  const { station } = flat;
+  const counts = new Int32Array(stations.length + 1);
+  sweep(flat, current, guardHz, (t, u) => counts[Math.min(station[t], station[u]) + 1]++);
+  for (let s = 0; s < stations.length; s++) counts[s + 1] += counts[s];
+  const fill = counts.slice(0, stations.length);
+  const packed = new Float64Array(counts[stations.length]);
+  const SLOT_SPAN = 2 ** 22; // slots after the first: about 16 years
+  sweep(flat, current, guardHz, (t, u) => {
+    const [lo, hi] = station[t] < station[u] ? [station[t], station[u]] : [station[u], station[t]];
+    packed[fill[lo]++] = (hi * BAND_COUNT + flat.band[t]) * SLOT_SPAN + (flat.slot[t] - flat.firstSlot);
+  });
+  const out: FleetConflict[] = [];
+  const slotText = new Map<number, string>();
+  const textOf = (slot: number) => {
+    let text = slotText.get(slot);
+    if (text === undefined) slotText.set(slot, (text = new Date((slot + flat.firstSlot) * SLOT_MS).toISOString()));
+    return text;
+  };
+  for (let lo = 0; lo < stations.length; lo++) {
+    const run = packed.subarray(counts[lo], counts[lo + 1]).sort();
+    for (let i = 0; i < run.length; ) {
+      const group = Math.floor(run[i] / SLOT_SPAN);
+      let j = i + 1;
+      while (j < run.length && Math.floor(run[j] / SLOT_SPAN) === group) j++;
+      const band = group % BAND_COUNT;
+      out.push({
+        a: stations[lo].stationId,
+        b: stations[(group - band) / BAND_COUNT].stationId,
+        bandId: BAND_IDS[band],
+        slotCount: j - i,
+        firstSlotUtc: textOf(run[i] - group * SLOT_SPAN),
+      });
+      i = j;
+    }
+  }
+  return out;
+}
+
 /** Pairs of stations that meet in a slot on a band with carriers less than guardHz apart (fast method). */
 export function findFleetConflicts(stations: readonly FleetStation[], options: FleetOptions = {}): FleetConflict[] {
   const flat = flatten(stations);
-  const tally = pairTally(stations.length);
-  sweep(flat, flat.carrier, options.guardHz ?? DEFAULT_GUARD_HZ, tally, null);
-  return tally.result(stations);
+  return tallyConflicts(flat, flat.carrier, options.guardHz ?? DEFAULT_GUARD_HZ, stations);
 }
 
 /** The same answer by comparing every two stations slot by slot (O(stations² · transmissions)). */
@@ -250,124 +273,125 @@ export type FleetProposal = {
   proposals: OffsetProposal[];
   /** conflicts as planned now */
   conflicts: FleetConflict[];
-  /** conflicts left after the proposed offsets (too many stations for the window, say) */
+  /** conflicts left after the proposed offsets (more stations than the window holds, say) */
   remaining: FleetConflict[];
   movedCount: number;
-  /** stations that had a conflict but found no free offset */
+  /** stations that still meet someone after their turn */
   unresolved: (number | string)[];
 };
 
 /**
- * Greedy separation: stations with the most conflicts go first; a station that
- * still meets someone moves by the smallest shift (on a 0.01 Hz grid) that clears
- * every other station's carrier, as they stand, in all its slots, while keeping all
- * of its tones inside the window. Stations already clear are not moved.
+ * For station s: marks in `score` (a difference array over grid shifts firstShift + k·h)
+ * every shift that would bring one of its transmissions within the guard of another
+ * station's; returns how many of its meetings there are without a shift.
+ */
+function scoreShifts(flat: Flat, current: Float64Array, s: number, guardHz: number, firstShift: number, count: number, score: Int32Array): number {
+  const { order, bucketStart, station, bucket, stationStart } = flat;
+  const h = PROPOSAL_GRID_HZ;
+  let now = 0;
+  for (let t = stationStart[s]; t < stationStart[s + 1]; t++) {
+    const k = bucket[t];
+    const ct = current[t];
+    for (let i = bucketStart[k], end = bucketStart[k + 1]; i < end; i++) {
+      const u = order[i];
+      if (station[u] === s) continue;
+      const v = current[u] - ct;
+      if (v < guardHz && v > -guardHz) now++;
+      // shifts inside (v − guard, v + guard) meet u
+      let kFrom = Math.floor((v - guardHz - firstShift) / h) + 1;
+      let kTo = Math.ceil((v + guardHz - firstShift) / h) - 1;
+      if (kFrom < 0) kFrom = 0;
+      if (kTo > count - 1) kTo = count - 1;
+      if (kFrom <= kTo) {
+        score[kFrom]++;
+        score[kTo + 1]--;
+      }
+    }
+  }
+  return now;
+}
+
+/** Proposed offsets sit on this grid (Hz), so they read as 1496.3, not 1496.2487…. */
+export const PROPOSAL_GRID_HZ = 0.1;
+
+/**
+ * Greedy separation. Stations with the most meetings go first. For a station that still
+ * meets someone, every shift on the grid that keeps all its tones inside the window is
+ * scored by how many of its transmissions would then meet another station's carrier (as
+ * the others stand now); it takes the lowest score, the smallest shift among equals, and
+ * moves only when that beats staying put. Each move lowers the fleet's meetings, stations
+ * already clear never move, and a station that cannot get clear is reported unresolved.
  */
 export function proposeFleetOffsets(stations: readonly FleetStation[], options: FleetOptions = {}): FleetProposal {
-  const guardHz = options.guardHz ?? DEFAULT_GUARD_HZ;
+  const guard = options.guardHz ?? DEFAULT_GUARD_HZ;
+  const guardHz = guard - GUARD_TOLERANCE_HZ;
   const range = options.range ?? allowedOffsetRange();
   const flat = flatten(stations);
+  const { order, bucketStart, station, bucket, stationStart, audio } = flat;
   const degree = new Float64Array(stations.length);
-  const before = pairTally(stations.length);
-  sweep(flat, flat.carrier, guardHz, before, degree);
+  sweep(flat, flat.carrier, guard, (t, u) => {
+    degree[station[t]]++;
+    degree[station[u]]++;
+  });
+  const conflicts = tallyConflicts(flat, flat.carrier, guard, stations);
   const current = Float64Array.from(flat.carrier);
-  const delta = new Float64Array(stations.length);
+  const shiftOf = new Float64Array(stations.length);
   const candidates = Array.from(degree.keys())
     .filter((s) => degree[s] > 0)
     .sort((x, y) => degree[y] - degree[x] || x - y);
-  const { order, bucketStart, station, bucket, stationStart, audio } = flat;
   const unresolved: (number | string)[] = [];
   let movedCount = 0;
+  let score = new Int32Array(0);
 
   for (const s of candidates) {
     const from = stationStart[s];
     const to = stationStart[s + 1];
-    let meets = false;
-    for (let t = from; t < to && !meets; t++) {
-      for (let i = bucketStart[bucket[t]]; i < bucketStart[bucket[t] + 1]; i++) {
-        const u = order[i];
-        if (station[u] !== s && Math.abs(current[u] - current[t]) < guardHz - GUARD_TOLERANCE_HZ) {
-          meets = true;
-          break;
-        }
-      }
-    }
-    if (!meets) continue;
     let lowest = Infinity;
     let highest = -Infinity;
     for (let t = from; t < to; t++) {
       lowest = Math.min(lowest, audio[t]);
       highest = Math.max(highest, audio[t]);
     }
-    // shifts keeping every transmission inside the window, then minus the forbidden ones
-    let free: number[] = [range.lowHz - lowest, range.highHz - highest];
-    for (let t = from; t < to && free.length; t++) {
-      for (let i = bucketStart[bucket[t]]; i < bucketStart[bucket[t] + 1] && free.length; i++) {
-        const u = order[i];
-        if (station[u] === s) continue;
-        const v = current[u] - current[t];
-        free = subtract(free, v - guardHz, v + guardHz);
+    // grid points: base + p0 + k·h for k = 0 … K−1, every one keeping the tones inside
+    const base = stations[s].currentOffsetHz;
+    const h = PROPOSAL_GRID_HZ;
+    const firstShift = Math.ceil((base + range.lowHz - lowest) / h - 1e-9) * h - base;
+    const count = Math.floor((range.highHz - highest - firstShift) / h + 1e-9) + 1;
+    if (count > score.length) score = new Int32Array(count + 1);
+    else score.fill(0, 0, count + 1);
+    const now = scoreShifts(flat, current, s, guardHz, firstShift, count, score);
+    if (now === 0) continue; // cleared by an earlier move
+    let best = -1;
+    let bestScore = now;
+    let running = 0;
+    for (let k = 0; k < count; k++) {
+      running += score[k];
+      const shift = firstShift + k * h;
+      if (running < bestScore || (running === bestScore && best >= 0 && Math.abs(shift) < Math.abs(firstShift + best * h))) {
+        best = k;
+        bestScore = running;
       }
     }
-    const shift = nearestShift(free, stations[s].currentOffsetHz);
-    if (shift === null) {
-      unresolved.push(stations[s].stationId);
-      continue;
+    if (best >= 0) {
+      const shift = Math.round((base + firstShift + best * h) / h) * h - base;
+      shiftOf[s] = shift;
+      for (let t = from; t < to; t++) current[t] = flat.carrier[t] + shift;
+      movedCount++;
     }
-    delta[s] = shift;
-    for (let t = from; t < to; t++) current[t] = flat.carrier[t] + shift;
-    movedCount++;
+    if (bestScore > 0) unresolved.push(stations[s].stationId);
   }
 
   for (let k = 0; k + 1 < bucketStart.length; k++) sortByCarrier(order, bucketStart[k], bucketStart[k + 1], current);
-  const after = pairTally(stations.length);
-  sweep(flat, current, guardHz, after, null);
+  const remaining = tallyConflicts(flat, current, guard, stations);
   return {
     proposals: stations.map((st, s) => ({
       stationId: st.stationId,
       currentOffsetHz: st.currentOffsetHz,
-      proposedOffsetHz: delta[s] === 0 ? st.currentOffsetHz : st.currentOffsetHz + delta[s],
+      proposedOffsetHz: shiftOf[s] === 0 ? st.currentOffsetHz : Math.round((st.currentOffsetHz + shiftOf[s]) / PROPOSAL_GRID_HZ) * PROPOSAL_GRID_HZ,
     })),
-    conflicts: before.result(stations),
-    remaining: after.result(stations),
+    conflicts,
+    remaining,
     movedCount,
     unresolved,
   };
-}
-
-/** Removes the open interval (a, b) from closed segments stored flat as [lo0, hi0, lo1, hi1, …]. */
-function subtract(segments: number[], a: number, b: number): number[] {
-  const out: number[] = [];
-  for (let i = 0; i < segments.length; i += 2) {
-    const lo = segments[i];
-    const hi = segments[i + 1];
-    if (b <= lo || a >= hi) {
-      out.push(lo, hi);
-      continue;
-    }
-    if (lo <= a) out.push(lo, a);
-    if (b <= hi) out.push(b, hi);
-  }
-  return out;
-}
-
-/**
- * The shift in the segments nearest to 0 that lands the base offset on a 0.01 Hz grid
- * (so a proposed offset reads as 1496.25, not 1496.2487…); null when none does.
- */
-function nearestShift(segments: number[], baseHz: number): number | null {
-  let best: number | null = null;
-  for (let i = 0; i < segments.length; i += 2) {
-    const lo = segments[i];
-    const hi = segments[i + 1];
-    if (lo > hi) continue;
-    let x: number;
-    if (lo <= 0 && hi >= 0) x = 0;
-    else if (lo > 0) x = Math.ceil((baseHz + lo) * 100) / 100 - baseHz;
-    else x = Math.floor((baseHz + hi) * 100) / 100 - baseHz;
-    // float noise of the grid step stays far inside the guard tolerance
-    if (x < lo - GUARD_TOLERANCE_HZ / 10 || x > hi + GUARD_TOLERANCE_HZ / 10) continue; // segment narrower than the grid
-    if (best === null || Math.abs(x) < Math.abs(best)) best = x;
-  }
-  return best;
 }
