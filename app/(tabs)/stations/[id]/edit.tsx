@@ -4,6 +4,7 @@ import { useSessionQuery } from '@/components/auth/queries';
 import { useStationQuery, useUpdateStationMutation } from '@/components/stations/queries';
 import { StationForm } from '@/components/stations/station-form';
 import { Card } from '@/components/ui/card';
+import { formatLocator } from '@/components/ui/format';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { layout } from '@/components/ui/theme';
@@ -38,7 +39,7 @@ export default function EditStationRoute() {
           defaultValues={{
             name: station.data.name,
             callsign: station.data.callsign,
-            locator: station.data.locator,
+            locator: formatLocator(station.data.locator),
             notes: station.data.notes,
           }}
           submitLabel="Save station"
