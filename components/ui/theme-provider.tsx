@@ -1,5 +1,5 @@
-import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
-import { useColorScheme } from 'react-native';
+import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
+import { Platform, useColorScheme } from 'react-native';
 
 import { palettes, type ColorScheme, type Palette, type ThemePreference } from './theme';
 import { readThemePreference, writeThemePreference } from './theme-storage';
@@ -26,6 +26,12 @@ export function AppThemeProvider({ children, initialPreference }: AppThemeProvid
     setPreferenceState(next);
   }, []);
   const scheme: ColorScheme = preference === 'system' ? (system === 'dark' ? 'dark' : 'light') : preference;
+  // the page behind the app (overscroll, scrollbars, form controls) follows the scheme too
+  useEffect(() => {
+    if (Platform.OS !== 'web' || typeof document === 'undefined') return;
+    document.documentElement.style.colorScheme = scheme;
+    document.body.style.backgroundColor = palettes[scheme].background;
+  }, [scheme]);
   const value = useMemo(
     () => ({ scheme, colors: palettes[scheme], preference, setPreference }),
     [scheme, preference, setPreference],
