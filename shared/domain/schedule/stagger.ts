@@ -27,7 +27,12 @@ export type FleetStation = {
 /** Two stations that meet: `a` comes before `b` in the input order. */
 export type FleetConflict = { a: number | string; b: number | string; bandId: BandId; slotCount: number; firstSlotUtc: string };
 export type OffsetProposal = { stationId: number | string; currentOffsetHz: number; proposedOffsetHz: number };
-export type FleetOptions = { guardHz?: number; range?: OffsetRange };
+export type FleetOptions = {
+  guardHz?: number;
+  range?: OffsetRange;
+  /** proposals only: move a station only to a shift where it meets no one (default: also to fewer meetings) */
+  moveOnlyWhenClear?: boolean;
+};
 
 const BAND_COUNT = BAND_IDS.length;
 const bandIndex = new Map<BandId, number>(BAND_IDS.map((id, i) => [id, i]));
@@ -372,7 +377,7 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
         bestScore = running;
       }
     }
-    if (best >= 0) {
+    if (best >= 0 && !(options.moveOnlyWhenClear && bestScore > 0)) {
       const shift = Math.round((base + firstShift + best * h) / h) * h - base;
       shiftOf[s] = shift;
       for (let t = from; t < to; t++) current[t] = flat.carrier[t] + shift;

@@ -124,6 +124,19 @@ describe('proposeFleetOffsets', () => {
     );
   });
 
+  it('when told to move only to clear offsets, conflicts remain only between stations it left alone', () => {
+    fc.assert(
+      fc.property(crowdedFleetArb(false, 16), (fleet) => {
+        const r = proposeFleetOffsets(fleet, { moveOnlyWhenClear: true });
+        const moved = new Set(r.proposals.filter((p) => p.proposedOffsetHz !== p.currentOffsetHz).map((p) => p.stationId));
+        expect(moved.size).toBe(r.movedCount);
+        expect(r.remaining.every((c) => !moved.has(c.a) && !moved.has(c.b))).toBe(true);
+        expect(findFleetConflictsPairwise(shifted(fleet, r.proposals))).toEqual(r.remaining);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('when three stations on one schedule collide every slot, re-planning with the proposed offsets leaves no conflict', () => {
     const unit = unitWithFilters(['20m']);
     const schedule = rules({ cadence: { kind: 'every-nth', nth: 5 } });
