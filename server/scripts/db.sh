@@ -52,7 +52,7 @@ start() {
       --pid-file="$DATA/mysqld.pid" --log-error="$DATA/error.log" --bind-address=127.0.0.1 \
       --port="$PORT" --skip-name-resolve --character-set-server=utf8mb4 \
       --collation-server=utf8mb4_unicode_ci --innodb-buffer-pool-size=256M \
-      --innodb-flush-log-at-trx-commit=2 </dev/null >/dev/null 2>&1 &
+      --innodb-flush-log-at-trx-commit=2 </dev/null >/dev/null 2>&1 9>&- &
     for _ in $(seq 1 150); do ping_db && break; sleep 0.2; done
     ping_db || { say "MariaDB did not start; see $DATA/error.log"; tail -20 "$DATA/error.log" >&2; exit 1; }
     say "started on 127.0.0.1:$PORT"

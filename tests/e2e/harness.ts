@@ -90,8 +90,8 @@ export async function openBrowser(viewport: { width: number; height: number }): 
 
 export async function signIn(page: Page, email: string, password = 'faintline-demo') {
   await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
+  await page.getByLabel('E-mail', { exact: true }).fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
@@ -99,4 +99,9 @@ export async function screenshot(page: Page, name: string) {
   if (process.env.E2E_SCREENSHOTS) {
     await page.screenshot({ path: path.join(ROOT, 'screenshots', `${name}.png`), fullPage: false });
   }
+}
+
+/** The first visible element with this text (screens lower in the stack stay in the DOM, hidden). */
+export function visibleText(page: Page, text: string | RegExp) {
+  return page.getByText(text).locator('visible=true').first();
 }

@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
-import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, type RunningServer } from './harness';
+import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, visibleText, type RunningServer } from './harness';
 
 let server: RunningServer;
 before(async () => {
@@ -15,28 +15,28 @@ for (const viewport of VIEWPORTS) {
       const { page } = browser;
       try {
         await signIn(page, 'operator@faintline.example');
-        await page.getByText('Ilse Marrow', { exact: false }).first().waitFor();
+        await visibleText(page, /Ilse Marrow/).waitFor();
         await page.goto(`${BASE_URL}/stations/new`);
         const name = `Balcony test ${viewport.name}`;
-        await page.getByLabel('Name').fill(name);
-        await page.getByLabel('Callsign').fill('q1imw');
-        await page.getByLabel('Locator').fill('ZZ99');
+        await page.getByLabel('Name', { exact: true }).fill(name);
+        await page.getByLabel('Callsign', { exact: true }).fill('q1imw');
+        await page.getByLabel('Locator', { exact: true }).fill('ZZ99');
         await page.getByRole('button', { name: 'Save station' }).click();
-        await page.getByText(/4- or 6-character Maidenhead locator/).first().waitFor();
+        await visibleText(page, /4- or 6-character Maidenhead locator/).waitFor();
         await screenshot(page, `e2e-station-error-${viewport.name}`);
 
-        await page.getByLabel('Locator').fill('IO91wm');
+        await page.getByLabel('Locator', { exact: true }).fill('IO91wm');
         await page.getByRole('button', { name: 'Save station' }).click();
         await page.waitForURL(/\/stations\/\d+$/);
-        await page.getByText('IO91WM').first().waitFor();
+        await visibleText(page, /IO91wm/i).waitFor();
 
         await page.goto(`${BASE_URL}/stations`);
-        await page.getByText(name).first().click();
+        await visibleText(page, name).click();
         await page.waitForURL(/\/stations\/\d+$/);
         await page.getByRole('button', { name: 'Edit' }).click();
-        await page.getByLabel('Name').fill(`${name} (edited)`);
+        await page.getByLabel('Name', { exact: true }).fill(`${name} (edited)`);
         await page.getByRole('button', { name: 'Save station' }).click();
-        await page.getByText(`${name} (edited)`).first().waitFor();
+        await visibleText(page, `${name} (edited)`).waitFor();
 
         await page.goto(`${BASE_URL}/settings`);
         await page.getByRole('button', { name: 'Sign out' }).click();
