@@ -9,3 +9,4 @@ export * from './preview';
 export * from './validate';
 export * from './presets';
 export * from './stagger';
+export * from './stagger-pairwise';

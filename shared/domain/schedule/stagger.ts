@@ -5,8 +5,8 @@
  *
  * Fast method: bucket every transmission by (slot, band) with a counting sort,
  * sort each bucket by carrier, and sweep: only neighbours closer than the guard
- * are compared, so the work is about O(n log n). The pairwise method compares
- * every two stations and exists for tests and the benchmark.
+ * are compared, so the work is about O(n log n). The pairwise method
+ * (stagger-pairwise.ts) compares every two stations, for tests and the benchmark.
  */
 import { BAND_IDS, type BandId } from '../bands';
 import { SLOT_MS } from '../timing';
@@ -35,7 +35,8 @@ export type FleetOptions = {
 };
 
 const BAND_COUNT = BAND_IDS.length;
-const bandIndex = new Map<BandId, number>(BAND_IDS.map((id, i) => [id, i]));
+/** Position of each band in BAND_IDS (the bucket and sort order). */
+export const bandIndex = new Map<BandId, number>(BAND_IDS.map((id, i) => [id, i]));
 
 export function fleetStationFromPlan(stationId: number | string, currentOffsetHz: number, transmissions: readonly PlannedTransmission[]): FleetStation {
   return {
@@ -221,57 +222,6 @@ function tallyConflicts(flat: Flat, current: Float64Array, guardHz: number, stat
 export function findFleetConflicts(stations: readonly FleetStation[], options: FleetOptions = {}): FleetConflict[] {
   const flat = flatten(stations);
   return tallyConflicts(flat, flat.carrier, options.guardHz ?? DEFAULT_GUARD_HZ, stations);
-}
-
-/** The same answer by comparing every two stations slot by slot (O(stations² · transmissions)). */
-export function findFleetConflictsPairwise(stations: readonly FleetStation[], options: FleetOptions = {}): FleetConflict[] {
-  const guardHz = (options.guardHz ?? DEFAULT_GUARD_HZ) - GUARD_TOLERANCE_HZ;
-  const bySlot = stations.map((s) =>
-    s.transmissions
-      .map((t) => ({ slot: Math.floor(t.startMs / SLOT_MS), band: bandIndex.get(t.bandId) ?? 0, carrierHz: t.carrierHz }))
-      .sort((x, y) => x.slot - y.slot),
-  );
-  const out: FleetConflict[] = [];
-  for (let a = 0; a < stations.length; a++) {
-    for (let b = a + 1; b < stations.length; b++) {
-      const ta = bySlot[a];
-      const tb = bySlot[b];
-      const perBand = new Map<number, { count: number; first: number }>();
-      let i = 0;
-      let j = 0;
-      while (i < ta.length && j < tb.length) {
-        if (ta[i].slot < tb[j].slot) i++;
-        else if (ta[i].slot > tb[j].slot) j++;
-        else {
-          const slot = ta[i].slot;
-          const jEnd = tb.findIndex((t, k) => k >= j && t.slot !== slot);
-          const jStop = jEnd === -1 ? tb.length : jEnd;
-          for (; i < ta.length && ta[i].slot === slot; i++) {
-            for (let k = j; k < jStop; k++) {
-              if (ta[i].band === tb[k].band && Math.abs(ta[i].carrierHz - tb[k].carrierHz) < guardHz) {
-                const seen = perBand.get(ta[i].band);
-                if (seen) {
-                  seen.count++;
-                  seen.first = Math.min(seen.first, slot);
-                } else perBand.set(ta[i].band, { count: 1, first: slot });
-              }
-            }
-          }
-          j = jStop;
-        }
-      }
-      for (const [band, seen] of [...perBand].sort((x, y) => x[0] - y[0])) {
-        out.push({
-          a: stations[a].stationId,
-          b: stations[b].stationId,
-          bandId: BAND_IDS[band],
-          slotCount: seen.count,
-          firstSlotUtc: new Date(seen.first * SLOT_MS).toISOString(),
-        });
-      }
-    }
-  }
-  return out;
 }
 
 export type FleetProposal = {
