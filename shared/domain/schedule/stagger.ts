@@ -182,14 +182,17 @@ function sweep(flat: Flat, current: Float64Array, guard: number, visit: ((t: num
 function tallyConflicts(flat: Flat, current: Float64Array, guardHz: number, stations: readonly FleetStation[]): FleetConflict[] {
   const { station } = flat;
   const counts = new Int32Array(stations.length + 1);
-  sweep(flat, current, guardHz, (t, u) => counts[Math.min(station[t], station[u]) + 1]++);
+  sweep(flat, current, guardHz, (t, u) => counts[(station[t] < station[u] ? station[t] : station[u]) + 1]++);
   for (let s = 0; s < stations.length; s++) counts[s + 1] += counts[s];
   const fill = counts.slice(0, stations.length);
   const packed = new Float64Array(counts[stations.length]);
   const SLOT_SPAN = 2 ** 22; // slots after the first: about 16 years
+  const { band, slot, firstSlot } = flat;
   sweep(flat, current, guardHz, (t, u) => {
-    const [lo, hi] = station[t] < station[u] ? [station[t], station[u]] : [station[u], station[t]];
-    packed[fill[lo]++] = (hi * BAND_COUNT + flat.band[t]) * SLOT_SPAN + (flat.slot[t] - flat.firstSlot);
+    const a = station[t];
+    const b = station[u];
+    const hi = a < b ? b : a;
+    packed[fill[a < b ? a : b]++] = (hi * BAND_COUNT + band[t]) * SLOT_SPAN + (slot[t] - firstSlot);
   });
   const out: FleetConflict[] = [];
   const slotText = new Map<number, string>();
