@@ -197,6 +197,8 @@ function stepFor(plan: CompiledPlan, ordinal: number, hourUtc: number): ActiveSt
 
 export type PlanResult = {
   transmissions: PlannedTransmission[];
+  /** the station's messages with their 162 symbols; a transmission's messageIndex points here */
+  messages: readonly MessageOnAir[];
   skippedSteps: SkippedStep[];
   warnings: string[];
   /** why some or all of the range has no transmissions */
@@ -211,6 +213,7 @@ export type PlanResult = {
 export function expandCompiled(plan: CompiledPlan, fromMs: number, toMs: number): PlanResult {
   const result: PlanResult = {
     transmissions: [],
+    messages: plan.messages,
     skippedSteps: plan.skippedSteps,
     warnings: plan.warnings,
     quiet: [...plan.blocked],

@@ -309,3 +309,15 @@ describe('preview helpers', () => {
     expect(next[0].startUtc.slice(0, 10)).toBe('2026-12-09');
   });
 });
+
+describe('symbols reference', () => {
+  it('when a plan is expanded, each messageIndex points at that message’s 162 symbols', () => {
+    const station = stationOn(['20m'], { locator: 'IO91wm' });
+    const r = expandPlan({ schedule: rules({ cadence: { kind: 'every-nth', nth: 5 } }), station, unit: unitWithFilters(['20m']), ...day });
+    expect(r.messages.map((m) => m.text)).toEqual(['Q1IMW IO91 23', '<Q1IMW> IO91WM 23']);
+    for (const t of r.transmissions) {
+      expect(r.messages[t.messageIndex]).toMatchObject({ text: t.messageText, type: t.messageType });
+      expect(r.messages[t.messageIndex].symbols).toHaveLength(162);
+    }
+  });
+});
