@@ -8,6 +8,7 @@ import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
 import { healthRouter } from './features/health/health.router';
+import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
 import { createStorage, type FileStorage } from './storage';
@@ -77,6 +78,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   );
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
+  api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations', stationsRouter({ sequelize }));
   api.use('/units', unitsRouter({ storage, logger }));
   api.use('/clubs', clubsRouter());

@@ -2,11 +2,13 @@ import type { Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-accounts-and-stations';
 import * as m0002 from './migrations/0002-units-and-station-bands';
+import * as m0003 from './migrations/0003-schedules-and-clubs';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
   { name: '0001-accounts-and-stations', ...m0001 },
   { name: '0002-units-and-station-bands', ...m0002 },
+  { name: '0003-schedules-and-clubs', ...m0003 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

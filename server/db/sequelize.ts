@@ -2,6 +2,7 @@ import { Sequelize } from 'sequelize';
 import { ClubModel } from './models/club.model';
 import { MembershipModel } from './models/membership.model';
 import { PasswordResetModel } from './models/password-reset.model';
+import { ScheduleModel } from './models/schedule.model';
 import { StationBandModel } from './models/station-band.model';
 import { StationModel } from './models/station.model';
 import { UnitPhotoModel } from './models/unit-photo.model';
@@ -26,6 +27,7 @@ export function createSequelize(databaseUrl: string): Sequelize {
   UnitModel.initModel(sequelize);
   UnitPhotoModel.initModel(sequelize);
   StationBandModel.initModel(sequelize);
+  ScheduleModel.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });
@@ -37,5 +39,6 @@ export function createSequelize(databaseUrl: string): Sequelize {
   UnitModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });
   UnitModel.hasMany(UnitPhotoModel, { foreignKey: 'unitId', as: 'photos' });
   StationModel.hasMany(StationBandModel, { foreignKey: 'stationId', as: 'bands' });
+  StationModel.hasOne(ScheduleModel, { foreignKey: 'stationId', as: 'schedule' });
   return sequelize;
 }

@@ -2,3 +2,4 @@ export * from './fields';
 export * from './auth';
 export * from './unit';
 export * from './station';
+export * from './schedule';

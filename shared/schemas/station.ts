@@ -70,6 +70,8 @@ export type Station = {
   /** the last guided measurement's reference error, ppm */
   referenceErrorPpm: number | null;
   bands: StationBand[];
+  /** set while a club admin has stopped the station */
+  suspension: { at: string; reason: string; clubId: number | null } | null;
   createdAt: string;
   updatedAt: string;
 };

@@ -37,6 +37,7 @@ const attic: Station = {
   audioOffsetHz: 1500,
   transmitEnabled: false,
   referenceErrorPpm: null,
+  suspension: null,
   bands: [],
   createdAt: '2026-11-28T09:12:00.000Z',
   updatedAt: '2026-12-01T18:42:00.000Z',

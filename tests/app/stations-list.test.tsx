@@ -22,6 +22,7 @@ const station = (overrides: Partial<Station>): Station => ({
   audioOffsetHz: 1500,
   transmitEnabled: false,
   referenceErrorPpm: null,
+  suspension: null,
   bands: [],
   createdAt: '2026-11-30T09:00:00.000Z',
   updatedAt: '2026-12-01T18:42:00.000Z',

@@ -12,6 +12,9 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
   declare audioOffsetHz: number;
   declare transmitEnabled: boolean;
   declare referenceErrorPpm: number | null;
+  declare suspendedAt: Date | null;
+  declare suspendedReason: string | null;
+  declare suspendedByClubId: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +32,9 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
         audioOffsetHz: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1500 },
         transmitEnabled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         referenceErrorPpm: { type: DataTypes.DOUBLE, allowNull: true },
+        suspendedAt: { type: DataTypes.DATE(3), allowNull: true },
+        suspendedReason: { type: DataTypes.STRING(300), allowNull: true },
+        suspendedByClubId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -32,6 +32,7 @@ function toStation(row: Row): Station {
     transmitEnabled: row.transmitEnabled,
     referenceErrorPpm: row.referenceErrorPpm,
     bands: (row.bands ?? []).map(toBand).sort((a, b) => a.bandId.localeCompare(b.bandId)),
+    suspension: row.suspendedAt ? { at: row.suspendedAt.toISOString(), reason: row.suspendedReason ?? '', clubId: row.suspendedByClubId } : null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -68,7 +69,7 @@ export type StationValues = {
 };
 
 export async function insert(ownerId: number, values: StationValues) {
-  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null });
+  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null, suspendedAt: null, suspendedReason: null, suspendedByClubId: null });
   return (await findById(row.id))!;
 }
 
@@ -96,4 +97,13 @@ export async function upsertBand(
 
 export async function setReferenceError(id: number, referenceErrorPpm: number | null, transaction?: Transaction) {
   await StationModel.update({ referenceErrorPpm }, { where: { id }, transaction });
+}
+
+export async function setSuspension(id: number, suspension: { reason: string; clubId: number } | null, transaction?: Transaction) {
+  await StationModel.update(
+    suspension
+      ? { suspendedAt: new Date(), suspendedReason: suspension.reason, suspendedByClubId: suspension.clubId }
+      : { suspendedAt: null, suspendedReason: null, suspendedByClubId: null },
+    { where: { id }, transaction },
+  );
 }

@@ -61,11 +61,13 @@ export async function startTestServer(overrides: Record<string, string> = {}): P
   };
 }
 
-const TABLES = ['Sessions', 'password_resets', 'station_bands', 'unit_photos', 'stations', 'units', 'club_memberships', 'clubs', 'users'];
-
+/** Empties every table but the migration record, so each test starts from nothing. */
 export async function truncateAll(sequelize: Sequelize) {
+  const [rows] = await sequelize.query(
+    "SELECT TABLE_NAME AS name FROM information_schema.TABLES WHERE TABLE_SCHEMA = DATABASE() AND TABLE_NAME <> 'schema_migrations'",
+  );
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
-  for (const table of TABLES) await sequelize.query(`TRUNCATE TABLE \`${table}\``);
+  for (const { name } of rows as { name: string }[]) await sequelize.query(`TRUNCATE TABLE \`${name}\``);
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
 }
 

@@ -1,0 +1,78 @@
+import type { Sequelize } from 'sequelize';
+import type { SessionUser } from '@/shared/api/contracts';
+import { validateSchedule } from '@/shared/domain/schedule';
+import { applySchedulePatch, type ScheduleValues } from '@/shared/schemas/schedule';
+import { AppError } from '../../lib/app-error';
+import { getFor as getStation, getOwnedBy as getOwnStation } from '../stations/stations.service';
+import * as unitsRepo from '../units/units.repo';
+import { planFor } from './plan';
+import * as repo from './schedules.repo';
+
+export const MAX_PLAN_RANGE_MS = 8 * 86_400_000;
+
+async function unitOf(unitId: number | null) {
+  return unitId === null ? null : unitsRepo.findById(unitId);
+}
+
+/** Blocking problems (an unfiltered band, tones outside the window, duty above 50 %) stop a save. */
+async function refuseBlocked(stationId: number, values: ScheduleValues, user: SessionUser) {
+  const station = await getOwnStation(user, stationId);
+  const issues = validateSchedule({ schedule: { ...values, stationId }, station, unit: await unitOf(station.unitId) });
+  const blocking = issues.filter((i) => i.level === 'block');
+  if (blocking.length) {
+    const fields: Record<string, string> = {};
+    for (const issue of blocking) fields[issue.stepIndex === undefined ? 'schedule' : `steps.${issue.stepIndex}`] ??= issue.message;
+    throw new AppError('bad-request', blocking[0].message, fields);
+  }
+  return issues;
+}
+
+export async function getFor(user: SessionUser, stationId: number) {
+  await getStation(user, stationId);
+  const schedule = await repo.findByStation(stationId);
+  if (!schedule) throw new AppError('not-found', `Station ${stationId} has no schedule yet`);
+  return schedule;
+}
+
+export async function create(sequelize: Sequelize, user: SessionUser, stationId: number, values: ScheduleValues) {
+  await refuseBlocked(stationId, values, user);
+  return sequelize.transaction(async (transaction) => {
+    if (await repo.findByStation(stationId, transaction)) {
+      throw new AppError('conflict', `Station ${stationId} already has a schedule: change it instead`);
+    }
+    return repo.insert(stationId, values, transaction);
+  });
+}
+
+export async function update(sequelize: Sequelize, user: SessionUser, stationId: number, patch: Partial<ScheduleValues>) {
+  await getOwnStation(user, stationId);
+  const current = await getFor(user, stationId);
+  const merged = applySchedulePatch(current, patch);
+  if (!merged.success) throw merged.error;
+  const { id: _id, stationId: _s, createdAt: _c, updatedAt: _u, ...values } = merged.data;
+  // Pausing never needs the checks; anything else that would transmit must pass them.
+  if (!(Object.keys(patch).length === 1 && 'paused' in patch)) await refuseBlocked(stationId, values, user);
+  return sequelize.transaction((transaction) => repo.update(stationId, values, transaction));
+}
+
+export async function remove(user: SessionUser, stationId: number) {
+  await getOwnStation(user, stationId);
+  await getFor(user, stationId);
+  await repo.remove(stationId);
+}
+
+export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number) {
+  const station = await getStation(user, stationId);
+  const schedule = await repo.findByStation(stationId);
+  if (!schedule) throw new AppError('not-found', `Station ${stationId} has no schedule yet`);
+  const unit = await unitOf(station.unitId);
+  const result = planFor(station, unit, schedule, fromMs, toMs);
+  return {
+    stationId,
+    fromUtc: new Date(fromMs).toISOString(),
+    toUtc: new Date(toMs).toISOString(),
+    suspended: station.suspension !== null,
+    ...result,
+    issues: validateSchedule({ schedule, station, unit }),
+  };
+}
