@@ -245,7 +245,8 @@ export type FleetProposal = {
  */
 function scoreShifts(flat: Flat, current: Float64Array, s: number, guardHz: number, firstShift: number, count: number, score: Int32Array): number {
   const { order, bucketStart, station, bucket, stationStart } = flat;
-  const h = PROPOSAL_GRID_HZ;
+  const perHz = 1 / PROPOSAL_GRID_HZ;
+  const reach = guardHz - firstShift; // v + reach = distance from the first grid shift to the top of u's band
   let now = 0;
   for (let t = stationStart[s]; t < stationStart[s + 1]; t++) {
     const k = bucket[t];
@@ -255,15 +256,14 @@ function scoreShifts(flat: Flat, current: Float64Array, s: number, guardHz: numb
       if (station[u] === s) continue;
       const v = current[u] - ct;
       if (v < guardHz && v > -guardHz) now++;
-      // shifts inside (v − guard, v + guard) meet u
-      let kFrom = Math.floor((v - guardHz - firstShift) / h) + 1;
-      let kTo = Math.ceil((v + guardHz - firstShift) / h) - 1;
+      // shifts strictly inside (v − guard, v + guard) meet u
+      let kFrom = Math.floor((v - guardHz - firstShift) * perHz) + 1;
+      let kTo = Math.ceil((v + reach) * perHz) - 1;
+      if (kTo < 0 || kFrom >= count) continue;
       if (kFrom < 0) kFrom = 0;
-      if (kTo > count - 1) kTo = count - 1;
-      if (kFrom <= kTo) {
-        score[kFrom]++;
-        score[kTo + 1]--;
-      }
+      if (kTo >= count) kTo = count - 1;
+      score[kFrom]++;
+      score[kTo + 1]--;
     }
   }
   return now;
