@@ -11,7 +11,7 @@
 import { BAND_IDS, type BandId } from '../bands';
 import { SLOT_MS } from '../timing';
 import { allowedOffsetRange, type OffsetRange } from './offsets';
-import type { PlannedTransmission } from './expand';
+import { expandPlan, type PlanInput, type PlannedTransmission } from './expand';
 
 export const DEFAULT_GUARD_HZ = 6;
 /** Carriers closer than guardHz meet; differences within a micro-hertz of the guard count as clear (float noise). */
@@ -44,6 +44,13 @@ export function fleetStationFromPlan(stationId: number | string, currentOffsetHz
     currentOffsetHz,
     transmissions: transmissions.map((t) => ({ startMs: t.startMs, bandId: t.bandId, dialHz: t.dialHz, carrierHz: t.carrierHz })),
   };
+}
+
+/** A fleet straight from schedules and settings: each station planned over [fromMs, toMs). */
+export function fleetFromSchedules(inputs: readonly PlanInput[], fromMs: number, toMs: number): FleetStation[] {
+  return inputs.map((input) =>
+    fleetStationFromPlan(input.schedule.stationId, input.station.audioOffsetHz, expandPlan({ ...input, fromMs, toMs }).transmissions),
+  );
 }
 
 /** Every transmission of the fleet in flat arrays, grouped by (slot, band) and sorted by carrier inside a group. */

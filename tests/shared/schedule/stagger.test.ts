@@ -5,6 +5,7 @@ import {
   expandPlan,
   findFleetConflicts,
   findFleetConflictsPairwise,
+  fleetFromSchedules,
   fleetStationFromPlan,
   proposeFleetOffsets,
   type FleetStation,
@@ -150,6 +151,9 @@ describe('proposeFleetOffsets', () => {
     expect(r.movedCount).toBe(2);
     const replanned = r.proposals.map((p) => plan(p.stationId as number, p.proposedOffsetHz));
     expect(findFleetConflicts(replanned)).toEqual([]);
+    // the same fleet built from schedules and settings
+    const inputs = r.proposals.map((p) => ({ schedule: { ...schedule, stationId: p.stationId }, station: stationOn(['20m'], { audioOffsetHz: p.proposedOffsetHz }), unit }));
+    expect(fleetFromSchedules(inputs, DEC_2_2026, DEC_2_2026 + DAY_MS)).toEqual(replanned);
     const { lowHz, highHz } = allowedOffsetRange();
     expect(r.proposals.every((p) => p.proposedOffsetHz >= lowHz && p.proposedOffsetHz <= highHz)).toBe(true);
   });
