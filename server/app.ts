@@ -7,6 +7,7 @@ import type { Config } from './config';
 import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
+import { myClubThingsRouter } from './features/clubs/my-club-things.router';
 import { healthRouter } from './features/health/health.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
@@ -81,7 +82,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations', stationsRouter({ sequelize }));
   api.use('/units', unitsRouter({ storage, logger }));
-  api.use('/clubs', clubsRouter());
+  api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));
+  api.use(myClubThingsRouter({ sequelize }));
   api.use(apiNotFound);
   app.use('/api', api);
 

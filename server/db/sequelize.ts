@@ -1,4 +1,5 @@
 import { Sequelize } from 'sequelize';
+import { AuditEntryModel, InvitationModel, NotificationModel, OffsetProposalModel } from './models/club-extras.model';
 import { ClubModel } from './models/club.model';
 import { MembershipModel } from './models/membership.model';
 import { PasswordResetModel } from './models/password-reset.model';
@@ -28,6 +29,10 @@ export function createSequelize(databaseUrl: string): Sequelize {
   UnitPhotoModel.initModel(sequelize);
   StationBandModel.initModel(sequelize);
   ScheduleModel.initModel(sequelize);
+  InvitationModel.initModel(sequelize);
+  OffsetProposalModel.initModel(sequelize);
+  NotificationModel.initModel(sequelize);
+  AuditEntryModel.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });

@@ -3,3 +3,4 @@ export * from './auth';
 export * from './unit';
 export * from './station';
 export * from './schedule';
+export * from './club';

@@ -2,7 +2,9 @@ import type { Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import { validateSchedule } from '@/shared/domain/schedule';
 import { applySchedulePatch, type ScheduleValues } from '@/shared/schemas/schedule';
+import { UserModel } from '../../db/models/user.model';
 import { AppError } from '../../lib/app-error';
+import * as audit from '../audit/audit.service';
 import { getFor as getStation, getOwnedBy as getOwnStation } from '../stations/stations.service';
 import * as unitsRepo from '../units/units.repo';
 import { planFor } from './plan';
@@ -40,7 +42,9 @@ export async function create(sequelize: Sequelize, user: SessionUser, stationId:
     if (await repo.findByStation(stationId, transaction)) {
       throw new AppError('conflict', `Station ${stationId} already has a schedule: change it instead`);
     }
-    return repo.insert(stationId, values, transaction);
+    const created = await repo.insert(stationId, values, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.create', entityType: 'schedule', entityId: stationId, summary: `Created the schedule ${values.name}`, after: values }, transaction);
+    return created;
   });
 }
 
@@ -52,13 +56,22 @@ export async function update(sequelize: Sequelize, user: SessionUser, stationId:
   const { id: _id, stationId: _s, createdAt: _c, updatedAt: _u, ...values } = merged.data;
   // Pausing never needs the checks; anything else that would transmit must pass them.
   if (!(Object.keys(patch).length === 1 && 'paused' in patch)) await refuseBlocked(stationId, values, user);
-  return sequelize.transaction((transaction) => repo.update(stationId, values, transaction));
+  const { id: _i, stationId: _st, createdAt: _cr, updatedAt: _up, ...before } = current;
+  const summary = Object.keys(patch).length === 1 && 'paused' in patch ? (patch.paused ? 'Paused the schedule' : 'Resumed the schedule') : `Changed ${Object.keys(patch).join(', ')} of the schedule`;
+  return sequelize.transaction(async (transaction) => {
+    const updated = await repo.update(stationId, values, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.update', entityType: 'schedule', entityId: stationId, summary, before, after: values }, transaction);
+    return updated;
+  });
 }
 
 export async function remove(user: SessionUser, stationId: number) {
   await getOwnStation(user, stationId);
-  await getFor(user, stationId);
-  await repo.remove(stationId);
+  const before = await getFor(user, stationId);
+  await UserModel.sequelize!.transaction(async (transaction) => {
+    await repo.remove(stationId, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.delete', entityType: 'schedule', entityId: stationId, summary: `Deleted the schedule ${before.name}`, before }, transaction);
+  });
 }
 
 export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number) {

@@ -68,9 +68,9 @@ export type StationValues = {
   transmitEnabled: boolean;
 };
 
-export async function insert(ownerId: number, values: StationValues) {
-  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null, suspendedAt: null, suspendedReason: null, suspendedByClubId: null });
-  return (await findById(row.id))!;
+export async function insert(ownerId: number, values: StationValues, transaction?: Transaction) {
+  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null, suspendedAt: null, suspendedReason: null, suspendedByClubId: null }, { transaction });
+  return (await findById(row.id, transaction))!;
 }
 
 export async function update(id: number, patch: StationPatch, transaction?: Transaction) {
@@ -78,8 +78,8 @@ export async function update(id: number, patch: StationPatch, transaction?: Tran
   return (await findById(id, transaction))!;
 }
 
-export async function remove(id: number) {
-  await StationModel.destroy({ where: { id } });
+export async function remove(id: number, transaction?: Transaction) {
+  await StationModel.destroy({ where: { id }, transaction });
 }
 
 export async function upsertBand(

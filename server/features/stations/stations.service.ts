@@ -4,7 +4,9 @@ import { bandFor, type BandId } from '@/shared/domain/bands';
 import { predictOffsets } from '@/shared/domain/calibration';
 import { buildStationConfig, filterCoverage } from '@/shared/domain/workshop';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput, StationInput, StationPatch, Unit } from '@/shared/schemas';
+import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
+import * as audit from '../audit/audit.service';
 import { adminSharesClubWith } from '../clubs/clubs.repo';
 import * as unitsRepo from '../units/units.repo';
 import * as repo from './stations.repo';
@@ -41,20 +43,33 @@ async function ownUnit(user: SessionUser, unitId: number | null | undefined): Pr
   return unit;
 }
 
+const settingsOf = (s: Station) => ({ name: s.name, callsign: s.callsign, locator: s.locator, unitId: s.unitId, region: s.region, audioOffsetHz: s.audioOffsetHz, transmitEnabled: s.transmitEnabled, notes: s.notes });
+
 export async function create(user: SessionUser, input: Required<StationInput>) {
   await ownUnit(user, input.unitId);
-  return repo.insert(user.id, input as repo.StationValues);
+  return inTransaction(async (transaction) => {
+    const station = await repo.insert(user.id, input as repo.StationValues, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'station.create', entityType: 'station', entityId: station.id, summary: `Created station ${station.name} (${station.callsign})`, after: settingsOf(station) }, transaction);
+    return station;
+  });
 }
 
 export async function update(user: SessionUser, id: number, patch: StationPatch) {
-  await getOwnedBy(user, id);
+  const before = await getOwnedBy(user, id);
   if (patch.unitId !== undefined) await ownUnit(user, patch.unitId);
-  return repo.update(id, patch);
+  return inTransaction(async (transaction) => {
+    const after = await repo.update(id, patch, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'station.update', entityType: 'station', entityId: id, summary: `Changed ${Object.keys(patch).join(', ')} of ${after.name}`, before: settingsOf(before), after: settingsOf(after) }, transaction);
+    return after;
+  });
 }
 
 export async function remove(user: SessionUser, id: number) {
-  await getOwnedBy(user, id);
-  await repo.remove(id);
+  const before = await getOwnedBy(user, id);
+  await inTransaction(async (transaction) => {
+    await repo.remove(id, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'station.delete', entityType: 'station', entityId: id, summary: `Deleted station ${before.name}`, before: settingsOf(before) }, transaction);
+  });
 }
 
 async function unitOf(station: Station) {
@@ -79,6 +94,7 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
     const coverage = filterCoverage(unit.filters, band);
     if (!coverage.covered) throw new AppError('bad-request', coverage.reason, { enabled: coverage.reason });
   }
+  const beforeBand = station.bands.find((b) => b.bandId === bandId) ?? null;
   await sequelize.transaction(async (transaction) => {
     const values: Parameters<typeof repo.upsertBand>[2] = { enabled: input.enabled };
     if (input.calibrationOffsetHz !== undefined) {
@@ -87,6 +103,7 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
       values.calibratedAt = input.calibrationOffsetHz === null ? null : new Date();
     }
     await repo.upsertBand(id, bandId, values, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'band.update', entityType: 'band', entityId: id, summary: `${input.enabled ? 'Enabled' : 'Disabled'} ${band.name} on ${station.name}`, before: beforeBand, after: { bandId, ...values } }, transaction);
   });
   return (await repo.findById(id))!;
 }
@@ -103,6 +120,12 @@ export async function saveCalibration(sequelize: Sequelize, user: SessionUser, i
     if (input.source === 'measured' && input.referenceErrorPpm !== undefined) {
       await repo.setReferenceError(id, input.referenceErrorPpm, transaction);
     }
+    await audit.record({
+      actor: user, ownerId: user.id, action: 'calibration.save', entityType: 'calibration', entityId: id,
+      summary: `Saved ${input.source} calibration for ${input.offsets.map((o) => o.bandId).join(', ')} on ${station.name}`,
+      before: station.bands.map((b) => ({ bandId: b.bandId, calibrationOffsetHz: b.calibrationOffsetHz })),
+      after: { referenceErrorPpm: input.referenceErrorPpm ?? null, offsets: input.offsets },
+    }, transaction);
   });
   return (await repo.findById(id))!;
 }

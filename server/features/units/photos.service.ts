@@ -1,7 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import type { SessionUser } from '@/shared/api/contracts';
+import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
+import * as audit from '../audit/audit.service';
 import type { Logger } from '../../lib/logger';
 import type { FileStorage } from '../../storage';
 import * as repo from './units.repo';
@@ -27,14 +29,18 @@ async function process(buffer: Buffer) {
 }
 
 export async function addPhoto(storage: FileStorage, user: SessionUser, unitId: number, buffer: Buffer) {
-  await getOwnedBy(user, unitId);
+  const unit = await getOwnedBy(user, unitId);
   const { main, thumb, contentType, extension } = await process(buffer);
   const name = randomUUID();
   const storageKey = `units/${unitId}/${name}.${extension}`;
   const thumbKey = `units/${unitId}/${name}-thumb.webp`;
   await storage.put(storageKey, main, contentType);
   await storage.put(thumbKey, thumb, 'image/webp');
-  return repo.insertPhoto({ unitId, storageKey, thumbKey, contentType, bytes: main.length });
+  return inTransaction(async (transaction) => {
+    const photo = await repo.insertPhoto({ unitId, storageKey, thumbKey, contentType, bytes: main.length }, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'photo.add', entityType: 'photo', entityId: photo.id, summary: `Added a photo to unit ${unit.name}` }, transaction);
+    return photo;
+  });
 }
 
 export async function readPhoto(storage: FileStorage, user: SessionUser, unitId: number, photoId: number, which: 'main' | 'thumb') {
@@ -47,10 +53,13 @@ export async function readPhoto(storage: FileStorage, user: SessionUser, unitId:
 }
 
 export async function deletePhoto(storage: FileStorage, user: SessionUser, unitId: number, photoId: number) {
-  await getOwnedBy(user, unitId);
+  const unit = await getOwnedBy(user, unitId);
   const photo = await repo.findPhoto(unitId, photoId);
   if (!photo) throw new AppError('not-found', `Photo ${photoId} does not exist`);
-  await photo.destroy();
+  await inTransaction(async (transaction) => {
+    await photo.destroy({ transaction });
+    await audit.record({ actor: user, ownerId: user.id, action: 'photo.delete', entityType: 'photo', entityId: photoId, summary: `Deleted a photo of unit ${unit.name}` }, transaction);
+  });
   await removeStored(storage, [photo]);
 }
 

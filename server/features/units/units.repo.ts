@@ -42,22 +42,22 @@ export async function findById(id: number, transaction?: Transaction) {
 
 const specOf = ({ name: _name, ...spec }: UnitValues) => JSON.stringify(spec);
 
-export async function insert(ownerId: number, values: UnitValues) {
-  const row = await UnitModel.create({ ownerId, name: values.name, spec: specOf(values) });
-  return (await findById(row.id))!;
+export async function insert(ownerId: number, values: UnitValues, transaction?: Transaction) {
+  const row = await UnitModel.create({ ownerId, name: values.name, spec: specOf(values) }, { transaction });
+  return (await findById(row.id, transaction))!;
 }
 
-export async function update(id: number, values: UnitValues) {
-  await UnitModel.update({ name: values.name, spec: specOf(values) }, { where: { id } });
-  return (await findById(id))!;
+export async function update(id: number, values: UnitValues, transaction?: Transaction) {
+  await UnitModel.update({ name: values.name, spec: specOf(values) }, { where: { id }, transaction });
+  return (await findById(id, transaction))!;
 }
 
-export async function remove(id: number) {
-  await UnitModel.destroy({ where: { id } });
+export async function remove(id: number, transaction?: Transaction) {
+  await UnitModel.destroy({ where: { id }, transaction });
 }
 
-export async function insertPhoto(values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number }) {
-  return toPhoto(await UnitPhotoModel.create(values));
+export async function insertPhoto(values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number }, transaction?: Transaction) {
+  return toPhoto(await UnitPhotoModel.create(values, { transaction }));
 }
 
 export const findPhoto = (unitId: number, photoId: number) => UnitPhotoModel.findOne({ where: { id: photoId, unitId } });

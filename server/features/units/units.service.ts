@@ -1,6 +1,8 @@
 import type { SessionUser } from '@/shared/api/contracts';
 import { unitInput, type Unit, type UnitValues } from '@/shared/schemas';
+import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
+import * as audit from '../audit/audit.service';
 import { adminSharesClubWith } from '../clubs/clubs.repo';
 import * as repo from './units.repo';
 
@@ -22,24 +24,38 @@ export async function getOwnedBy(user: SessionUser, id: number): Promise<Unit> {
   return unit;
 }
 
-export const create = (user: SessionUser, values: UnitValues) => repo.insert(user.id, values);
+const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...values }: Unit) => values;
+
+export function create(user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
+  return inTransaction(async (transaction) => {
+    const unit = await repo.insert(user.id, values, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values }, transaction);
+    return unit;
+  });
+}
 
 export async function update(user: SessionUser, id: number, patch: Partial<UnitValues>) {
-  const unit = await getOwnedBy(user, id);
-  const { id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...current } = unit;
-  return repo.update(id, unitInput.parse({ ...current, ...patch }));
+  const before = specOf(await getOwnedBy(user, id));
+  const values = unitInput.parse({ ...before, ...patch });
+  return inTransaction(async (transaction) => {
+    const unit = await repo.update(id, values, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'unit.update', entityType: 'unit', entityId: id, summary: `Changed ${Object.keys(patch).join(', ')} of unit ${unit.name}`, before, after: values }, transaction);
+    return unit;
+  });
 }
 
 /** A new unit with the same hardware (photos stay with the original). */
 export async function copy(user: SessionUser, id: number) {
-  const unit = await getFor(user, id);
-  const { id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...values } = unit;
-  return repo.insert(user.id, { ...values, name: `${values.name} (copy)`.slice(0, 80), serialLabel: '' });
+  const values = specOf(await getFor(user, id));
+  return create(user, { ...values, name: `${values.name} (copy)`.slice(0, 80), serialLabel: '' }, `Copied unit ${values.name}`);
 }
 
 export async function remove(user: SessionUser, id: number) {
-  await getOwnedBy(user, id);
+  const unit = await getOwnedBy(user, id);
   const photos = await repo.photosOf(id);
-  await repo.remove(id);
+  await inTransaction(async (transaction) => {
+    await repo.remove(id, transaction);
+    await audit.record({ actor: user, ownerId: user.id, action: 'unit.delete', entityType: 'unit', entityId: id, summary: `Deleted unit ${unit.name}`, before: specOf(unit) }, transaction);
+  });
   return photos;
 }

@@ -2,3 +2,4 @@ export * from './coverage';
 export * from './spurious';
 export * from './on-air';
 export * from './station-config';
+export * from './compliance';

@@ -1,0 +1,96 @@
+import { Op, type Transaction } from 'sequelize';
+import type { SessionUser } from '@/shared/api/contracts';
+import { AuditEntryModel } from '../../db/models/club-extras.model';
+
+export type AuditEntry = {
+  id: number;
+  atUtc: string;
+  actorName: string;
+  ownerId: number | null;
+  clubId: number | null;
+  action: string;
+  entityType: string;
+  entityId: number | null;
+  summary: string;
+  before: unknown;
+  after: unknown;
+};
+
+export type AuditRecord = {
+  actor: Pick<SessionUser, 'id' | 'displayName'>;
+  ownerId: number;
+  clubId?: number | null;
+  action: string;
+  entityType: 'station' | 'unit' | 'band' | 'calibration' | 'schedule' | 'club' | 'membership' | 'invitation' | 'proposal' | 'suspension' | 'photo';
+  entityId?: number | null;
+  summary: string;
+  before?: unknown;
+  after?: unknown;
+};
+
+/** Records who changed what, before and after, when (UTC). Call inside the write's transaction. */
+export async function record(entry: AuditRecord, transaction?: Transaction) {
+  await AuditEntryModel.create(
+    {
+      at: new Date(),
+      actorId: entry.actor.id,
+      actorName: entry.actor.displayName,
+      ownerId: entry.ownerId,
+      clubId: entry.clubId ?? null,
+      action: entry.action,
+      entityType: entry.entityType,
+      entityId: entry.entityId ?? null,
+      summary: entry.summary.slice(0, 300),
+      before: entry.before === undefined ? null : JSON.stringify(entry.before),
+      after: entry.after === undefined ? null : JSON.stringify(entry.after),
+    },
+    { transaction },
+  );
+}
+
+function toEntry(row: AuditEntryModel): AuditEntry {
+  return {
+    id: Number(row.id),
+    atUtc: row.at.toISOString(),
+    actorName: row.actorName,
+    ownerId: row.ownerId,
+    clubId: row.clubId,
+    action: row.action,
+    entityType: row.entityType,
+    entityId: row.entityId,
+    summary: row.summary,
+    before: row.before ? JSON.parse(row.before) : null,
+    after: row.after ? JSON.parse(row.after) : null,
+  };
+}
+
+const LIMIT = 500;
+
+/** An operator's own log: changes to their things, by anyone. */
+export async function listForOwner(ownerId: number) {
+  const rows = await AuditEntryModel.findAll({ where: { ownerId }, order: [['at', 'DESC'], ['id', 'DESC']], limit: LIMIT });
+  return rows.map(toEntry);
+}
+
+/** A club's log: the club's own actions and changes to its members' things. */
+export async function listForClub(clubId: number, memberIds: number[]) {
+  const rows = await AuditEntryModel.findAll({
+    where: { [Op.or]: [{ clubId }, { ownerId: { [Op.in]: memberIds }, clubId: null }] },
+    order: [['at', 'DESC'], ['id', 'DESC']],
+    limit: LIMIT,
+  });
+  return rows.map(toEntry);
+}
+
+const csvCell = (value: unknown) => {
+  const text = value === null || value === undefined ? '' : typeof value === 'string' ? value : JSON.stringify(value);
+  // Quote every cell; a leading = + - @ is neutralised so spreadsheets do not run it as a formula.
+  const safe = /^[=+\-@]/.test(text) ? `'${text}` : text;
+  return `"${safe.replace(/"/g, '""')}"`;
+};
+
+export function toCsv(entries: AuditEntry[]) {
+  const header = ['time_utc', 'who', 'action', 'what', 'id', 'summary', 'before', 'after'];
+  const lines = entries.map((e) => [e.atUtc, e.actorName, e.action, e.entityType, e.entityId, e.summary, e.before, e.after].map(csvCell).join(','));
+  return [header.join(','), ...lines].join('\r\n') + '\r\n';
+}
