@@ -2,7 +2,8 @@ import bcrypt from 'bcryptjs';
 import type { Sequelize, Transaction } from 'sequelize';
 import { bandFor, type BandId } from '@/shared/domain/bands';
 import { predictedOffsetHz } from '@/shared/domain/calibration';
-import { unitInput, type UnitInput } from '@/shared/schemas';
+import { scheduleInput, unitInput, type UnitInput } from '@/shared/schemas';
+import { ScheduleModel } from '../models/schedule.model';
 import { ClubModel } from '../models/club.model';
 import { MembershipModel } from '../models/membership.model';
 import { StationBandModel } from '../models/station-band.model';
@@ -16,6 +17,8 @@ export const DEMO_CLUB = 'Saltmarsh Beacon Circle';
 
 const filter = (bands: BandId[], cutoffHz: number, type: 'butterworth' | 'chebyshev-0.5' = 'chebyshev-0.5', order = 5) => ({ bands, type, order, cutoffHz });
 
+type DemoSchedule = { name: string; steps: { bandId: BandId; slots: number; activeHoursUtc?: { fromHour: number; toHour: number } | null }[]; nth: number; stepHz?: number; spanHz?: number };
+
 type DemoStation = {
   name: string;
   callsign: string;
@@ -26,6 +29,7 @@ type DemoStation = {
   transmitEnabled?: boolean;
   /** bands to enable, calibrated from this reference error in ppm (null = enabled but not calibrated) */
   bands?: { bandId: BandId; ppm: number | null }[];
+  schedule?: DemoSchedule;
 };
 type DemoPerson = { email: string; displayName: string; callsign: string; role: 'admin' | 'member'; units: UnitInput[]; stations: DemoStation[] };
 
@@ -39,7 +43,7 @@ const people: DemoPerson[] = [
       filters: [filter(['80m'], 4.2e6), filter(['40m'], 7.8e6), filter(['20m'], 15.6e6)],
       antenna: { kind: 'vertical', bands: ['80m', '40m', '20m'], gainDbi: 0 }, notes: 'GPS-disciplined reference for the club.',
     }],
-    stations: [{ name: 'Clubhouse reference', callsign: 'Q3HST', locator: 'JO32', notes: 'Roof-mounted vertical at the club hut.', unit: 'Clubhouse reference', audioOffsetHz: 1500, transmitEnabled: true, bands: [{ bandId: '40m', ppm: 0.1 }, { bandId: '20m', ppm: 0.1 }] }],
+    stations: [{ name: 'Clubhouse reference', callsign: 'Q3HST', locator: 'JO32', notes: 'Roof-mounted vertical at the club hut.', unit: 'Clubhouse reference', audioOffsetHz: 1500, transmitEnabled: true, bands: [{ bandId: '40m', ppm: 0.1 }, { bandId: '20m', ppm: 0.1 }], schedule: { name: 'Reference pair', steps: [{ bandId: '40m', slots: 1 }, { bandId: '20m', slots: 1 }], nth: 5, stepHz: 2, spanHz: 8 } }],
   },
   {
     email: 'operator@faintline.example', displayName: 'Ilse Marrow', callsign: 'Q1IMW', role: 'member',
@@ -51,7 +55,7 @@ const people: DemoPerson[] = [
       antenna: { kind: 'end-fed', bands: ['40m', '20m'], gainDbi: 0 }, notes: 'Plug-in filters on a relay board.',
     }],
     stations: [
-      { name: 'Attic beacon', callsign: 'Q1IMW', locator: 'IO91WM', notes: 'End-fed wire under the roof tiles.', unit: 'Loft board', audioOffsetHz: 1520, transmitEnabled: true, bands: [{ bandId: '40m', ppm: 4.2 }, { bandId: '20m', ppm: 4.2 }] },
+      { name: 'Attic beacon', callsign: 'Q1IMW', locator: 'IO91WM', notes: 'End-fed wire under the roof tiles.', unit: 'Loft board', audioOffsetHz: 1520, transmitEnabled: true, bands: [{ bandId: '40m', ppm: 4.2 }, { bandId: '20m', ppm: 4.2 }], schedule: { name: 'Day and night', steps: [{ bandId: '20m', slots: 2, activeHoursUtc: { fromHour: 7, toHour: 19 } }, { bandId: '40m', slots: 2, activeHoursUtc: { fromHour: 19, toHour: 7 } }], nth: 5 } },
       { name: 'Garden mast', callsign: 'Q1IMW', locator: 'IO91', notes: '' },
     ],
   },
@@ -65,7 +69,7 @@ const people: DemoPerson[] = [
       antenna: { kind: 'dipole', bands: ['30m', '20m'], gainDbi: 2.15 }, notes: 'Small amplifier to about 200 mW.',
     }],
     stations: [
-      { name: 'Shed rig', callsign: 'Q2TRY', locator: 'JO22', notes: 'Dipole between the shed and the oak.', unit: 'Shed kit', audioOffsetHz: 1520, transmitEnabled: true, bands: [{ bandId: '30m', ppm: -11.5 }, { bandId: '20m', ppm: null }] },
+      { name: 'Shed rig', callsign: 'Q2TRY', locator: 'JO22', notes: 'Dipole between the shed and the oak.', unit: 'Shed kit', audioOffsetHz: 1520, transmitEnabled: true, bands: [{ bandId: '30m', ppm: -11.5 }, { bandId: '20m', ppm: null }], schedule: { name: 'Shed rotation', steps: [{ bandId: '20m', slots: 2, activeHoursUtc: { fromHour: 7, toHour: 19 } }, { bandId: '30m', slots: 2, activeHoursUtc: { fromHour: 19, toHour: 7 } }], nth: 5 } },
       { name: 'Hilltop portable', callsign: 'Q2TRY/P', locator: 'JO22NB', notes: 'Weekend field station on batteries.' },
     ],
   },
@@ -109,6 +113,16 @@ export async function seedDemoIfEmpty(sequelize: Sequelize, bcryptCost: number):
           { transaction },
         );
         await addBands(row.id, audioOffsetHz, s.bands, transaction);
+        if (s.schedule) {
+          const rules = scheduleInput.parse({
+            name: s.schedule.name,
+            steps: s.schedule.steps,
+            cadence: { kind: 'every-nth', nth: s.schedule.nth },
+            stagger: { stepHz: s.schedule.stepHz ?? 0, spanHz: s.schedule.spanHz ?? 0 },
+            startDate: new Date().toISOString().slice(0, 10),
+          });
+          await ScheduleModel.create({ stationId: row.id, spec: JSON.stringify(rules) }, { transaction });
+        }
       }
     }
   });

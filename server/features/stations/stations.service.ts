@@ -157,5 +157,5 @@ export async function proposeCalibration(user: SessionUser, id: number, input: M
 
 export async function configFor(user: SessionUser, id: number, now = new Date()) {
   const station = await getFor(user, id);
-  return buildStationConfig(station, await unitOf(station), now);
+  return buildStationConfig({ ...station, suspended: station.suspension !== null }, await unitOf(station), now);
 }
