@@ -23,6 +23,7 @@ export default function TabsLayoutRoute() {
     >
       <Tabs.Screen name="index" options={{ title: 'Overview · Faintline' }} />
       <Tabs.Screen name="stations" options={{ title: 'Stations · Faintline' }} />
+      <Tabs.Screen name="units" options={{ title: 'Units · Faintline' }} />
       <Tabs.Protected guard={isClubMember}>
         <Tabs.Screen name="club" options={{ title: 'Club · Faintline' }} />
       </Tabs.Protected>

@@ -1,6 +1,6 @@
 import Svg, { Circle, Path } from 'react-native-svg';
 
-export type NavIconName = 'overview' | 'stations' | 'club' | 'settings';
+export type NavIconName = 'overview' | 'stations' | 'units' | 'club' | 'settings';
 
 export type NavIconProps = { name: NavIconName; color: string; size?: number };
 
@@ -20,6 +20,13 @@ export function NavIcon({ name, color, size = 22 }: NavIconProps) {
           <Path d="M12 10 L8 21 M12 10 L16 21 M9.5 17 H14.5" {...stroke} />
           <Circle cx={12} cy={8} r={1.6} fill={color} />
           <Path d="M8.2 4.6 A5 5 0 0 0 8.2 11.4 M15.8 4.6 A5 5 0 0 1 15.8 11.4" {...stroke} />
+        </>
+      ) : null}
+      {name === 'units' ? (
+        <>
+          <Path d="M4 7 H20 V17 H4 Z" {...stroke} />
+          <Path d="M8 11 H12 V14 H8 Z" {...stroke} />
+          <Path d="M15 11 V14 M17.5 11 V14 M7 7 V4.5 M17 7 V4.5 M9 17 V19.5 M15 17 V19.5" {...stroke} strokeOpacity={0.7} />
         </>
       ) : null}
       {name === 'club' ? (

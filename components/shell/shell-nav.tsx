@@ -13,6 +13,7 @@ import { UtcClock } from './utc-clock';
 export const shellTabs: Record<string, { label: string; icon: NavIconName }> = {
   index: { label: 'Overview', icon: 'overview' },
   stations: { label: 'Stations', icon: 'stations' },
+  units: { label: 'Units', icon: 'units' },
   club: { label: 'Club', icon: 'club' },
   settings: { label: 'Settings', icon: 'settings' },
 };

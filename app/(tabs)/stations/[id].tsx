@@ -5,6 +5,8 @@ import { useSessionQuery } from '@/components/auth/queries';
 import { useDeleteStationMutation, useStationQuery } from '@/components/stations/queries';
 import { StationDetails } from '@/components/stations/station-details';
 import { StationHeader } from '@/components/stations/station-header';
+import { useUnitQuery } from '@/components/units/queries';
+import { StationWorkshop } from '@/components/workshop/station-workshop';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
@@ -17,6 +19,7 @@ export default function StationDetailRoute() {
   const me = useSessionQuery().data;
   const station = useStationQuery(stationId);
   const remove = useDeleteStationMutation(stationId);
+  const unit = useUnitQuery(station.data?.unitId);
   const [confirming, setConfirming] = useState(false);
 
   let body;
@@ -45,6 +48,16 @@ export default function StationDetailRoute() {
               : () => router.push({ pathname: '/stations/[id]/edit', params: { id: String(stationId) } })
           }
           onDelete={readOnly ? undefined : () => setConfirming(true)}
+        />
+        <StationWorkshop
+          station={station.data}
+          unit={unit.data ?? null}
+          unitLoading={unit.isPending && station.data.unitId !== null}
+          unitError={unit.isError ? unit.error.message : undefined}
+          readOnly={readOnly}
+          onOpenBands={() => router.push({ pathname: '/stations/[id]/bands', params: { id: String(stationId) } })}
+          onOpenCalibration={() => router.push({ pathname: '/stations/[id]/calibrate', params: { id: String(stationId) } })}
+          onOpenOnAir={() => router.push({ pathname: '/stations/[id]/on-air', params: { id: String(stationId) } })}
         />
         <StationDetails station={station.data} readOnly={readOnly} />
       </>

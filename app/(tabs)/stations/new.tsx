@@ -3,6 +3,8 @@ import { useRouter } from 'expo-router';
 import { useSessionQuery } from '@/components/auth/queries';
 import { useCreateStationMutation } from '@/components/stations/queries';
 import { StationForm } from '@/components/stations/station-form';
+import { useUnitsQuery } from '@/components/units/queries';
+import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { layout } from '@/components/ui/theme';
@@ -11,10 +13,24 @@ export default function NewStationRoute() {
   const router = useRouter();
   const user = useSessionQuery().data;
   const create = useCreateStationMutation();
+  const units = useUnitsQuery();
+  if (units.isPending)
+    return (
+      <Screen maxWidth={layout.maxFormWidth + 120}>
+        <LoadingState label="Loading your units…" />
+      </Screen>
+    );
+  if (units.isError)
+    return (
+      <Screen maxWidth={layout.maxFormWidth + 120}>
+        <ErrorState title="Your units could not be loaded" error={units.error} onRetry={() => units.refetch()} />
+      </Screen>
+    );
   return (
     <Screen maxWidth={layout.maxFormWidth + 120}>
       <Card>
         <StationForm
+          units={units.data}
           defaultValues={{ callsign: user?.callsign ?? '' }}
           onSubmit={async (values) => {
             const station = await create.mutateAsync(values);

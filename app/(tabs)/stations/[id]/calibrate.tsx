@@ -1,0 +1,85 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useState } from 'react';
+
+import { useSessionQuery } from '@/components/auth/queries';
+import { useStationQuery } from '@/components/stations/queries';
+import { useUnitQuery } from '@/components/units/queries';
+import { Card } from '@/components/ui/card';
+import { ErrorState, LoadingState } from '@/components/ui/query-states';
+import { Screen } from '@/components/ui/screen';
+import { SegmentedChoice } from '@/components/ui/segmented-choice';
+import { CalibrationForm } from '@/components/workshop/calibration-form';
+import { useCalibrationProposalMutation, useSaveCalibrationMutation } from '@/components/workshop/queries';
+import { TypedOffsetsForm } from '@/components/workshop/typed-offsets-form';
+import { WorkshopHeader } from '@/components/workshop/workshop-header';
+import { bandFor, type BandId } from '@/shared/domain';
+import { filterCoverage } from '@/shared/domain/workshop';
+
+export default function StationCalibrateRoute() {
+  const router = useRouter();
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const stationId = Number(id);
+  const me = useSessionQuery().data;
+  const station = useStationQuery(stationId);
+  const unit = useUnitQuery(station.data?.unitId);
+  const propose = useCalibrationProposalMutation(stationId);
+  const save = useSaveCalibrationMutation(stationId);
+  const [mode, setMode] = useState<'measure' | 'typed'>('measure');
+  const toBands = () => router.replace({ pathname: '/stations/[id]/bands', params: { id } });
+
+  let body;
+  if (station.isPending || (station.data?.unitId != null && unit.isPending)) body = <LoadingState label="Loading the station…" />;
+  else if (station.isError)
+    body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
+  else if (station.data.ownerId !== me?.id)
+    body = <ErrorState title="Read-only" error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can calibrate it.`)} />;
+  else {
+    const enabled = station.data.bands.filter((b) => b.enabled);
+    // bands worth measuring: enabled ones whose filter covers them
+    const measurable = enabled
+      .map((b) => b.bandId as BandId)
+      .filter((bandId) => {
+        const found = bandFor(bandId, station.data.region);
+        return found.ok && unit.data ? filterCoverage(unit.data.filters, found.band).covered : false;
+      });
+    body = (
+      <>
+        <WorkshopHeader
+          title="Calibrate"
+          station={station.data}
+          intro={
+            station.data.referenceErrorPpm === null
+              ? 'No measurement yet. Measure once on one band; the same crystal error carries over to every band.'
+              : `Last measured reference error: ${station.data.referenceErrorPpm.toFixed(3)} ppm.`
+          }
+        />
+        <SegmentedChoice
+          label="How to calibrate"
+          value={mode}
+          onChange={setMode}
+          options={[
+            { value: 'measure', label: 'Guided measurement' },
+            { value: 'typed', label: 'Type offsets' },
+          ]}
+        />
+        <Card>
+          {mode === 'measure' ? (
+            <CalibrationForm
+              region={station.data.region}
+              audioOffsetHz={station.data.audioOffsetHz}
+              bandIds={measurable}
+              onPropose={(measurement) => propose.mutateAsync(measurement)}
+              onAccept={async (input) => {
+                await save.mutateAsync(input);
+                toBands();
+              }}
+            />
+          ) : (
+            <TypedOffsetsForm region={station.data.region} bands={enabled} onSave={(input) => save.mutateAsync(input)} />
+          )}
+        </Card>
+      </>
+    );
+  }
+  return <Screen maxWidth={720}>{body}</Screen>;
+}

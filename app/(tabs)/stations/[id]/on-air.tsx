@@ -1,0 +1,55 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+
+import { useStationQuery } from '@/components/stations/queries';
+import { useUnitQuery } from '@/components/units/queries';
+import { Notice } from '@/components/ui/notice';
+import { ErrorState, LoadingState } from '@/components/ui/query-states';
+import { Screen } from '@/components/ui/screen';
+import { OnAirView } from '@/components/workshop/on-air-view';
+import { WorkshopHeader } from '@/components/workshop/workshop-header';
+import { isBandId, type BandId } from '@/shared/domain';
+
+export default function StationOnAirRoute() {
+  const router = useRouter();
+  const { id, band } = useLocalSearchParams<{ id: string; band?: string }>();
+  const stationId = Number(id);
+  const station = useStationQuery(stationId);
+  const unit = useUnitQuery(station.data?.unitId);
+
+  let body;
+  if (station.isPending || (station.data?.unitId != null && unit.isPending)) body = <LoadingState label="Working out what goes on the air…" />;
+  else if (station.isError)
+    body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
+  else if (unit.isError) body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
+  else {
+    const enabled = station.data.bands.filter((b) => b.enabled).map((b) => b.bandId as BandId);
+    const asked = band && isBandId(band) ? band : undefined;
+    const bandId = asked ?? enabled[0];
+    const bandIds = asked && !enabled.includes(asked) ? [...enabled, asked] : enabled;
+    body = (
+      <>
+        <WorkshopHeader
+          title="On-air detail"
+          station={station.data}
+          actions={[
+            { label: 'Bands and calibration', secondary: true, onPress: () => router.push({ pathname: '/stations/[id]/bands', params: { id } }) },
+          ]}
+        />
+        {!unit.data ? (
+          <Notice message="This station has no unit: assign its hardware first (edit the station)." />
+        ) : !bandId ? (
+          <Notice tone="info" message="No band is enabled yet. Enable one under Bands and calibration." />
+        ) : (
+          <OnAirView
+            station={station.data}
+            unit={unit.data}
+            bandId={bandId}
+            bandIds={bandIds}
+            onBand={(next) => router.setParams({ band: next })}
+          />
+        )}
+      </>
+    );
+  }
+  return <Screen>{body}</Screen>;
+}

@@ -1,0 +1,185 @@
+import { Link, type Href } from 'expo-router';
+import { useState } from 'react';
+import { Image, Pressable, StyleSheet, View } from 'react-native';
+
+import type { Unit } from '@/shared/schemas';
+
+import { Text } from '../ui/text';
+import { fonts, radius, space } from '../ui/theme';
+import { useAppTheme } from '../ui/theme-provider';
+import { bandName, filterBands, generatorSummary } from './unit-summary';
+
+export type UnitListProps = { units: Unit[]; layout: 'cards' | 'table' };
+
+const detail = (unit: Unit): Href => ({ pathname: '/units/[id]', params: { id: String(unit.id) } });
+const openLabel = (unit: Unit) => `Open unit ${unit.name}`;
+
+/** The beacon hardware register: cards on phones, columns on wide screens. */
+export function UnitList({ units, layout }: UnitListProps) {
+  if (layout === 'cards')
+    return (
+      <View style={styles.cards}>
+        {units.map((unit) => (
+          <UnitCard key={unit.id} unit={unit} />
+        ))}
+      </View>
+    );
+  return <UnitTable units={units} />;
+}
+
+function Thumb({ unit, size }: { unit: Unit; size: number }) {
+  const { colors } = useAppTheme();
+  const photo = unit.photos[0];
+  return photo ? (
+    <Image
+      source={{ uri: photo.thumbUrl }}
+      accessibilityLabel={`Photo of ${unit.name}`}
+      style={{ width: size, height: size, borderRadius: radius.sm, backgroundColor: colors.border }}
+    />
+  ) : (
+    <View
+      accessibilityLabel="No photo"
+      style={[styles.noPhoto, { width: size, height: size, borderColor: colors.border, backgroundColor: colors.background }]}
+    >
+      <Text variant="caption" tone="muted">
+        —
+      </Text>
+    </View>
+  );
+}
+
+function BandTags({ unit }: { unit: Unit }) {
+  const { colors } = useAppTheme();
+  const bands = filterBands(unit);
+  if (!bands.length)
+    return (
+      <Text variant="caption" tone="danger">
+        No filters
+      </Text>
+    );
+  return (
+    <View style={styles.tags}>
+      {bands.map((id) => (
+        <View key={id} style={[styles.tag, { backgroundColor: colors.primarySoft }]}>
+          <Text variant="caption" tone="primary" style={styles.tagText}>
+            {bandName(id)}
+          </Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function UnitCard({ unit }: { unit: Unit }) {
+  const { colors } = useAppTheme();
+  return (
+    <Link href={detail(unit)} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={openLabel(unit)}
+        style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
+      >
+        <Thumb unit={unit} size={64} />
+        <View style={styles.cardBody}>
+          <View style={styles.cardTop}>
+            <Text variant="heading" numberOfLines={1} style={styles.flex}>
+              {unit.name}
+            </Text>
+            {unit.serialLabel ? (
+              <Text variant="mono" tone="muted" numberOfLines={1} style={styles.serial}>
+                {unit.serialLabel}
+              </Text>
+            ) : null}
+          </View>
+          <Text variant="caption" tone="muted">
+            {generatorSummary(unit)}
+          </Text>
+          <BandTags unit={unit} />
+        </View>
+      </Pressable>
+    </Link>
+  );
+}
+
+function UnitTable({ units }: { units: Unit[] }) {
+  const { colors } = useAppTheme();
+  const head = [
+    { key: 'photo', label: '', style: styles.colPhoto },
+    { key: 'name', label: 'Name', style: styles.colName },
+    { key: 'serial', label: 'Serial', style: styles.colSerial },
+    { key: 'generator', label: 'Generator · reference', style: styles.colGen },
+    { key: 'bands', label: 'Filter bands', style: styles.colBands },
+  ];
+  return (
+    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
+      <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
+        {head.map((column) => (
+          <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
+            {column.label}
+          </Text>
+        ))}
+      </View>
+      {units.map((unit, index) => (
+        <UnitRow key={unit.id} unit={unit} last={index === units.length - 1} />
+      ))}
+    </View>
+  );
+}
+
+function UnitRow({ unit, last }: { unit: Unit; last: boolean }) {
+  const { colors } = useAppTheme();
+  const [hovered, setHovered] = useState(false);
+  return (
+    <Link href={detail(unit)} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={openLabel(unit)}
+        onHoverIn={() => setHovered(true)}
+        onHoverOut={() => setHovered(false)}
+        style={StyleSheet.flatten([
+          styles.row,
+          !last && { borderBottomWidth: 1, borderColor: colors.border },
+          hovered && { backgroundColor: colors.primarySoft },
+        ])}
+      >
+        <View style={styles.colPhoto}>
+          <Thumb unit={unit} size={40} />
+        </View>
+        <Text variant="label" numberOfLines={1} style={styles.colName}>
+          {unit.name}
+        </Text>
+        <Text variant="mono" tone="muted" numberOfLines={1} style={styles.colSerial}>
+          {unit.serialLabel || '—'}
+        </Text>
+        <Text variant="caption" style={styles.colGen}>
+          {generatorSummary(unit)}
+        </Text>
+        <View style={styles.colBands}>
+          <BandTags unit={unit} />
+        </View>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  flex: { flex: 1 },
+  cards: { gap: space.md },
+  card: { borderWidth: 1, borderRadius: radius.lg, padding: space.lg, gap: space.md, flexDirection: 'row', alignItems: 'flex-start' },
+  cardBody: { flex: 1, gap: space.xs, minWidth: 0 },
+  cardTop: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  serial: { flexShrink: 1, maxWidth: '45%' },
+  noPhoto: { borderWidth: 1, borderStyle: 'dashed', borderRadius: radius.sm, alignItems: 'center', justifyContent: 'center' },
+  tags: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, marginTop: 2 },
+  tag: { borderRadius: radius.pill, paddingHorizontal: space.sm, paddingVertical: 1 },
+  tagText: { fontFamily: fonts.mono, fontSize: 12 },
+  table: { borderWidth: 1, borderRadius: radius.lg, overflow: 'hidden' },
+  row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.lg, paddingVertical: space.md, gap: space.md },
+  headRow: { borderBottomWidth: 1 },
+  headCell: { textTransform: 'uppercase', letterSpacing: 0.6 },
+  colPhoto: { width: 40 },
+  colName: { flex: 2.4 },
+  colSerial: { flex: 1.2 },
+  colGen: { flex: 2.2 },
+  colBands: { flex: 2.4 },
+});

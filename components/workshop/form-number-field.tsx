@@ -1,0 +1,55 @@
+import { useEffect, useState } from 'react';
+import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
+
+import { TextField, type TextFieldProps } from '../ui/text-field';
+import { parseNumberText } from './format';
+
+export type FormNumberFieldProps<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'error'> & {
+  control: Control<T>;
+  name: Path<T>;
+  /** The field shows value ÷ scale: 1e6 lets the operator type MHz for a value kept in Hz. */
+  scale?: number;
+};
+
+const round = (value: number) => Math.round(value * 1000) / 1000;
+
+function toText(value: unknown, scale: number): string {
+  return typeof value === 'number' && Number.isFinite(value) ? String(Number((value / scale).toPrecision(12))) : '';
+}
+
+/**
+ * A react-hook-form binding for numbers: the operator types text, the form holds a number
+ * (undefined when empty, NaN when not a number), so the shared schemas stay `z.number()`.
+ */
+export function FormNumberField<T extends FieldValues>({ control, name, scale = 1, onBlur, ...rest }: FormNumberFieldProps<T>) {
+  const { field, fieldState } = useController({ control, name });
+  const [text, setText] = useState(() => toText(field.value, scale));
+  // a reset or setValue from outside: show the new value unless the text already means it
+  useEffect(() => {
+    const parsed = parseNumberText(text);
+    const current = parsed === undefined ? undefined : round(parsed * scale);
+    const value = field.value as unknown;
+    if (current !== value && !(Number.isNaN(current) && Number.isNaN(value))) setText(toText(value, scale));
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [field.value, scale]);
+  return (
+    <TextField
+      ref={field.ref}
+      value={text}
+      inputMode="decimal"
+      mono
+      autoCorrect={false}
+      onChangeText={(next) => {
+        setText(next);
+        const parsed = parseNumberText(next);
+        field.onChange(parsed === undefined ? undefined : Number.isNaN(parsed) ? Number.NaN : round(parsed * scale));
+      }}
+      onBlur={(event) => {
+        field.onBlur();
+        onBlur?.(event);
+      }}
+      error={fieldState.error?.message}
+      {...rest}
+    />
+  );
+}
