@@ -27,8 +27,10 @@ export type StationWorkshopProps = {
 
 /** The station's hardware, power, messages and bands, with the ways into the workshop screens. */
 export function StationWorkshop({ station, unit, unitLoading, unitError, readOnly, onOpenBands, onOpenCalibration, onOpenOnAir }: StationWorkshopProps) {
-  const enabled = station.bands.filter((b) => b.enabled);
-  const names = new Map(bandsFor(station.region).map((band) => [band.id, band.name]));
+  const regionBands = bandsFor(station.region);
+  const names = new Map(regionBands.map((band) => [band.id as string, band.name]));
+  const order = regionBands.map((band) => band.id as string);
+  const enabled = station.bands.filter((b) => b.enabled).sort((a, b) => order.indexOf(a.bandId) - order.indexOf(b.bandId));
   const unitHref: Href | null = unit ? { pathname: '/units/[id]', params: { id: String(unit.id) } } : null;
   return (
     <View style={styles.wrap}>

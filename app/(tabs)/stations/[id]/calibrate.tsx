@@ -12,7 +12,7 @@ import { CalibrationForm } from '@/components/workshop/calibration-form';
 import { useCalibrationProposalMutation, useSaveCalibrationMutation } from '@/components/workshop/queries';
 import { TypedOffsetsForm } from '@/components/workshop/typed-offsets-form';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
-import { bandFor, type BandId } from '@/shared/domain';
+import { bandFor, bandsFor, type BandId } from '@/shared/domain';
 import { filterCoverage } from '@/shared/domain/workshop';
 
 export default function StationCalibrateRoute() {
@@ -34,7 +34,9 @@ export default function StationCalibrateRoute() {
   else if (station.data.ownerId !== me?.id)
     body = <ErrorState title="Read-only" error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can calibrate it.`)} />;
   else {
-    const enabled = station.data.bands.filter((b) => b.enabled);
+    // lowest band first, as everywhere else
+    const order = bandsFor(station.data.region).map((band) => band.id as string);
+    const enabled = station.data.bands.filter((b) => b.enabled).sort((a, b) => order.indexOf(a.bandId) - order.indexOf(b.bandId));
     // bands worth measuring: enabled ones whose filter covers them
     const measurable = enabled
       .map((b) => b.bandId as BandId)

@@ -7,7 +7,7 @@ import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { OnAirView } from '@/components/workshop/on-air-view';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
-import { isBandId, type BandId } from '@/shared/domain';
+import { bandsFor, isBandId, type BandId } from '@/shared/domain';
 
 export default function StationOnAirRoute() {
   const router = useRouter();
@@ -22,7 +22,11 @@ export default function StationOnAirRoute() {
     body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
   else if (unit.isError) body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
   else {
-    const enabled = station.data.bands.filter((b) => b.enabled).map((b) => b.bandId as BandId);
+    const order = bandsFor(station.data.region).map((b) => b.id);
+    const enabled = station.data.bands
+      .filter((b) => b.enabled)
+      .map((b) => b.bandId as BandId)
+      .sort((a, b) => order.indexOf(a) - order.indexOf(b));
     const asked = band && isBandId(band) ? band : undefined;
     const bandId = asked ?? enabled[0];
     const bandIds = asked && !enabled.includes(asked) ? [...enabled, asked] : enabled;
