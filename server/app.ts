@@ -8,6 +8,8 @@ import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
 import { myClubThingsRouter } from './features/clubs/my-club-things.router';
+import { deviceRouter } from './features/devices/device.router';
+import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
@@ -60,6 +62,9 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
 
   app.use('/api/health', healthRouter(sequelize));
 
+  // Devices: bearer tokens only, mounted before any cookie session is read.
+  app.use('/api/device/v1', deviceRouter({ sequelize, config }));
+
   const SessionStore = connectSessionSequelize(session.Store);
   const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });
   const passport = configurePassport();
@@ -80,6 +85,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
+  api.use('/stations/:id', stationDevicesRouter({ sequelize }));
+  api.use(fleetHealthRouter());
   api.use('/stations', stationsRouter({ sequelize }));
   api.use('/units', unitsRouter({ storage, logger }));
   api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));

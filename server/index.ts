@@ -1,4 +1,7 @@
+import { Cron } from 'croner';
 import { createApp } from './app';
+import { evaluateAlerts } from './features/devices/alerts.service';
+import { sendLater } from './mail/send-later';
 import { loadConfig } from './config';
 import { migrateToLatest } from './db/migrator';
 import { demoSignIns, seedDemoIfEmpty } from './db/seed/demo';
@@ -35,11 +38,18 @@ async function main() {
     console.log('Press Ctrl-C to stop.\n');
   });
 
+  // Alert rules run on a schedule; the job row lock keeps several server processes from doubling up.
+  const alertJob = new Cron(config.ALERTS_CRON, { protect: true, catch: (error) => logger.error({ err: error }, 'alert evaluation failed') }, async () => {
+    const mails = await evaluateAlerts(sequelize);
+    for (const mail of mails ?? []) sendLater(mailer, logger, mail);
+  });
+
   let stopping = false;
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'stopping');
+    alertJob.stop();
     server.close();
     server.closeAllConnections();
     mailer.close();

@@ -3,12 +3,14 @@ import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-accounts-and-stations';
 import * as m0002 from './migrations/0002-units-and-station-bands';
 import * as m0003 from './migrations/0003-schedules-and-clubs';
+import * as m0004 from './migrations/0004-devices';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
   { name: '0001-accounts-and-stations', ...m0001 },
   { name: '0002-units-and-station-bands', ...m0002 },
   { name: '0003-schedules-and-clubs', ...m0003 },
+  { name: '0004-devices', ...m0004 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -1,6 +1,7 @@
 import { Sequelize } from 'sequelize';
 import { AuditEntryModel, InvitationModel, NotificationModel, OffsetProposalModel } from './models/club-extras.model';
 import { ClubModel } from './models/club.model';
+import { AlertModel, AlertSettingsModel, DeviceTokenModel, DeviceTransmissionModel, HeartbeatModel } from './models/device.model';
 import { MembershipModel } from './models/membership.model';
 import { PasswordResetModel } from './models/password-reset.model';
 import { ScheduleModel } from './models/schedule.model';
@@ -33,6 +34,7 @@ export function createSequelize(databaseUrl: string): Sequelize {
   OffsetProposalModel.initModel(sequelize);
   NotificationModel.initModel(sequelize);
   AuditEntryModel.initModel(sequelize);
+  for (const model of [DeviceTokenModel, HeartbeatModel, DeviceTransmissionModel, AlertSettingsModel, AlertModel]) model.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });

@@ -4,3 +4,4 @@ export * from './unit';
 export * from './station';
 export * from './schedule';
 export * from './club';
+export * from './device';

@@ -1,0 +1,106 @@
+import { Op, QueryTypes, type Sequelize } from 'sequelize';
+import { bandOnAir } from '@/shared/domain/workshop';
+import type { AlertRule, Station } from '@/shared/schemas';
+import { AlertModel, DeviceTokenModel, DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
+import { UserModel } from '../../db/models/user.model';
+import type { OutgoingMail } from '../../mail/mailer';
+import { planFor } from '../schedules/plan';
+import * as schedulesRepo from '../schedules/schedules.repo';
+import * as stationsRepo from '../stations/stations.repo';
+import * as unitsRepo from '../units/units.repo';
+import { driftFor, settingsOf } from './health.service';
+
+type Finding = { rule: AlertRule; message: string };
+
+const ruleTitles: Record<AlertRule, string> = {
+  silent: 'silent while scheduled',
+  'clock-offset': 'clock off',
+  'drift-out-of-window': 'drift leaves the window',
+  'transmitting-while-suspended': 'transmitting while suspended',
+};
+
+/** Which of our rules a station breaks right now. */
+async function findingsFor(station: Station, nowMs: number): Promise<Finding[]> {
+  const settings = await settingsOf(station.id);
+  const [unit, schedule, last] = await Promise.all([
+    station.unitId === null ? null : unitsRepo.findById(station.unitId),
+    schedulesRepo.findByStation(station.id),
+    HeartbeatModel.findOne({ where: { stationId: station.id, receivedAt: { [Op.lte]: new Date(nowMs) } }, order: [['receivedAt', 'DESC']] }),
+  ]);
+  const findings: Finding[] = [];
+  const silentMs = settings.silentMinutes * 60_000;
+  const lastMs = last?.receivedAt.getTime() ?? null;
+  if (schedule && station.transmitEnabled && !station.suspension) {
+    const due = planFor(station, unit, schedule, nowMs - silentMs, nowMs).transmissions.length > 0;
+    if (due && (lastMs === null || nowMs - lastMs > silentMs)) {
+      findings.push({ rule: 'silent', message: `No word from the device for over ${settings.silentMinutes} minutes while it is scheduled to transmit.` });
+    }
+  }
+  const fresh = last && lastMs !== null && nowMs - lastMs <= silentMs;
+  if (fresh && last.clockOffsetMs !== null && Math.abs(last.clockOffsetMs) > settings.clockOffsetMs) {
+    findings.push({ rule: 'clock-offset', message: `The device clock is ${Math.round(last.clockOffsetMs)} ms off (limit ${settings.clockOffsetMs} ms): check its time source.` });
+  }
+  if (fresh && unit && last.temperatureC !== null) {
+    const drift = driftFor(station, unit, last.temperatureC);
+    if (drift !== null && drift > 0) {
+      for (const band of station.bands.filter((b) => b.enabled)) {
+        const air = bandOnAir(station, unit, band.bandId);
+        if ('problem' in air) continue;
+        if (air.window.marginHz < drift) {
+          findings.push({ rule: 'drift-out-of-window', message: `At ${last.temperatureC.toFixed(1)} °C the signal may move ${drift.toFixed(1)} Hz, more than the ${air.window.marginHz.toFixed(1)} Hz margin on ${air.band.name}.` });
+          break;
+        }
+      }
+    }
+  }
+  if (station.suspension) {
+    const since = new Date(station.suspension.at);
+    const sent = await DeviceTransmissionModel.count({ where: { stationId: station.id, startedAt: { [Op.gte]: since, [Op.lte]: new Date(nowMs) } } });
+    if (sent > 0) findings.push({ rule: 'transmitting-while-suspended', message: `The device reported ${sent} transmission${sent === 1 ? '' : 's'} since the club suspended the station.` });
+  }
+  return findings;
+}
+
+/**
+ * One evaluation round. Only the process that wins the job row's lock (FOR UPDATE SKIP LOCKED)
+ * evaluates; the others skip, so several servers never open or mail an alert twice.
+ * Returns the mails to send (once per opening), or null when another process holds the lock.
+ */
+export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): Promise<OutgoingMail[] | null> {
+  await sequelize.query("INSERT IGNORE INTO job_locks (name, lastRunAt) VALUES ('alerts', NULL)");
+  return sequelize.transaction(async (transaction) => {
+    const locked = await sequelize.query("SELECT name FROM job_locks WHERE name = 'alerts' FOR UPDATE SKIP LOCKED", { transaction, type: QueryTypes.SELECT });
+    if (locked.length === 0) return null;
+    const now = new Date(nowMs);
+    const devices = await DeviceTokenModel.findAll({ attributes: ['stationId'], transaction });
+    for (const { stationId } of devices) {
+      const station = await stationsRepo.findById(stationId, transaction);
+      if (!station) continue;
+      const findings = await findingsFor(station, nowMs);
+      const open = await AlertModel.findAll({ where: { stationId, resolvedAt: null }, transaction });
+      for (const finding of findings) {
+        const existing = open.find((a) => a.rule === finding.rule);
+        if (existing) await existing.update({ lastSeenAt: now, message: finding.message }, { transaction });
+        else await AlertModel.create({ stationId, rule: finding.rule, message: finding.message, openedAt: now, lastSeenAt: now, resolvedAt: null, mailedAt: null, openKey: `${stationId}:${finding.rule}` }, { transaction });
+      }
+      for (const alert of open) {
+        if (!findings.some((f) => f.rule === alert.rule)) await alert.update({ resolvedAt: now, openKey: null }, { transaction });
+      }
+    }
+    const unmailed = await AlertModel.findAll({ where: { mailedAt: null, resolvedAt: null }, transaction });
+    const mails: OutgoingMail[] = [];
+    for (const alert of unmailed) {
+      await alert.update({ mailedAt: now }, { transaction });
+      const station = await stationsRepo.findById(alert.stationId, transaction);
+      const owner = station && (await UserModel.findByPk(station.ownerId, { transaction }));
+      if (!station || !owner) continue;
+      mails.push({
+        to: owner.email,
+        subject: `Faintline alert: ${station.name} — ${ruleTitles[alert.rule as AlertRule]}`,
+        text: `Hello ${owner.displayName},\n\n${alert.message}\n\nStation: ${station.name} (${station.callsign})\nOpened: ${alert.openedAt.toISOString().replace('T', ' ').slice(0, 19)} UTC\n\nThe alert closes by itself when the cause goes away; you get one mail per opening.\n`,
+      });
+    }
+    await sequelize.query("UPDATE job_locks SET lastRunAt = ? WHERE name = 'alerts'", { replacements: [now], transaction });
+    return mails;
+  });
+}
