@@ -1,0 +1,108 @@
+import { useEffect, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import type { BandId } from '@/shared/domain';
+
+import { Card } from '../ui/card';
+import { Text } from '../ui/text';
+import { fonts, radius, space } from '../ui/theme';
+import { useAppTheme } from '../ui/theme-provider';
+import { bandName, formatCountdown, formatMHz, formatUtcTime } from './format';
+
+export type UpcomingTransmission = {
+  startMs: number;
+  bandId: BandId;
+  carrierHz: number;
+  audioOffsetHz: number;
+  messageText: string;
+};
+
+export type NextTransmissionsProps = {
+  transmissions: readonly UpcomingTransmission[];
+  /** Where the time comes from; tests pass a fixed clock. */
+  now?: () => number;
+  /** How many to list. */
+  count?: number;
+  /** Shown when nothing is coming (paused, suspended, outside the dates…). */
+  quietMessage?: string;
+};
+
+/** The next transmissions as the server planned them, with a live countdown to the first. */
+export function NextTransmissions({ transmissions, now = Date.now, count = 6, quietMessage }: NextTransmissionsProps) {
+  const { colors } = useAppTheme();
+  const [nowMs, setNowMs] = useState(now);
+  useEffect(() => {
+    let timer: ReturnType<typeof setTimeout>;
+    const tick = () => {
+      const current = now();
+      setNowMs(current);
+      timer = setTimeout(tick, 1000 - (current % 1000) + 5);
+    };
+    tick();
+    return () => clearTimeout(timer);
+  }, [now]);
+  // a transmission stays "next" until it has started
+  const coming = transmissions.filter((t) => t.startMs > nowMs).slice(0, count);
+  const first = coming[0];
+  return (
+    <Card>
+      <Text variant="heading" accessibilityRole="header">
+        Next transmissions
+      </Text>
+      {first ? (
+        <View
+          accessibilityRole="timer"
+          accessibilityLabel={`Next transmission in ${formatCountdown(first.startMs - nowMs)}, at ${formatUtcTime(first.startMs)} on ${bandName(first.bandId)}`}
+          style={[styles.countdown, { backgroundColor: colors.signalSoft, borderColor: colors.signal }]}
+        >
+          <Text variant="label">Next transmission in</Text>
+          <Text variant="monoLarge" style={[styles.figure, { color: colors.signal }]}>
+            {formatCountdown(first.startMs - nowMs)}
+          </Text>
+          <Text variant="caption" tone="muted">
+            at {formatUtcTime(first.startMs)} on {bandName(first.bandId)}
+          </Text>
+        </View>
+      ) : (
+        <Text tone="muted">{quietMessage ?? 'Nothing is planned in the next 24 hours.'}</Text>
+      )}
+      {coming.length ? (
+        <View accessibilityRole="list" style={styles.list}>
+          {coming.map((t) => (
+            <View
+              key={`${t.startMs}-${t.bandId}`}
+              accessibilityLabel={`${formatUtcTime(t.startMs)}, ${bandName(t.bandId)}, ${t.messageText}`}
+              style={[styles.row, { borderColor: colors.border }]}
+            >
+              <Text variant="mono" style={styles.time}>
+                {formatUtcTime(t.startMs)}
+              </Text>
+              <Text variant="label" style={styles.band}>
+                {bandName(t.bandId)}
+              </Text>
+              <View style={styles.detail}>
+                <Text variant="caption" style={styles.monoCaption}>
+                  {formatMHz(t.carrierHz)}
+                </Text>
+                <Text variant="caption" tone="muted" numberOfLines={1}>
+                  offset {Math.round(t.audioOffsetHz * 10) / 10} Hz · {t.messageText}
+                </Text>
+              </View>
+            </View>
+          ))}
+        </View>
+      ) : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  countdown: { borderWidth: 1, borderLeftWidth: 4, borderRadius: radius.md, padding: space.md, gap: 2 },
+  figure: { fontVariant: ['tabular-nums'], fontSize: 28, lineHeight: 34 },
+  list: { gap: 0 },
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingVertical: space.sm, borderTopWidth: 1 },
+  time: { width: 92, fontVariant: ['tabular-nums'] },
+  band: { width: 48 },
+  detail: { flex: 1, minWidth: 0 },
+  monoCaption: { fontFamily: fonts.mono },
+});

@@ -1,0 +1,67 @@
+import type { ScheduleValues, Station, Unit } from '@/shared/schemas';
+
+export const NOW_MS = Date.parse('2026-12-02T14:02:48.000Z');
+
+/** Fictional operator's station: 40 m, 20 m and 10 m enabled, calibrated; the unit has filters for 40 m and 20 m only. */
+export const station: Station = {
+  id: 12,
+  ownerId: 7,
+  ownerName: 'Ilse Marrow',
+  name: 'Attic beacon',
+  callsign: 'Q1IMW',
+  locator: 'IO91WM',
+  notes: '',
+  unitId: 3,
+  region: 'itu1',
+  audioOffsetHz: 1500,
+  transmitEnabled: true,
+  referenceErrorPpm: null,
+  bands: [
+    { bandId: '40m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
+    { bandId: '20m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
+    { bandId: '10m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
+  ],
+  suspension: null,
+  createdAt: '2026-12-01T10:00:00.000Z',
+  updatedAt: '2026-12-01T10:00:00.000Z',
+};
+
+export const unit: Unit = {
+  id: 3,
+  ownerId: 7,
+  ownerName: 'Ilse Marrow',
+  name: 'Loft board',
+  serialLabel: 'IM-2',
+  controller: 'Wi-Fi microcontroller board',
+  timeSource: 'network',
+  generatorKind: 'pll',
+  referenceHz: 25e6,
+  tolerancePpm: 10,
+  tempCoPpmPerC: null,
+  disciplined: false,
+  generatorLevelDbm: 10,
+  attenuatorDb: 0,
+  amplifier: null,
+  filters: [
+    { bands: ['40m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 7.8e6 },
+    { bands: ['20m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 15.6e6 },
+  ],
+  antenna: { kind: 'dipole', bands: [], gainDbi: 2.15 },
+  dutyCycle: 0.5,
+  notes: '',
+  photos: [],
+  createdAt: '2026-12-01T10:00:00.000Z',
+  updatedAt: '2026-12-01T10:00:00.000Z',
+} as Unit;
+
+export function draft(steps: ScheduleValues['steps']): ScheduleValues {
+  return {
+    name: 'Test rotation',
+    steps,
+    cadence: { kind: 'duty', dutyPercent: 20 },
+    stagger: { stepHz: 0, spanHz: 0 },
+    startDate: '2026-12-01',
+    endDate: null,
+    paused: false,
+  };
+}
