@@ -6,8 +6,10 @@ import { bandOnAir, filterCoverage, type BandOnAir } from '@/shared/domain/works
 import type { Station, Unit } from '@/shared/schemas';
 
 import { Card } from '../ui/card';
+import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { useAppTheme } from '../ui/theme-provider';
 import { formatMHz, formatSigned } from './format';
 import { Toggle } from './toggle';
 import { WindowGauge } from './window-gauge';
@@ -25,16 +27,24 @@ export type BandListProps = {
 
 /** Every band of the station's licence region: its switch, why it cannot be enabled, and its window gauge. */
 export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, onToggle }: BandListProps) {
-  const bands = bandsFor(station.region);
+  const { colors } = useAppTheme();
+  const rows = bandsFor(station.region).map((band) => {
+    const setting = station.bands.find((b) => b.bandId === band.id);
+    const coverage = unit ? filterCoverage(unit.filters, band) : null;
+    const blocked = !unit ? NO_UNIT : coverage && !coverage.covered ? coverage.reason : null;
+    return { band, setting, enabled: setting?.enabled ?? false, blocked };
+  });
+  const usable = rows.filter((row) => row.enabled || !row.blocked);
+  const closed = rows.filter((row) => !row.enabled && row.blocked);
   return (
     <View style={styles.list}>
-      {bands.map((band) => {
-        const setting = station.bands.find((b) => b.bandId === band.id);
-        const enabled = setting?.enabled ?? false;
-        const coverage = unit ? filterCoverage(unit.filters, band) : null;
+      {!unit ? <Notice message={NO_UNIT} /> : null}
+      {unit && usable.length === 0 ? (
+        <Notice tone="info" message="No filter on this unit covers a band of this licence region. Add the right low-pass filter to the unit first." />
+      ) : null}
+      {usable.map(({ band, setting, enabled, blocked }) => {
         const air = unit && enabled ? bandOnAir(station, unit, band.id) : null;
         const onAir = air && !('problem' in air) ? (air as BandOnAir) : null;
-        const blocked = !unit ? 'Assign a unit to this station first: the unit’s filters decide which bands can be enabled.' : coverage && !coverage.covered ? coverage.reason : null;
         const offset = setting?.calibrationOffsetHz;
         return (
           <Card key={band.id} style={styles.card}>
@@ -49,16 +59,14 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
               accessibilityLabel={`Enable ${band.name}`}
               value={enabled}
               // a band that is on can always be switched off, even when its filter went away
-              disabled={readOnly || (!enabled && !!blocked)}
+              disabled={readOnly}
               busy={pendingBandId === band.id}
               hint={
-                blocked && !enabled
-                  ? blocked
-                  : enabled
-                    ? offset == null
-                      ? 'Not calibrated yet.'
-                      : `Calibration: ${formatSigned(offset, 2, 'Hz')} (${setting?.calibrationSource === 'typed' ? 'typed' : 'measured'}).`
-                    : 'Off: the beacon skips this band.'
+                enabled
+                  ? offset == null
+                    ? 'Not calibrated yet.'
+                    : `Calibration: ${formatSigned(offset, 2, 'Hz')} (${setting?.calibrationSource === 'typed' ? 'typed' : 'measured'}).`
+                  : 'Off: the beacon skips this band. A filter on the unit covers it.'
               }
               onChange={(next) => onToggle(band.id, next)}
             />
@@ -95,9 +103,38 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
           </Card>
         );
       })}
+      {closed.length ? (
+        <Card style={styles.card}>
+          <Text variant="heading" accessibilityRole="header">
+            {unit ? 'Bands no filter covers' : 'Bands'}
+          </Text>
+          {unit ? (
+            <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text>
+          ) : null}
+          {closed.map(({ band, blocked }) => (
+            <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>
+              <Toggle
+                label={`${band.name} · ${formatMHz(band.dialHz)}`}
+                accessibilityLabel={`Enable ${band.name}`}
+                value={false}
+                disabled
+                hint={unit ? (blocked ?? undefined) : undefined}
+                onChange={() => undefined}
+              />
+              {errors[band.id] ? (
+                <Text variant="label" tone="danger" accessibilityRole="alert">
+                  {errors[band.id]}
+                </Text>
+              ) : null}
+            </View>
+          ))}
+        </Card>
+      ) : null}
     </View>
   );
 }
+
+const NO_UNIT = 'Assign a unit to this station first: the unit’s filters decide which bands can be enabled.';
 
 const styles = StyleSheet.create({
   list: { gap: space.md },
@@ -105,4 +142,5 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', columnGap: space.md },
   link: { alignSelf: 'flex-start' },
   underline: { textDecorationLine: 'underline' },
+  closedRow: { borderTopWidth: 1, paddingTop: space.xs },
 });

@@ -64,6 +64,6 @@ const styles = StyleSheet.create({
   hex: { letterSpacing: 0.5 },
   tone: { borderTopWidth: 1, paddingTop: space.sm, gap: 2, borderRadius: radius.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.md },
-  rowLabel: { width: 112, paddingTop: 2 },
-  rowValue: { flex: 1, minWidth: 200 },
+  rowLabel: { width: 104 },
+  rowValue: { flex: 1, minWidth: 180, fontSize: 13, lineHeight: 19 },
 });

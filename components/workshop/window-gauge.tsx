@@ -32,11 +32,11 @@ const LOUPE_WIDTH = 132;
 const LOUPE_SPAN_HZ = 14;
 const MAX_OVERHANG_HZ = 120;
 
-/** Which tones are outside the window, in words: "tone 4 is 2.6 Hz above the window". */
+/** Which tones (0–3) are outside the window, in words: "tone 3 is 2.6 Hz above the window". */
 export function tonesOutside(window: WindowCheck): string[] {
   return window.tonesHz.flatMap((toneHz, index) => {
-    if (toneHz < window.windowLowHz) return [`tone ${index + 1} is ${(window.windowLowHz - toneHz).toFixed(1)} Hz below the window`];
-    if (toneHz > window.windowHighHz) return [`tone ${index + 1} is ${(toneHz - window.windowHighHz).toFixed(1)} Hz above the window`];
+    if (toneHz < window.windowLowHz) return [`tone ${index} is ${(window.windowLowHz - toneHz).toFixed(1)} Hz below the window`];
+    if (toneHz > window.windowHighHz) return [`tone ${index} is ${(toneHz - window.windowHighHz).toFixed(1)} Hz above the window`];
     return [];
   });
 }
@@ -152,15 +152,15 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
               key={index}
               x1={loupeX(hz)}
               x2={loupeX(hz)}
-              y1={LOUPE_TOP + 7}
-              y2={LOUPE_TOP + LOUPE_HEIGHT - 7}
+              y1={LOUPE_TOP + 6}
+              y2={LOUPE_TOP + LOUPE_HEIGHT - 14}
               stroke={window.tonesHz[index] < window.windowLowHz || window.tonesHz[index] > window.windowHighHz ? colors.danger : colors.primary}
               strokeWidth={3}
               strokeLinecap="round"
             />
           ))}
-          <SvgText x={loupeLeft + LOUPE_WIDTH / 2} y={LOUPE_TOP + LOUPE_HEIGHT - 1} fontSize={8} fill={colors.textMuted} textAnchor="middle" fontFamily={fonts.mono}>
-            {`${(TONE_SPACING_HZ * 3).toFixed(2)} Hz`}
+          <SvgText x={loupeLeft + LOUPE_WIDTH / 2} y={LOUPE_TOP + LOUPE_HEIGHT - 4} fontSize={9} fill={colors.textMuted} textAnchor="middle" fontFamily={fonts.mono}>
+            {`4 tones · ${(TONE_SPACING_HZ * 3).toFixed(2)} Hz`}
           </SvgText>
           {/* axis: offsets above the dial */}
           {[WINDOW_LOW_OFFSET_HZ, 1500, WINDOW_HIGH_OFFSET_HZ].map((hz, index) => (

@@ -5,6 +5,9 @@ import { after, before, describe, it } from 'node:test';
 import Ajv from 'ajv';
 import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, visibleText, type RunningServer } from './harness';
 
+// a 2×2 teal PNG made for this test
+const PNG_2PX = 'iVBORw0KGgoAAAANSUhEUgAAAAIAAAACCAIAAAD91JpzAAAAEElEQVR4nGPgT08AIgYIBQAWMgNZ0nuvbwAAAABJRU5ErkJggg==';
+
 const schema = JSON.parse(readFileSync(path.resolve(__dirname, '../../shared/formats/station-config.v1.schema.json'), 'utf8'));
 
 let server: RunningServer;
@@ -49,7 +52,22 @@ for (const viewport of VIEWPORTS) {
         await page.waitForURL(/\/units\/\d+$/);
         await visibleText(page, /Fractional-N PLL · 25 MHz/).waitFor();
         await visibleText(page, 'Reported power in the message').waitFor();
+
+        // photos: a file of the wrong kind is refused in words, a PNG uploads, and deleting asks first
+        const choose = async (file: { name: string; mimeType: string; buffer: Buffer }) => {
+          const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Add a photo' }).click()]);
+          await chooser.setFiles(file);
+        };
+        await choose({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') });
+        await visibleText(page, '“notes.txt” is not a JPEG, PNG or WebP photo. Choose one of those.').waitFor();
+        await choose({ name: 'board.png', mimeType: 'image/png', buffer: Buffer.from(PNG_2PX, 'base64') });
+        await page.getByRole('button', { name: 'Delete photo 1' }).waitFor();
         await screenshot(page, `e2e-unit-detail-${viewport.name}`);
+        await page.getByRole('button', { name: 'Delete photo 1' }).click();
+        await visibleText(page, 'Delete this photo?').waitFor();
+        await page.getByRole('button', { name: 'Delete photo', exact: true }).click();
+        await page.getByRole('button', { name: 'Delete photo 1' }).waitFor({ state: 'detached' });
+        await visibleText(page, /No photos yet/).waitFor();
 
         // 2. a station on that unit
         await page.goto(`${BASE_URL}/stations/new`);

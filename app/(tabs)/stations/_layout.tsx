@@ -21,9 +21,9 @@ export default function StationsLayoutRoute() {
       <Stack.Screen name="new" options={{ title: 'New station' }} />
       <Stack.Screen name="[id]" options={{ title: 'Station' }} />
       <Stack.Screen name="[id]/edit" options={{ title: 'Edit station' }} />
-      <Stack.Screen name="[id]/bands" options={{ title: 'Bands and calibration' }} />
-      <Stack.Screen name="[id]/calibrate" options={{ title: 'Calibrate' }} />
-      <Stack.Screen name="[id]/on-air" options={{ title: 'On-air detail' }} />
+      <Stack.Screen name="[id]/bands" options={{ title: 'Station · bands' }} />
+      <Stack.Screen name="[id]/calibrate" options={{ title: 'Station · calibration' }} />
+      <Stack.Screen name="[id]/on-air" options={{ title: 'Station · on the air' }} />
     </Stack>
   );
 }

@@ -31,7 +31,7 @@ describe('WindowGauge', () => {
   it('when a tone falls outside the window, shows a warning naming the tone and how far out it is', () => {
     renderWithProviders(gauge(1598));
     const text = screenText();
-    expect(text).toContain('Warning: tone 3 is 0.9 Hz above the window; tone 4 is 2.4 Hz above the window.');
+    expect(text).toContain('Warning: tone 2 is 0.9 Hz above the window; tone 3 is 2.4 Hz above the window.');
     expect(text).toContain('calibrate this band or change the audio offset');
     expect(text).not.toContain('All four tones are inside');
   });
