@@ -65,6 +65,8 @@ function RootStack({ fontsReady }: { fontsReady: boolean }) {
       <Stack.Protected guard={!!user}>
         <Stack.Screen name="(tabs)" />
       </Stack.Protected>
+      {/* the invitation link works signed in and signed out (it offers sign-in and comes back) */}
+      <Stack.Screen name="join" options={{ title: 'Join a club · Faintline' }} />
       <Stack.Screen name="+not-found" options={{ title: 'Page not found' }} />
     </Stack>
   );

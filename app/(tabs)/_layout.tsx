@@ -1,6 +1,8 @@
 import { Tabs } from 'expo-router/js-tabs';
 
 import { useSessionQuery } from '@/components/auth/queries';
+import { NoticeBell } from '@/components/notices/notice-bell';
+import { unreadCount, useNoticesQuery } from '@/components/notices/queries';
 import { ShellHeader, ShellNav } from '@/components/shell/shell-nav';
 import { useBreakpoints } from '@/components/ui/breakpoints';
 import { useAppTheme } from '@/components/ui/theme-provider';
@@ -9,25 +11,30 @@ export default function TabsLayoutRoute() {
   const { isWide } = useBreakpoints();
   const { colors } = useAppTheme();
   const user = useSessionQuery().data;
-  const isClubMember = !!user?.clubs.length;
+  const unread = unreadCount(useNoticesQuery(!!user).data);
   return (
     <Tabs
-      tabBar={(props) => <ShellNav {...props} variant={isWide ? 'rail' : 'bottom'} />}
+      tabBar={(props) => (
+        <ShellNav {...props} variant={isWide ? 'rail' : 'bottom'} accessory={<NoticeBell unread={unread} variant="row" />} />
+      )}
       screenOptions={{
         tabBarPosition: isWide ? 'left' : 'bottom',
         // phones: a header strip with the mark and the live UTC clock; wide screens keep both in the rail
         headerShown: !isWide,
-        header: () => <ShellHeader />,
+        header: () => <ShellHeader accessory={<NoticeBell unread={unread} variant="icon" />} />,
         sceneStyle: { backgroundColor: colors.background },
       }}
     >
       <Tabs.Screen name="index" options={{ title: 'Overview · Faintline' }} />
       <Tabs.Screen name="stations" options={{ title: 'Stations · Faintline' }} />
       <Tabs.Screen name="units" options={{ title: 'Units · Faintline' }} />
-      <Tabs.Protected guard={isClubMember}>
-        <Tabs.Screen name="club" options={{ title: 'Club · Faintline' }} />
-      </Tabs.Protected>
+      {/* every operator may start a club, so the tab is always there */}
+      <Tabs.Screen name="club" options={{ title: 'Club · Faintline' }} />
       <Tabs.Screen name="settings" options={{ title: 'Settings · Faintline' }} />
+      {/* no tab of their own (not in shellTabs): reached from the notice bell and the Club tab */}
+      <Tabs.Screen name="notices" options={{ title: 'Notices · Faintline' }} />
+      <Tabs.Screen name="proposals" options={{ title: 'Offset proposals · Faintline' }} />
+      <Tabs.Screen name="activity" options={{ title: 'Your activity log · Faintline' }} />
     </Tabs>
   );
 }

@@ -1,4 +1,5 @@
 import type { BottomTabBarProps } from 'expo-router/js-tabs';
+import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
@@ -18,10 +19,15 @@ export const shellTabs: Record<string, { label: string; icon: NavIconName }> = {
   settings: { label: 'Settings', icon: 'settings' },
 };
 
-export type ShellNavProps = BottomTabBarProps & { variant: 'bottom' | 'rail'; now?: () => number };
+export type ShellNavProps = BottomTabBarProps & {
+  variant: 'bottom' | 'rail';
+  now?: () => number;
+  /** Drawn below the rail's tabs (the notice bell); not shown in the bottom bar. */
+  accessory?: ReactNode;
+};
 
 /** The signed-in navigation: a 56 px bottom bar on phones, a side rail with the clock on wide screens. */
-export function ShellNav({ state, navigation, variant, now }: ShellNavProps) {
+export function ShellNav({ state, navigation, variant, now, accessory }: ShellNavProps) {
   const { colors } = useAppTheme();
   const insets = useSafeAreaInsets();
   const rail = variant === 'rail';
@@ -69,6 +75,7 @@ export function ShellNav({ state, navigation, variant, now }: ShellNavProps) {
         </View>
         <UtcClock variant="panel" now={now} />
         <View style={styles.railItems}>{buttons}</View>
+        {accessory ? <View style={[styles.railAccessory, { borderColor: colors.border }]}>{accessory}</View> : null}
       </View>
     );
   }
@@ -86,7 +93,7 @@ export function ShellNav({ state, navigation, variant, now }: ShellNavProps) {
 }
 
 /** The phone header strip: the mark on the left, the live UTC clock on the right. */
-export function ShellHeader({ now }: { now?: () => number }) {
+export function ShellHeader({ now, accessory }: { now?: () => number; accessory?: ReactNode }) {
   const { colors } = useAppTheme();
   const insets = useSafeAreaInsets();
   return (
@@ -94,7 +101,10 @@ export function ShellHeader({ now }: { now?: () => number }) {
       style={[styles.header, { backgroundColor: colors.surface, borderColor: colors.border, paddingTop: insets.top + space.sm }]}
     >
       <Wordmark />
-      <UtcClock variant="strip" now={now} />
+      <View style={styles.headerEnd}>
+        <UtcClock variant="strip" now={now} />
+        {accessory}
+      </View>
     </View>
   );
 }
@@ -107,6 +117,8 @@ const styles = StyleSheet.create({
   rail: { width: layout.sideRailWidth, borderRightWidth: 1, paddingHorizontal: space.lg, gap: space.xl },
   railBrand: { paddingHorizontal: space.xs },
   railItems: { gap: space.xs },
+  railAccessory: { borderTopWidth: 1, paddingTop: space.md },
+  headerEnd: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   railItem: {
     flexDirection: 'row',
     alignItems: 'center',

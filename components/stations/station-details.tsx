@@ -12,6 +12,12 @@ export type StationDetailsProps = { station: Station; readOnly: boolean };
 export function StationDetails({ station, readOnly }: StationDetailsProps) {
   return (
     <View style={styles.wrap}>
+      {station.suspension ? (
+        <Card tone="signal" style={styles.suspended}>
+          <Text variant="label">Suspended by the club since {formatUtcDateTime(station.suspension.at)}: it does not send.</Text>
+          <Text>Reason: {station.suspension.reason}</Text>
+        </Card>
+      ) : null}
       {readOnly ? (
         <Card tone="signal">
           <Text variant="label">Read-only: this station belongs to {station.ownerName}</Text>
@@ -48,6 +54,7 @@ function Fact({ label, value, mono = false }: { label: string; value: string; mo
 
 const styles = StyleSheet.create({
   wrap: { gap: space.lg },
+  suspended: { borderLeftWidth: 4 },
   fact: { flexDirection: 'row', alignItems: 'baseline', flexWrap: 'wrap', gap: space.md, paddingVertical: space.xs },
   factLabel: { width: 96 },
   factValue: { flexShrink: 1 },

@@ -1,0 +1,37 @@
+import { StyleSheet, View } from 'react-native';
+
+import { AuditList, CsvLink } from '@/components/audit/audit-list';
+import { auditCsvPath, useMyAuditQuery } from '@/components/audit/queries';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/ui/theme';
+
+export default function ActivityRoute() {
+  const log = useMyAuditQuery();
+  let body;
+  if (log.isPending) body = <LoadingState label="Loading your log…" />;
+  else if (log.isError) body = <ErrorState title="Your log could not be loaded" error={log.error} onRetry={() => log.refetch()} />;
+  else if (log.data.length === 0)
+    body = <EmptyState title="Nothing logged yet" message="Changes to your stations, units, bands and schedules show up here." />;
+  else body = <AuditList entries={log.data} />;
+  return (
+    <Screen>
+      <Text variant="title" accessibilityRole="header">
+        Your activity log
+      </Text>
+      <View style={styles.head}>
+        <Text tone="muted" style={styles.grow}>
+          Every change to your stations and equipment, by you or by a club admin, with the time in UTC.
+        </Text>
+        <CsvLink href={auditCsvPath.mine()} />
+      </View>
+      {body}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
+  grow: { flex: 1, minWidth: 220 },
+});
