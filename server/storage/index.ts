@@ -1,12 +1,13 @@
 import type { Config } from '../config';
 import { localDiskStorage } from './local-disk';
-import { s3Storage } from './s3';
 import type { FileStorage } from './storage';
 
 export type { FileStorage } from './storage';
 
 export function createStorage(config: Config): FileStorage {
   if (config.STORAGE_DRIVER === 's3') {
+    // Loaded only when used: the S3 client is large and most installs keep files on disk.
+    const { s3Storage } = require('./s3') as typeof import('./s3');
     return s3Storage({
       endpoint: config.S3_ENDPOINT || undefined,
       region: config.S3_REGION,

@@ -4,6 +4,9 @@ import { bandFor, type BandId } from '@/shared/domain/bands';
 import { predictedOffsetHz } from '@/shared/domain/calibration';
 import { scheduleInput, unitInput, type UnitInput } from '@/shared/schemas';
 import { ScheduleModel } from '../models/schedule.model';
+import { DeviceTokenModel } from '../models/device.model';
+import { hashToken } from '../../features/devices/tokens.service';
+import { DEMO_DEVICES } from './demo-devices';
 import { ClubModel } from '../models/club.model';
 import { MembershipModel } from '../models/membership.model';
 import { StationBandModel } from '../models/station-band.model';
@@ -123,6 +126,8 @@ export async function seedDemoIfEmpty(sequelize: Sequelize, bcryptCost: number):
           });
           await ScheduleModel.create({ stationId: row.id, spec: JSON.stringify(rules) }, { transaction });
         }
+        const device = DEMO_DEVICES.find((d) => d.stationName === s.name);
+        if (device) await DeviceTokenModel.create({ stationId: row.id, tokenHash: hashToken(device.token) }, { transaction });
       }
     }
   });

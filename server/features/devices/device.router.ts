@@ -5,6 +5,7 @@ import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
 import { AppError } from '../../lib/app-error';
+import { onStationChanged } from '../../lib/change-feed';
 import * as schedulesRepo from '../schedules/schedules.repo';
 import * as stationsRepo from '../stations/stations.repo';
 import * as unitsRepo from '../units/units.repo';
@@ -20,12 +21,28 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
 export function deviceRouter({ sequelize, config }: { sequelize: Sequelize; config: Config }) {
   const router = Router();
   const cache = new Map<number, { etag: string; body: string }>();
+  // Known tokens for a moment, so a poll costs no query; any change in this process drops the
+  // entry at once, and other processes see it within DEVICE_CACHE_MS.
+  const known = new Map<string, { device: DeviceIdentity; at: number }>();
+  onStationChanged((stationId) => {
+    if (stationId === 'all') known.clear();
+    else for (const [token, entry] of known) if (entry.device.stationId === stationId) known.delete(token);
+  });
+
+  async function lookUp(token: string) {
+    const hit = known.get(token);
+    if (hit && Date.now() - hit.at < config.DEVICE_CACHE_MS) return hit.device;
+    const device = await identify(sequelize, token);
+    if (device) known.set(token, { device, at: Date.now() });
+    else known.delete(token);
+    return device;
+  }
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
     const header = req.get('authorization') ?? '';
     const match = /^Bearer\s+(\S+)$/i.exec(header);
     if (!match) return next(new AppError('unauthenticated', 'Send the device token as "Authorization: Bearer <token>"'));
-    const device = await identify(sequelize, match[1]);
+    const device = await lookUp(match[1]);
     if (!device) return next(new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)'));
     req.device = device;
     next();

@@ -1,3 +1,4 @@
+import { stationChangedAfter } from '../../lib/change-feed';
 import { createHash, randomBytes } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
@@ -17,6 +18,7 @@ export async function rotate(user: SessionUser, stationId: number) {
     const existing = await DeviceTokenModel.findOne({ where: { stationId }, transaction, lock: transaction.LOCK.UPDATE });
     if (existing) await existing.update({ tokenHash: hashToken(token) }, { transaction });
     else await DeviceTokenModel.create({ stationId, tokenHash: hashToken(token) }, { transaction });
+    stationChangedAfter(transaction, stationId);
     await audit.record({ actor: user, ownerId: user.id, action: existing ? 'device.rotate' : 'device.create', entityType: 'station', entityId: stationId, summary: `${existing ? 'Rotated' : 'Created'} the device token of ${station.name}` }, transaction);
   });
   return token;
@@ -26,6 +28,7 @@ export async function revoke(user: SessionUser, stationId: number) {
   const station = await getOwnedBy(user, stationId);
   await inTransaction(async (transaction) => {
     await DeviceTokenModel.destroy({ where: { stationId }, transaction });
+    stationChangedAfter(transaction, stationId);
     await audit.record({ actor: user, ownerId: user.id, action: 'device.revoke', entityType: 'station', entityId: stationId, summary: `Revoked the device token of ${station.name}` }, transaction);
   });
 }

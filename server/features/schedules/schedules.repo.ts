@@ -1,3 +1,4 @@
+import { stationChangedAfter } from '../../lib/change-feed';
 import type { Transaction } from 'sequelize';
 import { scheduleInput, type Schedule, type ScheduleValues } from '@/shared/schemas/schedule';
 import { ScheduleModel } from '../../db/models/schedule.model';
@@ -25,14 +26,17 @@ export async function findByStations(stationIds: number[]) {
 
 export async function insert(stationId: number, values: ScheduleValues, transaction?: Transaction) {
   const row = await ScheduleModel.create({ stationId, spec: JSON.stringify(values) }, { transaction });
+  stationChangedAfter(transaction, stationId);
   return toSchedule(row);
 }
 
 export async function update(stationId: number, values: ScheduleValues, transaction?: Transaction) {
   await ScheduleModel.update({ spec: JSON.stringify(values) }, { where: { stationId }, transaction });
+  stationChangedAfter(transaction, stationId);
   return (await findByStation(stationId, transaction))!;
 }
 
 export async function remove(stationId: number, transaction?: Transaction) {
   await ScheduleModel.destroy({ where: { stationId }, transaction });
+  stationChangedAfter(transaction, stationId);
 }

@@ -1,3 +1,4 @@
+import { stationChangedAfter } from '../../lib/change-feed';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { BandId, LicenceRegion } from '@/shared/domain/bands';
 import type { Station, StationBand, StationPatch } from '@/shared/schemas';
@@ -75,11 +76,13 @@ export async function insert(ownerId: number, values: StationValues, transaction
 
 export async function update(id: number, patch: StationPatch, transaction?: Transaction) {
   await StationModel.update(patch as Partial<StationValues>, { where: { id }, transaction });
+  stationChangedAfter(transaction, id);
   return (await findById(id, transaction))!;
 }
 
 export async function remove(id: number, transaction?: Transaction) {
   await StationModel.destroy({ where: { id }, transaction });
+  stationChangedAfter(transaction, id);
 }
 
 export async function upsertBand(
@@ -93,10 +96,12 @@ export async function upsertBand(
   else await StationBandModel.create({ stationId, bandId, enabled: false, calibrationOffsetHz: null, calibrationSource: null, calibratedAt: null, ...values }, { transaction });
   // Changing a band touches the station, so anything keyed on its updatedAt sees the change.
   await StationModel.update({ updatedAt: new Date() }, { where: { id: stationId }, transaction, silent: false });
+  stationChangedAfter(transaction, stationId);
 }
 
 export async function setReferenceError(id: number, referenceErrorPpm: number | null, transaction?: Transaction) {
   await StationModel.update({ referenceErrorPpm }, { where: { id }, transaction });
+  stationChangedAfter(transaction, id);
 }
 
 export async function setSuspension(id: number, suspension: { reason: string; clubId: number } | null, transaction?: Transaction) {
@@ -106,4 +111,5 @@ export async function setSuspension(id: number, suspension: { reason: string; cl
       : { suspendedAt: null, suspendedReason: null, suspendedByClubId: null },
     { where: { id }, transaction },
   );
+  stationChangedAfter(transaction, id);
 }

@@ -1,5 +1,4 @@
 import { randomUUID } from 'node:crypto';
-import sharp from 'sharp';
 import type { SessionUser } from '@/shared/api/contracts';
 import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
@@ -13,6 +12,8 @@ const EXTENSIONS: Record<string, string> = { jpeg: 'jpg', png: 'png', webp: 'web
 
 /** Re-encodes the photo (which drops EXIF data such as a GPS position) and makes a thumbnail. */
 async function process(buffer: Buffer) {
+  // Loaded on the first upload, so servers that never see one do not carry the image library.
+  const sharp = (await import('sharp')).default;
   let format: string | undefined;
   try {
     format = (await sharp(buffer).metadata()).format;

@@ -1,3 +1,4 @@
+import { stationChangedAfter } from '../../lib/change-feed';
 import type { Transaction } from 'sequelize';
 import { unitInput, type Unit, type UnitPhoto, type UnitValues } from '@/shared/schemas';
 import { UnitPhotoModel } from '../../db/models/unit-photo.model';
@@ -49,11 +50,13 @@ export async function insert(ownerId: number, values: UnitValues, transaction?: 
 
 export async function update(id: number, values: UnitValues, transaction?: Transaction) {
   await UnitModel.update({ name: values.name, spec: specOf(values) }, { where: { id }, transaction });
+  stationChangedAfter(transaction, 'all');
   return (await findById(id, transaction))!;
 }
 
 export async function remove(id: number, transaction?: Transaction) {
   await UnitModel.destroy({ where: { id }, transaction });
+  stationChangedAfter(transaction, 'all');
 }
 
 export async function insertPhoto(values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number }, transaction?: Transaction) {

@@ -1,0 +1,45 @@
+/**
+ * npm run simulate -- --devices N --speed X [--url http://127.0.0.1:8080] [--silence 0.02]
+ * Runs N simulated beacons against a running Faintline server with the demo devices' tokens
+ * (or tokens from --tokens a,b,c). Ctrl-C stops it and prints what each device did.
+ */
+import { Command } from 'commander';
+import { DEMO_DEVICES } from '../db/seed/demo-devices';
+import { SimulatedDevice } from './device-sim';
+
+const program = new Command('simulate')
+  .description('Simulated beacons against a running Faintline server')
+  .option('--devices <n>', 'how many devices', '3')
+  .option('--speed <x>', 'report x times as often as a real beacon (every 60 s)', '10')
+  .option('--url <url>', 'the server', process.env.FAINTLINE_URL ?? 'http://127.0.0.1:8080')
+  .option('--silence <p>', 'chance per report of falling silent for a while', '0.02')
+  .option('--tokens <list>', 'comma-separated device tokens (default: the demo devices)')
+  .parse();
+
+const opts = program.opts<{ devices: string; speed: string; url: string; silence: string; tokens?: string }>();
+const tokens = opts.tokens ? opts.tokens.split(',').map((t, i) => ({ name: `device ${i + 1}`, token: t.trim() })) : DEMO_DEVICES.map((d) => ({ name: d.stationName, token: d.token }));
+const count = Math.min(Number(opts.devices), tokens.length);
+if (!(count > 0) || !(Number(opts.speed) > 0)) {
+  console.error('Give --devices as a positive number and --speed above 0.');
+  process.exit(2);
+}
+if (Number(opts.devices) > tokens.length) console.error(`Only ${tokens.length} device tokens are known; simulating ${count}. Pass more with --tokens.`);
+
+const devices = tokens.slice(0, count).map(
+  (t) => new SimulatedDevice({ baseUrl: opts.url, token: t.token, name: t.name, speed: Number(opts.speed), silenceChance: Number(opts.silence), log: (line) => console.log(line) }),
+);
+console.log(`Simulating ${count} device(s) against ${opts.url}, reporting every ${(60 / Number(opts.speed)).toFixed(1)} s. Ctrl-C stops.`);
+for (const device of devices) device.start();
+
+const summary = setInterval(() => {
+  const total = devices.reduce((sum, d) => ({ polls: sum.polls + d.stats.polls, heartbeats: sum.heartbeats + d.stats.heartbeats, transmissions: sum.transmissions + d.stats.transmissions, errors: sum.errors + d.stats.errors }), { polls: 0, heartbeats: 0, transmissions: 0, errors: 0 });
+  console.log(`${new Date().toISOString().slice(11, 19)} UTC  polls ${total.polls}  heartbeats ${total.heartbeats}  transmissions ${total.transmissions}  errors ${total.errors}  silent ${devices.filter((d) => d.silent).length}`);
+}, 15_000);
+
+function stop() {
+  clearInterval(summary);
+  for (const device of devices) device.stop();
+  process.exit(0);
+}
+process.on('SIGINT', stop);
+process.on('SIGTERM', stop);
