@@ -4,6 +4,7 @@ import type { Station } from '@/shared/schemas';
 
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
+import { TextLink } from '../ui/text-link';
 import { formatLocator, formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
 
@@ -23,6 +24,13 @@ export function StationDetails({ station, readOnly }: StationDetailsProps) {
           <Text variant="label">Read-only: this station belongs to {station.ownerName}</Text>
         </Card>
       ) : null}
+      <Card>
+        <Text variant="label" tone="muted">
+          Band rotation
+        </Text>
+        <Text>Which band when: the rotation, its timeline and the next transmissions.</Text>
+        <TextLink href={{ pathname: '/stations/[id]/schedule', params: { id: String(station.id) } }} label="Schedule" />
+      </Card>
       <Card>
         <Fact label="Callsign" value={station.callsign} mono />
         <Fact label="Locator" value={formatLocator(station.locator)} mono />
