@@ -9,6 +9,7 @@ import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
 import { myClubThingsRouter } from './features/clubs/my-club-things.router';
 import { deviceRouter } from './features/devices/device.router';
+import { setOfflineAfter } from './features/devices/health.service';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
@@ -55,6 +56,7 @@ const CSP = {
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
 export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
   const app = express();
+  setOfflineAfter(config.DEVICE_OFFLINE_AFTER_S);
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');

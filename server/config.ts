@@ -29,6 +29,7 @@ const configSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default(''),
   S3_SECRET_ACCESS_KEY: z.string().default(''),
   DEVICE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  DEVICE_OFFLINE_AFTER_S: z.coerce.number().int().min(1).default(300),
   DEVICE_CACHE_MS: z.coerce.number().int().min(0).default(2000),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),

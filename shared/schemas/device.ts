@@ -30,7 +30,7 @@ export const transmissionLogInput = z.object({
 });
 
 export const alertSettingsInput = z.object({
-  silentMinutes: z.number().int().min(5, 'Allow at least 5 minutes of silence').max(1440, 'At most a day (1440 minutes)'),
+  silentMinutes: z.number().int().min(1, 'Allow at least 1 minute of silence').max(1440, 'At most a day (1440 minutes)'),
   clockOffsetMs: z.number().int().min(100, 'At least 100 ms').max(10_000, 'At most 10 000 ms'),
 });
 export type AlertSettings = z.infer<typeof alertSettingsInput>;

@@ -16,7 +16,7 @@ export const VIEWPORTS = [
 export type RunningServer = { process: ChildProcess; stop(): Promise<void> };
 
 /** The real server (built web app, fresh seeded e2e database, in-process fake SMTP), as `npm start` runs it. */
-export async function startServer(): Promise<RunningServer> {
+export async function startServer(extraEnv: Record<string, string> = {}): Promise<RunningServer> {
   const reset = spawnSync('bash', ['server/scripts/db.sh', 'reset', 'faintline_e2e'], { cwd: ROOT, encoding: 'utf8' });
   if (reset.status !== 0) throw new Error(`could not reset the e2e database: ${reset.stderr}`);
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
@@ -32,6 +32,7 @@ export async function startServer(): Promise<RunningServer> {
       WEB_DIST_DIR: 'dist',
       BCRYPT_COST: '4',
       LOG_LEVEL: 'warn',
+      ...extraEnv,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

@@ -13,7 +13,11 @@ import { getFor as getStation } from '../stations/stations.service';
 import * as unitsRepo from '../units/units.repo';
 import { hasToken } from './tokens.service';
 
-export const ONLINE_WITHIN_MS = 5 * 60_000;
+/** A device counts as online while its last heartbeat is this recent (DEVICE_OFFLINE_AFTER_S). */
+let onlineWithinMs = 5 * 60_000;
+export function setOfflineAfter(seconds: number) {
+  onlineWithinMs = seconds * 1000;
+}
 /** The temperature a calibration is assumed to be made at (common practice, no source). */
 export const REFERENCE_TEMP_C = 20;
 export const DEFAULT_SETTINGS: AlertSettings = { silentMinutes: 30, clockOffsetMs: 1000 };
@@ -77,7 +81,7 @@ async function healthOf(station: Station, nowMs: number): Promise<StationHealth>
     stationName: station.name,
     callsign: station.callsign,
     hasDevice: device,
-    online: age !== null && age <= ONLINE_WITHIN_MS,
+    online: age !== null && age <= onlineWithinMs,
     lastHeartbeatAt: last?.receivedAt.toISOString() ?? null,
     heartbeatAgeS: age === null ? null : Math.round(age / 1000),
     clockOffsetMs: last?.clockOffsetMs ?? null,
