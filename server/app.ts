@@ -60,12 +60,11 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
+  app.use('/api/device/v1', deviceRouter({ sequelize, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
   app.use('/api/health', healthRouter(sequelize));
-
-  // Devices: bearer tokens only, mounted before any cookie session is read.
-  app.use('/api/device/v1', deviceRouter({ sequelize, config }));
 
   const SessionStore = connectSessionSequelize(session.Store);
   const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });

@@ -57,6 +57,10 @@ export function deviceRouter({ sequelize, config }: { sequelize: Sequelize; conf
     handler: (_req, _res, next) => next(new AppError('rate-limited', `Too many requests from this device: at most ${config.DEVICE_RATE_LIMIT} a minute`)),
   });
 
+  router.use((_req, res, next) => {
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    next();
+  });
   router.use(express.json({ limit: '32kb' }));
   router.use((req, _res, next) => void authenticate(req, _res, next).catch(next));
   router.use(perDevice);
