@@ -3,7 +3,7 @@ import { useController, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 
-import { LICENCE_REGIONS, type LicenceRegion } from '@/shared/domain';
+import { LICENCE_REGIONS, type LicenceRegion } from '@/shared/domain/bands';
 import { regionLabels, stationInput, type Unit } from '@/shared/schemas';
 
 import { applyServerErrors, serverMessage } from '../form/apply-server-errors';

@@ -1,4 +1,4 @@
-import { BAND_TABLE, type BandId } from '@/shared/domain';
+import { BAND_TABLE, type BandId } from '@/shared/domain/bands';
 import { generatorKindLabels, type Unit } from '@/shared/schemas';
 
 /** Bands some filter of the unit is fitted for, lowest first. */

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 
-import { latLonToLocator } from '@/shared/domain';
+import { latLonToLocator } from '@/shared/domain/locator';
 
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import type { PowerChainResult } from '@/shared/domain';
+import type { PowerChainResult } from '@/shared/domain/power';
 
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';

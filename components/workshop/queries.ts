@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
 import { api } from '@/shared/api/client';
-import type { BandId } from '@/shared/domain';
+import type { BandId } from '@/shared/domain/bands';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput } from '@/shared/schemas';
 
 import { stationKeys } from '../stations/queries';

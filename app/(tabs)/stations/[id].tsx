@@ -6,7 +6,7 @@ import { useDeleteStationMutation, useStationQuery } from '@/components/stations
 import { StationDetails } from '@/components/stations/station-details';
 import { StationHeader } from '@/components/stations/station-header';
 import { useUnitQuery } from '@/components/units/queries';
-import { StationWorkshop } from '@/components/workshop/station-workshop';
+import { LazyStationWorkshop as StationWorkshop } from '@/components/workshop/lazy-parts';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';

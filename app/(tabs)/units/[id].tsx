@@ -12,7 +12,7 @@ import {
   useUploadPhotoMutation,
 } from '@/components/units/queries';
 import type { UploadProgress } from '@/components/units/api-upload';
-import { UnitDetails } from '@/components/units/unit-details';
+import { LazyUnitDetails as UnitDetails } from '@/components/units/lazy-parts';
 import { UnitPhotos } from '@/components/units/unit-photos';
 import { generatorSummary } from '@/components/units/unit-summary';
 import { Button } from '@/components/ui/button';

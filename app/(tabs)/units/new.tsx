@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 
 import { useCreateUnitMutation } from '@/components/units/queries';
-import { UnitForm } from '@/components/units/unit-form';
+import { LazyUnitForm as UnitForm } from '@/components/units/lazy-parts';
 import { Screen } from '@/components/ui/screen';
 import { layout } from '@/components/ui/theme';
 

@@ -6,11 +6,11 @@ import { useStationQuery } from '@/components/stations/queries';
 import { useUnitQuery } from '@/components/units/queries';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
-import { BandList } from '@/components/workshop/band-list';
+import { LazyBandList as BandList } from '@/components/workshop/lazy-parts';
 import { useSetBandMutation } from '@/components/workshop/queries';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
 import { ApiError } from '@/shared/api/client';
-import type { BandId } from '@/shared/domain';
+import type { BandId } from '@/shared/domain/bands';
 
 export default function StationBandsRoute() {
   const router = useRouter();

@@ -8,12 +8,11 @@ import { Card } from '@/components/ui/card';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
-import { CalibrationForm } from '@/components/workshop/calibration-form';
+import { LazyCalibrationForm as CalibrationForm, LazyTypedOffsetsForm as TypedOffsetsForm } from '@/components/workshop/lazy-parts';
 import { useCalibrationProposalMutation, useSaveCalibrationMutation } from '@/components/workshop/queries';
-import { TypedOffsetsForm } from '@/components/workshop/typed-offsets-form';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
-import { bandFor, bandsFor, type BandId } from '@/shared/domain';
-import { filterCoverage } from '@/shared/domain/workshop';
+import { bandFor, bandsFor, type BandId } from '@/shared/domain/bands';
+import { filterCoverage } from '@/shared/domain/workshop/coverage';
 
 export default function StationCalibrateRoute() {
   const router = useRouter();

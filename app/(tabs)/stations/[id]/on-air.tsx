@@ -5,9 +5,9 @@ import { useUnitQuery } from '@/components/units/queries';
 import { Notice } from '@/components/ui/notice';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
-import { OnAirView } from '@/components/workshop/on-air-view';
+import { LazyOnAirView as OnAirView } from '@/components/workshop/lazy-parts';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
-import { bandsFor, isBandId, type BandId } from '@/shared/domain';
+import { bandsFor, isBandId, type BandId } from '@/shared/domain/bands';
 
 export default function StationOnAirRoute() {
   const router = useRouter();

@@ -2,7 +2,7 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { useUnitQuery, useUpdateUnitMutation } from '@/components/units/queries';
-import { UnitForm } from '@/components/units/unit-form';
+import { LazyUnitForm as UnitForm } from '@/components/units/lazy-parts';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { layout } from '@/components/ui/theme';
