@@ -1,16 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const timestamps = {
-  createdAt: { type: DataTypes.DATE(3), allowNull: false },
-  updatedAt: { type: DataTypes.DATE(3), allowNull: false },
-};
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const ref = (table: string, allowNull = false, onDelete = 'CASCADE') => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { id, ref, timestamps } from './columns';
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('schedules', {
