@@ -1,4 +1,5 @@
 import { Link, type Href } from 'expo-router';
+import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 
 import type { ClubMembership } from '@/shared/api/contracts';
@@ -59,16 +60,20 @@ export function ClubHub({ clubs, pendingProposals, onCreate }: ClubHubProps) {
 
 function ClubRow({ club }: { club: ClubMembership }) {
   const { colors } = useAppTheme();
+  const [hovered, setHovered] = useState(false);
   const href: Href = { pathname: '/club/[clubId]', params: { clubId: String(club.clubId) } };
   return (
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={`Open ${club.clubName}`}
-        style={({ hovered }: { pressed: boolean; hovered?: boolean }) => [
+        onHoverIn={() => setHovered(true)}
+        onHoverOut={() => setHovered(false)}
+        // Link's asChild spreads the child's style into an object: pass one flat object
+        style={StyleSheet.flatten([
           styles.row,
           { borderColor: colors.border, backgroundColor: hovered ? colors.surfaceRaised : colors.surface },
-        ]}
+        ])}
       >
         <View style={styles.grow}>
           <Text variant="heading">{club.clubName}</Text>

@@ -52,11 +52,12 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
                   accessibilityRole="link"
                   accessibilityLabel={`${section.label} of ${clubName}`}
                   accessibilityState={{ selected }}
-                  style={[
+                  // Link's asChild spreads the child's style into an object: pass one flat object
+                  style={StyleSheet.flatten([
                     styles.item,
                     { borderColor: selected ? colors.primary : colors.border },
                     selected && { backgroundColor: colors.primarySoft },
-                  ]}
+                  ])}
                 >
                   <Text variant="label" tone={selected ? 'primary' : 'muted'}>
                     {section.label}

@@ -1,4 +1,5 @@
 import { Link } from 'expo-router';
+import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import Svg, { Path } from 'react-native-svg';
 
@@ -11,6 +12,7 @@ export type NoticeBellProps = { unread: number; variant: 'icon' | 'row' };
 /** The way to the notices, with the unread count: an icon in the phone header, a row in the side rail. */
 export function NoticeBell({ unread, variant }: NoticeBellProps) {
   const { colors } = useAppTheme();
+  const [hovered, setHovered] = useState(false);
   const label = unread ? `Notices, ${unread} unread` : 'Notices';
   const icon = (
     <Svg width={22} height={22} viewBox="0 0 24 24" fill="none">
@@ -29,10 +31,10 @@ export function NoticeBell({ unread, variant }: NoticeBellProps) {
         accessibilityRole="link"
         accessibilityLabel={label}
         hitSlop={8}
-        style={({ hovered }: { pressed: boolean; hovered?: boolean }) => [
-          variant === 'icon' ? styles.icon : styles.row,
-          hovered && { backgroundColor: colors.surfaceRaised },
-        ]}
+        onHoverIn={() => setHovered(true)}
+        onHoverOut={() => setHovered(false)}
+        // Link's asChild spreads the child's style into an object: pass one flat object
+        style={StyleSheet.flatten([variant === 'icon' ? styles.icon : styles.row, hovered && { backgroundColor: colors.surfaceRaised }])}
       >
         {icon}
         {variant === 'row' ? (
