@@ -70,7 +70,9 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
   const propose = form.handleSubmit(async (measurement) => {
     setAcceptError(null);
     try {
-      const result = await onPropose(measurement);
+      const proposed = await onPropose(measurement);
+      // lowest band first, as everywhere else
+      const result = { ...proposed, offsets: [...proposed.offsets].sort((x, y) => x.frequencyHz - y.frequencyHz) };
       setProposal(result);
       setOffsetErrors({});
       setOffsetTexts(Object.fromEntries(result.offsets.map((o) => [o.bandId, o.calibrationOffsetHz.toFixed(2)])));
