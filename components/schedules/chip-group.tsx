@@ -36,6 +36,7 @@ export function ChipGroup<T extends string>({ label, options, value, onPress, sh
               accessibilityRole="radio"
               accessibilityLabel={option.accessibilityLabel ?? option.label}
               accessibilityState={{ checked: on }}
+              aria-checked={on}
               onPress={() => onPress(option)}
               style={({ hovered }: { pressed: boolean; hovered?: boolean }) => [
                 styles.chip,

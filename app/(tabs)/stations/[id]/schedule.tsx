@@ -9,9 +9,11 @@ import {
   useScheduleQuery,
 } from '@/components/schedules/queries';
 import { previewFromPlan, previewRange } from '@/components/schedules/preview-model';
-import { ScheduleEmpty } from '@/components/schedules/schedule-empty';
-import { SchedulePreviewPanel } from '@/components/schedules/schedule-preview-panel';
-import { ScheduleSummary } from '@/components/schedules/schedule-summary';
+import {
+  LazyScheduleEmpty as ScheduleEmpty,
+  LazySchedulePreviewPanel as SchedulePreviewPanel,
+  LazyScheduleSummary as ScheduleSummary,
+} from '@/components/schedules/lazy-parts';
 import { useMinuteClock } from '@/components/schedules/use-minute-clock';
 import { useStationQuery } from '@/components/stations/queries';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';

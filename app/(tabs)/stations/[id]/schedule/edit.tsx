@@ -2,8 +2,7 @@ import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { useSaveScheduleMutation, useScheduleQuery, useScheduleUnitQuery } from '@/components/schedules/queries';
-import { ScheduleEditor } from '@/components/schedules/schedule-editor';
-import { SchedulePreviewPanel } from '@/components/schedules/schedule-preview-panel';
+import { LazyScheduleEditor as ScheduleEditor, LazySchedulePreviewPanel as SchedulePreviewPanel } from '@/components/schedules/lazy-parts';
 import { draftDefaults } from '@/components/schedules/draft-defaults';
 import { useMinuteClock } from '@/components/schedules/use-minute-clock';
 import { useStationQuery } from '@/components/stations/queries';
