@@ -28,6 +28,7 @@ export default function TabsLayoutRoute() {
       <Tabs.Screen name="index" options={{ title: 'Overview · Faintline' }} />
       <Tabs.Screen name="stations" options={{ title: 'Stations · Faintline' }} />
       <Tabs.Screen name="units" options={{ title: 'Units · Faintline' }} />
+      <Tabs.Screen name="health" options={{ title: 'Health · Faintline' }} />
       {/* every operator may start a club, so the tab is always there */}
       <Tabs.Screen name="club" options={{ title: 'Club · Faintline' }} />
       <Tabs.Screen name="settings" options={{ title: 'Settings · Faintline' }} />

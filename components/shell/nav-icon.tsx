@@ -1,6 +1,6 @@
 import Svg, { Circle, Path } from 'react-native-svg';
 
-export type NavIconName = 'overview' | 'stations' | 'units' | 'club' | 'settings';
+export type NavIconName = 'overview' | 'stations' | 'units' | 'health' | 'club' | 'settings';
 
 export type NavIconProps = { name: NavIconName; color: string; size?: number };
 
@@ -27,6 +27,12 @@ export function NavIcon({ name, color, size = 22 }: NavIconProps) {
           <Path d="M4 7 H20 V17 H4 Z" {...stroke} />
           <Path d="M8 11 H12 V14 H8 Z" {...stroke} />
           <Path d="M15 11 V14 M17.5 11 V14 M7 7 V4.5 M17 7 V4.5 M9 17 V19.5 M15 17 V19.5" {...stroke} strokeOpacity={0.7} />
+        </>
+      ) : null}
+      {name === 'health' ? (
+        <>
+          <Path d="M4 5 H20 V19 H4 Z" {...stroke} strokeOpacity={0.55} />
+          <Path d="M4 12.5 H8.5 L10.5 8.5 L13.5 16 L15.5 12.5 H20" {...stroke} />
         </>
       ) : null}
       {name === 'club' ? (

@@ -15,6 +15,7 @@ export const shellTabs: Record<string, { label: string; icon: NavIconName }> = {
   index: { label: 'Overview', icon: 'overview' },
   stations: { label: 'Stations', icon: 'stations' },
   units: { label: 'Units', icon: 'units' },
+  health: { label: 'Health', icon: 'health' },
   club: { label: 'Club', icon: 'club' },
   settings: { label: 'Settings', icon: 'settings' },
 };

@@ -2,6 +2,7 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { useSessionQuery } from '@/components/auth/queries';
+import { StationDeviceLinks } from '@/components/devices/station-device-links';
 import { useDeleteStationMutation, useStationQuery } from '@/components/stations/queries';
 import { StationDetails } from '@/components/stations/station-details';
 import { StationHeader } from '@/components/stations/station-header';
@@ -49,6 +50,7 @@ export default function StationDetailRoute() {
           }
           onDelete={readOnly ? undefined : () => setConfirming(true)}
         />
+        <StationDeviceLinks stationId={stationId} readOnly={readOnly} />
         <StationWorkshop
           station={station.data}
           unit={unit.data ?? null}

@@ -1,0 +1,74 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+
+import { alertSettingsInput, type AlertSettings } from '@/shared/schemas';
+
+import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { Button } from '../ui/button';
+import { Notice } from '../ui/notice';
+import { Text } from '../ui/text';
+import { space } from '../ui/theme';
+import { ThresholdField } from './threshold-field';
+
+export type AlertSettingsFormProps = {
+  settings: AlertSettings;
+  onSubmit: (values: AlertSettings) => Promise<unknown>;
+  /** a club admin sees the thresholds but cannot change them */
+  readOnly?: boolean;
+};
+
+/** When the server should raise an alert for this station: how long silent, how far off the clock. */
+export function AlertSettingsForm({ settings, onSubmit, readOnly = false }: AlertSettingsFormProps) {
+  const form = useForm<AlertSettings>({ resolver: zodResolver(alertSettingsInput), defaultValues: settings });
+  const [saved, setSaved] = useState(false);
+  const submit = form.handleSubmit(async (values) => {
+    setSaved(false);
+    try {
+      await onSubmit(values);
+      form.reset(values);
+      setSaved(true);
+    } catch (error) {
+      applyServerErrors(form, error);
+    }
+  });
+  if (readOnly) {
+    return (
+      <View style={styles.form}>
+        <Text>
+          Alert after <Text variant="mono">{settings.silentMinutes} min</Text> of silence while scheduled, or a clock more than{' '}
+          <Text variant="mono">{settings.clockOffsetMs} ms</Text> off.
+        </Text>
+        <Text variant="caption" tone="muted">
+          Only the station's owner can change these thresholds.
+        </Text>
+      </View>
+    );
+  }
+  const rootMessage = serverMessage(form.formState.errors);
+  return (
+    <View style={styles.form}>
+      {rootMessage ? <Notice message={rootMessage} /> : null}
+      <ThresholdField
+        control={form.control}
+        name="silentMinutes"
+        label="Silent for (minutes)"
+        hint="Alert when the device has not reported for this long while it is scheduled to transmit."
+      />
+      <ThresholdField
+        control={form.control}
+        name="clockOffsetMs"
+        label="Clock offset limit (ms)"
+        hint="Alert when the device clock is further off UTC than this. Decoding tolerates only a couple of seconds: aim well under one."
+      />
+      {saved ? <Notice tone="success" message="Thresholds saved. The next alert round uses them." /> : null}
+      <Button label="Save thresholds" onPress={submit} busy={form.formState.isSubmitting} style={styles.submit} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.md },
+  submit: { alignSelf: 'flex-start' },
+});
