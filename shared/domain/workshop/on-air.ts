@@ -100,12 +100,12 @@ export function harmonicsVerdict(band: Band, unit: UnitHardware, coverage: Cover
   const unknown = harmonics.some((h) => h.pass === null);
   const pass = failing.length ? false : unknown ? null : true;
   const summary = !filter
-    ? `No usable filter: the harmonics go out almost unattenuated and fail the limit of ${limit.limitDb.toFixed(0)} dB.`
+    ? `No usable filter: the harmonics go out almost unattenuated and fail the limit of ${limit.limitDb.toFixed(1)} dB.`
     : failing.length
-      ? `Harmonic ${failing.map((h) => h.harmonic).join(', ')} stays above the limit of ${limit.limitDb.toFixed(0)} dB below the carrier. Use a steeper filter or a lower cut-off.`
+      ? `Harmonic ${failing.map((h) => h.harmonic).join(', ')} stays above the limit of ${limit.limitDb.toFixed(1)} dB below the carrier. Use a steeper filter or a lower cut-off.`
       : unknown
         ? `The filter type '${filter.type}' has no model here: measure the harmonics with an analyser before transmitting.`
-        : `Every harmonic is at least ${limit.limitDb.toFixed(0)} dB below the carrier.`;
+        : `Every harmonic is at least ${limit.limitDb.toFixed(1)} dB below the carrier.`;
   return { limit, harmonics, pass: failing.length ? false : pass, summary };
 }
 
