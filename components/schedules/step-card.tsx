@@ -1,6 +1,6 @@
 import type { Href } from 'expo-router';
 import { useState } from 'react';
-import { useController, type Control } from 'react-hook-form';
+import { useController, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import type { BandId } from '@/shared/domain';
@@ -48,7 +48,9 @@ export function StepCard({ control, index, count, choices, issues, serverError, 
   const warns = issues.filter((i) => i.level === 'warn');
   const chosen = choices.find((c) => c.bandId === bandId);
   const bandBlocked = blocks.length > 0 || !!serverError || (chosen && !chosen.usable);
-  const activeHours = hours.field.value as ScheduleValues['steps'][number]['activeHoursUtc'];
+  // watch the whole step: a controller on the hours object misses changes made through its own fields
+  const watched = useWatch({ control, name: `steps.${index}` }) as ScheduleValues['steps'][number] | undefined;
+  const activeHours = watched?.activeHoursUtc ?? (hours.field.value as ScheduleValues['steps'][number]['activeHoursUtc']);
   return (
     <Card style={blocks.length || serverError ? [styles.blocked, { borderColor: colors.danger }] : undefined}>
       <View style={styles.head} accessibilityRole="header" accessibilityLabel={`Step ${n}: ${bandName(bandId)}, ${hoursLabel(activeHours)}`}>

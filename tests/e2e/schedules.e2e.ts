@@ -67,6 +67,7 @@ for (const viewport of VIEWPORTS) {
         await page.getByLabel('Schedule name', { exact: true }).fill(`Three bands ${viewport.name}`);
         assert.equal(await page.getByLabel('From hour (UTC)', { exact: true }).inputValue(), '20');
         assert.equal(await page.getByLabel('To hour (UTC)', { exact: true }).inputValue(), '6');
+        await visibleText(page, '· 20:00–06:00 UTC').waitFor();
 
         // the live timeline (lazy-loaded victory chart): one lane per band, the axis in UTC
         const timeline = page.getByRole('img', { name: /^Timeline of \d+ transmissions/ });
@@ -87,7 +88,7 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, `Three bands ${viewport.name}`).waitFor();
         await page.getByLabel('Schedule status: Running').locator('visible=true').waitFor();
         await visibleText(page, 'Next transmission in').waitFor();
-        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg').first().waitFor();
+        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg text', { hasText: 'UTC' }).first().waitFor();
         await screenshot(page, `e2e-schedule-saved-${viewport.name}`);
 
         // the server stored the rotation as built
@@ -118,7 +119,7 @@ for (const viewport of VIEWPORTS) {
         const attic = stations.find((s: { name: string }) => s.name === 'Attic beacon');
         await page.goto(`${BASE_URL}/stations/${attic.id}/schedule`);
         await visibleText(page, 'Day and night').waitFor();
-        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg').first().waitFor();
+        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg text', { hasText: 'UTC' }).first().waitFor();
         await screenshot(page, `e2e-schedule-seeded-${viewport.name}`);
         assert.deepEqual(browser.errors, []);
       } catch (error) {
