@@ -1,5 +1,5 @@
 import { Link, type Href } from 'expo-router';
-import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
@@ -33,7 +33,7 @@ export function clubSectionHref(clubId: number, section: ClubSection): Href {
 
 export type ClubNavProps = { clubId: number; clubName: string; current: ClubSection; isAdmin: boolean };
 
-/** The club's name and its sections as a row of links (scrolls sideways on a narrow phone). */
+/** The club's name and its sections as a row of links (wraps on a narrow phone, so none hides off-screen). */
 export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
   const { colors } = useAppTheme();
   const shown = sections.filter((section) => isAdmin || !section.adminOnly);
@@ -43,7 +43,7 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
         {clubName}
       </Text>
       {shown.length > 1 ? (
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row}>
+        <View style={styles.row}>
           {shown.map((section) => {
             const selected = section.key === current;
             return (
@@ -66,7 +66,7 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
               </Link>
             );
           })}
-        </ScrollView>
+        </View>
       ) : null}
     </View>
   );
@@ -74,6 +74,6 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
-  row: { gap: space.sm, paddingBottom: 2 },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   item: { borderWidth: 1, borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 6 },
 });

@@ -12,7 +12,7 @@ export function DutyTable({ bands }: { bands: BandDuty[] }) {
   return (
     <View style={[styles.table, { borderColor: colors.border }]}>
       <View style={[styles.row, { borderColor: colors.border }]}>
-        {['Band', 'Transmissions', 'Minutes on air', 'Share of slots'].map((title) => (
+        {['Band', 'Sends', 'Minutes', 'Slots used'].map((title) => (
           <Text key={title} variant="caption" tone="muted" style={styles.cell}>
             {title}
           </Text>
