@@ -133,6 +133,7 @@ for (const viewport of VIEWPORTS) {
         await visibleText(owner.page, /proposes moving Attic beacon/).waitFor();
         await screenshot(owner.page, `club-notices-${v}`);
         await owner.page.goto(`${BASE_URL}/proposals`);
+        await button(owner.page, /^Accept .* for Attic beacon$/).waitFor();
         await screenshot(owner.page, `club-proposals-${v}`);
         await button(owner.page, /^Accept .* for Attic beacon$/).click();
         await visibleText(owner.page, /Accepted: the station uses the new offset/).waitFor();
