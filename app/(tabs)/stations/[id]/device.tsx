@@ -1,5 +1,5 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
-import { useState } from 'react';
+import { Stack, useFocusEffect, useLocalSearchParams } from 'expo-router';
+import { useCallback, useState } from 'react';
 import { Platform } from 'react-native';
 
 import { useSessionQuery } from '@/components/auth/queries';
@@ -26,6 +26,8 @@ export default function StationDeviceRoute() {
   // the new token lives in this screen's state only: leaving the screen forgets it
   const [freshToken, setFreshToken] = useState<string | null>(null);
   const [confirming, setConfirming] = useState<'rotate' | 'revoke' | null>(null);
+  // …and so does moving away from it while it stays in the stack (another tab, a pushed screen)
+  useFocusEffect(useCallback(() => () => setFreshToken(null), []));
 
   const issueToken = () =>
     issue.mutate(undefined, {
