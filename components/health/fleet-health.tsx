@@ -112,7 +112,7 @@ function HealthCard({
         {heardWords(health)}
         {health.firmwareVersion ? ` · firmware ${health.firmwareVersion}` : ''}
       </Text>
-      {health.hasDevice ? (
+      {health.hasDevice && health.heartbeatAgeS !== null ? (
         <>
           <View style={styles.figures}>
             <Figure label="Clock offset" value={formatClockOffset(health.clockOffsetMs)} />

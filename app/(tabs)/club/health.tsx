@@ -3,6 +3,7 @@ import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { useSessionQuery } from '@/components/auth/queries';
 import { FleetHealthScreen } from '@/components/health/fleet-health-screen';
 import { useClubHealthQuery } from '@/components/health/queries';
+import { useClubStationsQuery } from '@/components/stations/queries';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
 
 /** A club admin's view of every member's station, live. Only clubs the person administers are offered. */
@@ -13,6 +14,9 @@ export default function ClubFleetHealthRoute() {
   const clubs = (me?.clubs ?? []).filter((club) => me?.adminOfClubIds.includes(club.clubId));
   const chosen = clubs.find((club) => String(club.clubId) === params.clubId) ?? clubs[0];
   const health = useClubHealthQuery(chosen?.clubId ?? 0, { live: true });
+  // the club's station list carries the owners' names
+  const stations = useClubStationsQuery(chosen?.clubId ?? 0, !!chosen);
+  const ownerOf = (stationId: number) => stations.data?.find((station) => station.id === stationId)?.ownerName;
   const noClub = clubs.length === 0;
   return (
     <>
@@ -41,6 +45,7 @@ export default function ClubFleetHealthRoute() {
             />
           ) : undefined
         }
+        ownerOf={ownerOf}
         onOpenStation={(id) => router.push({ pathname: '/health/[id]', params: { id: String(id) } })}
       />
     </>

@@ -6,6 +6,7 @@ import { ClubHub } from '@/components/clubs/club-hub';
 import { useMyProposalsQuery } from '@/components/clubs/queries';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/ui/theme';
 
 export default function ClubRoute() {
@@ -27,6 +28,7 @@ export default function ClubRoute() {
         pendingProposals={pending}
         onCreate={() => router.push('/club/new')}
       />
+      {user?.adminOfClubIds.length ? <TextLink href="/club/health" label="Club fleet health" /> : null}
     </Screen>
   );
 }
