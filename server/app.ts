@@ -8,6 +8,7 @@ import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
 import { myClubThingsRouter } from './features/clubs/my-club-things.router';
+import { createDeviceGateway, withDeviceFastPath, type DeviceGateway } from './features/devices/device-gateway';
 import { deviceRouter } from './features/devices/device.router';
 import { setOfflineAfter } from './features/devices/health.service';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
@@ -61,7 +62,9 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
-  app.use('/api/device/v1', deviceRouter({ sequelize, config }));
+  const deviceGateway = createDeviceGateway({ sequelize, config });
+  app.locals.deviceGateway = deviceGateway;
+  app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
   app.use('/api/health', healthRouter(sequelize));
@@ -99,4 +102,9 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   app.use(webAppRouter(config.WEB_DIST_DIR));
   app.use(errorHandler(logger));
   return app;
+}
+
+/** The app behind node:http, with device configuration polls answered on the fast path. */
+export function createHttpHandler(app: ReturnType<typeof createApp>, logger: Logger) {
+  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, app, (error) => logger.error({ err: error }, 'device config failed'));
 }

@@ -1,5 +1,6 @@
 import { Cron } from 'croner';
-import { createApp } from './app';
+import { createServer } from 'node:http';
+import { createApp, createHttpHandler } from './app';
 import { evaluateAlerts } from './features/devices/alerts.service';
 import { sendLater } from './mail/send-later';
 import { loadConfig } from './config';
@@ -25,11 +26,12 @@ async function main() {
   const mailer = createMailer(config);
   const app = createApp({ config, sequelize, mailer, logger, fakeSmtp });
 
-  const server = app.listen(config.PORT, config.HOST, (error?: Error) => {
-    if (error) {
-      logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
-      process.exit(1);
-    }
+  const server = createServer(createHttpHandler(app, logger));
+  server.on('error', (error) => {
+    logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
+    process.exit(1);
+  });
+  server.listen(config.PORT, config.HOST, () => {
     const url = `http://${config.HOST}:${config.PORT}`;
     console.log(`\nFaintline is running at ${url}${seeded ? ' (demo data seeded)' : ''}`);
     console.log(`Demo sign-ins (password ${demoSignIns[0].password}):`);

@@ -1,12 +1,17 @@
 import request from 'supertest';
+import { createHttpHandler } from '@/server/app';
+import { createLogger } from '@/server/lib/logger';
 import { commandForBand } from '@/shared/domain/calibration';
 import { toneFrequenciesHz } from '@/shared/domain/tones';
 import { encodeMessage } from '@/shared/domain/wspr/encode';
 import { makeClub, signedInAgent, startTestServer, truncateAll, validUnit, type TestServer } from './helpers/test-app';
 
 let server: TestServer;
+// Devices reach the server through node:http: config polls take the fast path, the rest Express.
+let handler: ReturnType<typeof createHttpHandler>;
 beforeAll(async () => {
   server = await startTestServer({ DEVICE_RATE_LIMIT: '30' });
+  handler = createHttpHandler(server.app, createLogger('silent'));
 });
 afterAll(() => server.close());
 beforeEach(() => truncateAll(server.sequelize));
@@ -22,8 +27,8 @@ async function provisioned() {
 }
 
 const device = (token: string) => ({
-  get: (path: string) => request(server.app).get(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`),
-  post: (path: string, body: unknown) => request(server.app).post(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`).send(body as object),
+  get: (path: string) => request(handler).get(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`),
+  post: (path: string, body: unknown) => request(handler).post(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`).send(body as object),
 });
 
 const heartbeat = { uptimeS: 3600, firmwareVersion: '1.4.2', timeSource: 'network', clockOffsetMs: 12, temperatureC: 24.5, supplyV: 5.02, lastTransmission: null, errorCodes: [] };
@@ -51,7 +56,7 @@ describe('device tokens', () => {
 
   it('when no token, a malformed header or a made-up token is sent, responds 401 without setting a cookie', async () => {
     for (const header of [undefined, 'Token abc', 'Bearer fld_not-a-real-token']) {
-      const req = request(server.app).get('/api/device/v1/config');
+      const req = request(handler).get('/api/device/v1/config');
       const res = await (header ? req.set('Authorization', header) : req);
       expect(res.status).toBe(401);
       expect(res.headers['set-cookie']).toBeUndefined();
@@ -81,7 +86,8 @@ describe('GET /api/device/v1/config', () => {
     expect(txs.length).toBeGreaterThan(0);
     for (const tx of txs.slice(0, 6)) {
       const core = encodeMessage(tx.messageText);
-      expect(core.ok && Array.from(core.symbols)).toEqual(tx.symbols);
+      expect(core.ok && Array.from(core.symbols).join('')).toBe(tx.symbols);
+      expect(tx.symbols).toHaveLength(162);
       toneFrequenciesHz(tx.carrierHz).forEach((f, k) => expect(tx.tonesHz[k]).toBeCloseTo(f, 3));
       const command = commandForBand(14_095_600, tx.carrierHz - 14_095_600, { referenceErrorPpm: 0, bandOffsetHz: 12.5 });
       command.commandTonesHz.forEach((f, k) => expect(tx.commandTonesHz[k]).toBeCloseTo(f, 3));
@@ -116,6 +122,28 @@ describe('GET /api/device/v1/config', () => {
     const suspended = await device(token).get('/config');
     expect(suspended.body.status).toBe('suspended');
     expect(suspended.body.plan.transmissions).toEqual([]);
+  });
+});
+
+describe('the config poll on both paths', () => {
+  it('when asked through Express and through the fast path, both answer the same body, ETag and 304', async () => {
+    const { token } = await provisioned();
+    const fast = await device(token).get('/config');
+    const viaExpress = await request(server.app).get('/api/device/v1/config').set('Authorization', `Bearer ${token}`);
+    expect(viaExpress.status).toBe(200);
+    expect(viaExpress.headers.etag).toBe(fast.headers.etag);
+    expect(viaExpress.body).toEqual(fast.body);
+    const notModified = await request(server.app).get('/api/device/v1/config').set('Authorization', `Bearer ${token}`).set('If-None-Match', fast.headers.etag);
+    expect(notModified.status).toBe(304);
+  });
+
+  it('when polled past the limit on the fast path, responds 429 (one count shared with the other device routes)', async () => {
+    const { token } = await provisioned();
+    for (let i = 0; i < 29; i += 1) await device(token).post('/heartbeat', heartbeat);
+    expect((await device(token).get('/config')).status).toBe(200);
+    const limited = await device(token).get('/config');
+    expect(limited.status).toBe(429);
+    expect(limited.body.error.code).toBe('rate-limited');
   });
 });
 

@@ -34,7 +34,8 @@ export function deviceConfig(station: Station, unit: Unit | null, schedule: Sche
       commandHz: Number(tx.commandHz.toFixed(3)),
       messageText: tx.messageText,
       messageType: tx.messageType,
-      symbols: messages[tx.messageIndex]?.symbols ?? [],
+      // the 162 channel symbols as a string of digits 0–3, in transmission order
+      symbols: (messages[tx.messageIndex]?.symbols ?? []).join(''),
       tonesHz: command.tonesHz.map((f) => Number(f.toFixed(3))),
       commandTonesHz: command.commandTonesHz.map((f) => Number(f.toFixed(3))),
       registers: synth && synth.ok ? { outputDivider: synth.outputDivider, rDivider: synth.rDivider, output: bytesToHex(synth.outputRegisters.bytes), tones: synth.tones.map((t) => bytesToHex(t.registers.bytes)) } : null,

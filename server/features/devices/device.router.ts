@@ -1,56 +1,30 @@
 import express, { Router, type NextFunction, type Request, type Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import type { Sequelize } from 'sequelize';
 import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
 import { AppError } from '../../lib/app-error';
-import { onStationChanged } from '../../lib/change-feed';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import * as stationsRepo from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
-import { deviceConfig, etagFor } from './device-config';
-import { identify, type DeviceIdentity } from './tokens.service';
+import { RATE_WINDOW_MS, type DeviceGateway } from './device-gateway';
+import type { DeviceIdentity } from './tokens.service';
 
 type DeviceRequest = Request & { device?: DeviceIdentity };
 
 /**
  * The machine API under /api/device/v1: bearer tokens, no cookies, no session store.
- * Config answers carry an ETag; an unchanged config costs one SELECT and a 304.
+ * Config answers carry an ETag; an unchanged config answers 304 from memory.
  */
-export function deviceRouter({ sequelize, config }: { sequelize: Sequelize; config: Config }) {
+export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
   const router = Router();
-  const cache = new Map<number, { etag: string; body: string }>();
-  // Known tokens for a moment, so a poll costs no query; any change in this process drops the
-  // entry at once, and other processes see it within DEVICE_CACHE_MS.
-  const known = new Map<string, { device: DeviceIdentity; at: number }>();
-  onStationChanged((stationId) => {
-    if (stationId === 'all') known.clear();
-    else for (const [token, entry] of known) if (entry.device.stationId === stationId) known.delete(token);
-  });
-
-  async function lookUp(token: string) {
-    const hit = known.get(token);
-    if (hit && Date.now() - hit.at < config.DEVICE_CACHE_MS) return hit.device;
-    const device = await identify(sequelize, token);
-    if (device) known.set(token, { device, at: Date.now() });
-    else known.delete(token);
-    return device;
-  }
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
-    const header = req.get('authorization') ?? '';
-    const match = /^Bearer\s+(\S+)$/i.exec(header);
-    if (!match) return next(new AppError('unauthenticated', 'Send the device token as "Authorization: Bearer <token>"'));
-    const device = await lookUp(match[1]);
-    if (!device) return next(new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)'));
-    req.device = device;
+    req.device = await gateway.authenticate(req.get('authorization'));
     next();
   }
 
   const perDevice = rateLimit({
-    windowMs: 60_000,
+    windowMs: RATE_WINDOW_MS,
     limit: config.DEVICE_RATE_LIMIT,
+    store: gateway.store,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => (req as DeviceRequest).device!.tokenHash,
@@ -66,23 +40,11 @@ export function deviceRouter({ sequelize, config }: { sequelize: Sequelize; conf
   router.use(perDevice);
 
   router.get('/config', async (req: DeviceRequest, res) => {
-    const device = req.device!;
-    const now = Date.now();
-    const etag = etagFor(device.version, now);
-    res.setHeader('ETag', etag);
+    const answer = await gateway.config(req.device!, req.get('if-none-match'));
+    res.setHeader('ETag', answer.etag);
     res.setHeader('Cache-Control', 'private, no-cache');
-    if (req.get('if-none-match') === etag) return void res.status(304).end();
-    let cached = cache.get(device.stationId);
-    if (!cached || cached.etag !== etag) {
-      const station = (await stationsRepo.findById(device.stationId))!;
-      const [unit, schedule] = await Promise.all([
-        station.unitId === null ? null : unitsRepo.findById(station.unitId),
-        schedulesRepo.findByStation(station.id),
-      ]);
-      cached = { etag, body: JSON.stringify(deviceConfig(station, unit, schedule, now)) };
-      cache.set(device.stationId, cached);
-    }
-    res.type('json').send(cached.body);
+    if (answer.status === 304) return void res.status(304).end();
+    res.type('json').send(answer.body);
   });
 
   router.post('/heartbeat', async (req: DeviceRequest, res) => {
