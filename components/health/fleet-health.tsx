@@ -53,11 +53,11 @@ function StationLink({ health, onPress }: { health: StationHealth; onPress: () =
   );
 }
 
-function CreateToken({ health, onOpenDevice }: { health: StationHealth; onOpenDevice?: (id: number) => void }) {
+function CreateToken({ health, onOpenDevice, short = false }: { health: StationHealth; onOpenDevice?: (id: number) => void; short?: boolean }) {
   if (health.hasDevice || !onOpenDevice) return null;
   return (
     <Button
-      label="Create a device token"
+      label={short ? 'Create token' : 'Create a device token'}
       accessibilityLabel={`Create a device token for ${health.stationName}`}
       variant="secondary"
       onPress={() => onOpenDevice(health.stationId)}
@@ -188,7 +188,7 @@ function FleetTable({ fleet, onOpenStation, onOpenDevice, ownerOf }: Omit<FleetH
               <Text variant="caption" tone="muted">
                 {heardWords(health)}
               </Text>
-              <CreateToken health={health} onOpenDevice={onOpenDevice} />
+              <CreateToken health={health} onOpenDevice={onOpenDevice} short />
             </View>
             <View role="cell" style={cell('clock')}>
               <Text variant="mono">{health.hasDevice ? formatClockOffset(health.clockOffsetMs) : '—'}</Text>

@@ -92,6 +92,9 @@ function SeriesChart({
           standalone
         >
           <VictoryAxis
+            crossAxis={false}
+            orientation="bottom"
+            offsetY={PAD.bottom}
             tickValues={hourTicks(fromMs, toMs, width < 520 ? 6 : 3)}
             tickFormat={(t: number) => hhmm(t)}
             label="Time (UTC)"
@@ -105,6 +108,7 @@ function SeriesChart({
           />
           <VictoryAxis
             dependentAxis
+            crossAxis={false}
             tickCount={5}
             tickFormat={(t: number) => (Math.abs(t) >= 100 ? t.toFixed(0) : t.toFixed(1))}
             style={{
