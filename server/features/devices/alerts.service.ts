@@ -30,10 +30,13 @@ async function findingsFor(station: Station, nowMs: number): Promise<Finding[]> 
   const findings: Finding[] = [];
   const silentMs = settings.silentMinutes * 60_000;
   const lastMs = last?.receivedAt.getTime() ?? null;
-  if (schedule && station.transmitEnabled && !station.suspension) {
-    const due = planFor(station, unit, schedule, nowMs - silentMs, nowMs).transmissions.length > 0;
-    if (due && (lastMs === null || nowMs - lastMs > silentMs)) {
-      findings.push({ rule: 'silent', message: `No word from the device for over ${settings.silentMinutes} minutes while it is scheduled to transmit.` });
+  // "Scheduled" means on a live plan today (transmissions within a day either side), not "a slot
+  // fell in the last N minutes": the alert then stays open until the device is heard again.
+  if (schedule && station.transmitEnabled && !station.suspension && (lastMs === null || nowMs - lastMs > silentMs)) {
+    const onAir = planFor(station, unit, schedule, nowMs - 86_400_000, nowMs + 86_400_000).transmissions.length > 0;
+    if (onAir) {
+      const minutes = settings.silentMinutes === 1 ? 'a minute' : `${settings.silentMinutes} minutes`;
+      findings.push({ rule: 'silent', message: `No word from the device for over ${minutes} while it is scheduled to transmit.` });
     }
   }
   const fresh = last && lastMs !== null && nowMs - lastMs <= silentMs;
