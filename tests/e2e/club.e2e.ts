@@ -135,7 +135,10 @@ for (const viewport of VIEWPORTS) {
         await owner.page.goto(`${BASE_URL}/proposals`);
         await button(owner.page, /^Accept .* for Attic beacon$/).waitFor();
         await screenshot(owner.page, `club-proposals-${v}`);
+        // Wait for this accept itself: an earlier screen size's accepted proposal shows the same words.
+        const accepted = owner.page.waitForResponse((r) => /\/api\/offset-proposals\/\d+\/accept$/.test(r.url()) && r.request().method() === 'POST');
         await button(owner.page, /^Accept .* for Attic beacon$/).click();
+        assert.equal((await accepted).status(), 200);
         await visibleText(owner.page, /Accepted: the station uses the new offset/).waitFor();
         const moved = (await call<{ audioOffsetHz: number }>(owner.page, 'GET', `/api/stations/${attic.id}`)).body;
         assert.notEqual(moved.audioOffsetHz, attic.audioOffsetHz);
