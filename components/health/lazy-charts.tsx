@@ -3,7 +3,7 @@ import { lazy, Suspense, type ComponentProps } from 'react';
 
 import { LoadingState } from '../ui/query-states';
 
-const Charts = lazy(() => import('./health-charts'));
+const Charts = lazy(() => import('../charts/all-charts').then((m) => ({ default: m.HealthCharts })));
 
 export function LazyHealthCharts(props: ComponentProps<typeof Charts>) {
   return (

@@ -9,7 +9,7 @@ import { formatUtcTime } from './format';
 import type { TimelineModel } from './timeline-model';
 
 // victory is large and only these screens draw it: keep it out of the entry bundle
-const TimelineChart = lazy(() => import('./timeline-chart'));
+const TimelineChart = lazy(() => import('../charts/all-charts').then((m) => ({ default: m.TimelineChart })));
 
 export type ScheduleTimelineProps = { model: TimelineModel; title?: string; note?: string };
 

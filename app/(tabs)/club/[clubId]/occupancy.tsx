@@ -13,7 +13,7 @@ import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
 
 // the chart library is large: it loads only when this screen opens
-const OccupancyChart = lazy(() => import('@/components/clubs/occupancy-chart'));
+const OccupancyChart = lazy(() => import('@/components/charts/all-charts').then((m) => ({ default: m.OccupancyChart })));
 
 export default function ClubOccupancyRoute() {
   const clubId = Number(useLocalSearchParams<{ clubId: string }>().clubId);
