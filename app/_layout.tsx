@@ -1,3 +1,4 @@
+import { Platform } from 'react-native';
 import { JetBrainsMono_400Regular } from '@expo-google-fonts/jetbrains-mono/400Regular';
 import { JetBrainsMono_500Medium } from '@expo-google-fonts/jetbrains-mono/500Medium';
 import { SpaceGrotesk_400Regular } from '@expo-google-fonts/space-grotesk/400Regular';
@@ -34,7 +35,8 @@ export default function RootLayoutRoute() {
     <SafeAreaProvider>
       <QueryClientProvider client={queryClient}>
         <AppThemeProvider>
-          <ThemedRoot fontsReady={fontsLoaded || fontError != null} />
+          {/* On the web the text shows at once in a fallback face and switches when the fonts arrive. */}
+          <ThemedRoot fontsReady={Platform.OS === 'web' || fontsLoaded || fontError != null} />
         </AppThemeProvider>
       </QueryClientProvider>
     </SafeAreaProvider>

@@ -1,3 +1,4 @@
+import compression from 'compression';
 import connectSessionSequelize from 'connect-session-sequelize';
 import express from 'express';
 import session from 'express-session';
@@ -99,6 +100,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   app.use('/api', api);
 
   if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', inboxRouter(fakeSmtp));
+  // The web app's bundle and fonts travel compressed (they are most of what a first visit downloads).
+  app.use(compression());
   app.use(webAppRouter(config.WEB_DIST_DIR));
   app.use(errorHandler(logger));
   return app;

@@ -27,7 +27,7 @@ function lazyChunks() {
   return readdirSync(dir).filter((f) => f.endsWith('.js')).map((f) => ({ f, kb: statSync(path.join(dir, f)).size / 1024 }));
 }
 
-async function measureLcp(): Promise<number> {
+async function measureLcp(): Promise<{ lcpMs: number; formReadyMs: number }> {
   const browser = await openBrowser({ width: 390, height: 844 });
   try {
     const cdp = await browser.context.newCDPSession(browser.page);
@@ -40,10 +40,12 @@ async function measureLcp(): Promise<number> {
       uploadThroughput: (750 * 1024) / 8,
     });
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 });
-    await browser.page.goto(`${BASE_URL}/sign-in`, { waitUntil: 'load', timeout: 120_000 });
+    const started = Date.now();
+    await browser.page.goto(`${BASE_URL}/sign-in`, { waitUntil: 'commit', timeout: 120_000 });
     await browser.page.getByRole('button', { name: 'Sign in' }).waitFor({ timeout: 120_000 });
+    const formReadyMs = Date.now() - started;
     await browser.page.waitForTimeout(1500);
-    return await browser.page.evaluate(
+    const lcpMs = await browser.page.evaluate(
       () =>
         new Promise<number>((resolve) => {
           new PerformanceObserver((list) => {
@@ -52,6 +54,7 @@ async function measureLcp(): Promise<number> {
           }).observe({ type: 'largest-contentful-paint', buffered: true });
         }),
     );
+    return { lcpMs, formReadyMs };
   } finally {
     await browser.close();
   }
@@ -68,12 +71,19 @@ async function main() {
   const server = await startServer();
   try {
     const lcps: number[] = [];
-    for (let i = 0; i < RUNS; i += 1) lcps.push(await measureLcp());
+    const ready: number[] = [];
+    for (let i = 0; i < RUNS; i += 1) {
+      const run = await measureLcp();
+      lcps.push(run.lcpMs);
+      ready.push(run.formReadyMs);
+    }
     lcps.sort((a, b) => a - b);
+    ready.sort((a, b) => a - b);
     const median = lcps[Math.floor(lcps.length / 2)];
     console.log(`\nNode ${process.version}`);
     console.log(`entry bundle: ${totalGzip.toFixed(0)} KB gzip (target ≤ 550) ${totalGzip <= 550 ? 'OK' : 'OVER'}`);
     console.log(`LCP of /sign-in at 390×844, 4× CPU, 150 ms / 1.6 Mbit/s: median ${(median / 1000).toFixed(2)} s of ${RUNS} runs [${lcps.map((l) => (l / 1000).toFixed(2)).join(', ')}] (target ≤ 2.5 s) ${median <= 2500 ? 'OK' : 'OVER'}`);
+    console.log(`  (the largest paint is the HTML first screen; the app's sign-in form is usable after a median ${(ready[Math.floor(ready.length / 2)] / 1000).toFixed(2)} s)`);
   } finally {
     await server.stop();
   }
