@@ -201,6 +201,15 @@ describe('alerts, with a controllable clock', () => {
     expect(alert!.resolvedAt).not.toBeNull();
   });
 
+  it('when a device was never heard from, its silence counts from when the token was issued', async () => {
+    const { evaluateAlerts } = await import('@/server/features/devices/alerts.service');
+    await provisioned();
+    const now = Date.now();
+    expect(await evaluateAlerts(server.sequelize, now + 60_000)).toEqual([]);
+    const mails = await evaluateAlerts(server.sequelize, now + 31 * 60_000);
+    expect(mails!.map((m) => m.subject)).toEqual([expect.stringMatching(/silent while scheduled/)]);
+  });
+
   it('when the clock is off by more than the threshold, an alert opens and closes once the offset is back', async () => {
     const { evaluateAlerts } = await import('@/server/features/devices/alerts.service');
     const { HeartbeatModel, AlertModel } = await import('@/server/db/models/device.model');

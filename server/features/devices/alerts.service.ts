@@ -20,7 +20,7 @@ const ruleTitles: Record<AlertRule, string> = {
 };
 
 /** Which of our rules a station breaks right now. */
-async function findingsFor(station: Station, nowMs: number): Promise<Finding[]> {
+async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: number): Promise<Finding[]> {
   const settings = await settingsOf(station.id);
   const [unit, schedule, last] = await Promise.all([
     station.unitId === null ? null : unitsRepo.findById(station.unitId),
@@ -32,7 +32,9 @@ async function findingsFor(station: Station, nowMs: number): Promise<Finding[]> 
   const lastMs = last?.receivedAt.getTime() ?? null;
   // "Scheduled" means on a live plan today (transmissions within a day either side), not "a slot
   // fell in the last N minutes": the alert then stays open until the device is heard again.
-  if (schedule && station.transmitEnabled && !station.suspension && (lastMs === null || nowMs - lastMs > silentMs)) {
+  // A device never heard from gets the same grace, counted from when its token was issued.
+  const heardOrIssuedMs = lastMs ?? tokenIssuedMs;
+  if (schedule && station.transmitEnabled && !station.suspension && nowMs - heardOrIssuedMs > silentMs) {
     const onAir = planFor(station, unit, schedule, nowMs - 86_400_000, nowMs + 86_400_000).transmissions.length > 0;
     if (onAir) {
       const minutes = settings.silentMinutes === 1 ? 'a minute' : `${settings.silentMinutes} minutes`;
@@ -75,11 +77,11 @@ export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): 
     const locked = await sequelize.query("SELECT name FROM job_locks WHERE name = 'alerts' FOR UPDATE SKIP LOCKED", { transaction, type: QueryTypes.SELECT });
     if (locked.length === 0) return null;
     const now = new Date(nowMs);
-    const devices = await DeviceTokenModel.findAll({ attributes: ['stationId'], transaction });
-    for (const { stationId } of devices) {
+    const devices = await DeviceTokenModel.findAll({ attributes: ['stationId', 'updatedAt'], transaction });
+    for (const { stationId, updatedAt } of devices) {
       const station = await stationsRepo.findById(stationId, transaction);
       if (!station) continue;
-      const findings = await findingsFor(station, nowMs);
+      const findings = await findingsFor(station, nowMs, updatedAt.getTime());
       const open = await AlertModel.findAll({ where: { stationId, resolvedAt: null }, transaction });
       for (const finding of findings) {
         const existing = open.find((a) => a.rule === finding.rule);
