@@ -1,22 +1,13 @@
 import { Stack } from 'expo-router';
 
-import { fonts } from '@/components/ui/theme';
-import { useAppTheme } from '@/components/ui/theme-provider';
+import { useStackScreenOptions } from '@/components/ui/stack-options';
 
 export const unstable_settings = { initialRouteName: 'index' };
 
 export default function StationsLayoutRoute() {
-  const { colors } = useAppTheme();
+  const screenOptions = useStackScreenOptions();
   return (
-    <Stack
-      screenOptions={{
-        headerStyle: { backgroundColor: colors.background },
-        headerShadowVisible: false,
-        headerTintColor: colors.primary,
-        headerTitleStyle: { fontFamily: fonts.medium, color: colors.text },
-        contentStyle: { backgroundColor: colors.background },
-      }}
-    >
+    <Stack screenOptions={screenOptions}>
       <Stack.Screen name="index" options={{ headerShown: false, title: 'Stations · Faintline' }} />
       <Stack.Screen name="new" options={{ title: 'New station' }} />
       <Stack.Screen name="[id]" options={{ title: 'Station' }} />
