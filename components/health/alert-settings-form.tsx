@@ -10,7 +10,7 @@ import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { ThresholdField } from './threshold-field';
+import { NumberField } from '../form/number-field';
 
 export type AlertSettingsFormProps = {
   settings: AlertSettings;
@@ -50,15 +50,17 @@ export function AlertSettingsForm({ settings, onSubmit, readOnly = false }: Aler
   return (
     <View style={styles.form}>
       {rootMessage ? <Notice message={rootMessage} /> : null}
-      <ThresholdField
+      <NumberField
         control={form.control}
         name="silentMinutes"
+        inputMode="numeric"
         label="Silent for (minutes)"
         hint="Alert when the device has not reported for this long while it is scheduled to transmit."
       />
-      <ThresholdField
+      <NumberField
         control={form.control}
         name="clockOffsetMs"
+        inputMode="numeric"
         label="Clock offset limit (ms)"
         hint="Alert when the device clock is further off UTC than this. Decoding tolerates only a couple of seconds: aim well under one."
       />

@@ -17,7 +17,7 @@ import { TextField } from '../ui/text-field';
 import { space } from '../ui/theme';
 import { bandChoices } from './band-choices';
 import { ChipGroup } from './chip-group';
-import { NumberField } from './number-field';
+import { NumberField } from '../form/number-field';
 import { PresetPicker, type PresetOption } from './preset-picker';
 import { previewDraft, type SchedulePreview } from './preview-model';
 import { StepCard } from './step-card';

@@ -16,7 +16,7 @@ import { useAppTheme } from '../ui/theme-provider';
 import type { BandChoice } from './band-choices';
 import { ChipGroup } from './chip-group';
 import { bandName, hoursLabel } from './format';
-import { NumberField } from './number-field';
+import { NumberField } from '../form/number-field';
 
 export type StepCardProps = {
   control: Control<ScheduleValues>;

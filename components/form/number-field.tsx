@@ -12,13 +12,15 @@ export type NumberFieldProps<T extends FieldValues> = {
   /** A message from outside the form (the server or the live checks). */
   error?: string;
   style?: StyleProp<ViewStyle>;
+  /** `numeric` for whole numbers (the keyboard), `decimal` otherwise */
+  inputMode?: 'numeric' | 'decimal';
 };
 
 const parse = (text: string) => (text.trim() === '' ? Number.NaN : Number(text.trim().replace(',', '.')));
 const show = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? String(value) : '');
 
 /** A number input bound to react-hook-form: text in, a number (NaN while not one) out, so the schema stays z.number(). */
-export function NumberField<T extends FieldValues>({ control, name, label, hint, error, style }: NumberFieldProps<T>) {
+export function NumberField<T extends FieldValues>({ control, name, label, hint, error, style, inputMode = 'decimal' }: NumberFieldProps<T>) {
   const { field, fieldState } = useController({ control, name });
   const [text, setText] = useState(() => show(field.value));
   // follow changes made elsewhere (a preset, a reset) without fighting the operator's typing
@@ -36,7 +38,7 @@ export function NumberField<T extends FieldValues>({ control, name, label, hint,
       hint={hint}
       value={text}
       mono
-      inputMode="decimal"
+      inputMode={inputMode}
       onChangeText={(next) => {
         setText(next);
         field.onChange(parse(next));
