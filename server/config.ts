@@ -31,6 +31,7 @@ const configSchema = z.object({
   DEVICE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
   DEVICE_OFFLINE_AFTER_S: z.coerce.number().int().min(1).default(300),
   DEVICE_CACHE_MS: z.coerce.number().int().min(0).default(2000),
+  DEVICE_CONFIG_CACHE_MB: z.coerce.number().min(1).default(64),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),
 });

@@ -1,3 +1,7 @@
+import { once } from 'node:events';
+import { createServer, get, type IncomingMessage } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { gunzipSync } from 'node:zlib';
 import request from 'supertest';
 import { createHttpHandler } from '@/server/app';
 import { createLogger } from '@/server/lib/logger';
@@ -147,6 +151,54 @@ describe('the config poll on both paths', () => {
   });
 });
 
+describe('config encodings', () => {
+  // The bytes as sent: supertest would inflate them before we could look.
+  async function rawGet(token: string, headers: Record<string, string>) {
+    const listener = createServer(handler).listen(0, '127.0.0.1');
+    await once(listener, 'listening');
+    try {
+      const { port } = listener.address() as AddressInfo;
+      const res = await new Promise<IncomingMessage>((resolve, reject) =>
+        get({ host: '127.0.0.1', port, path: '/api/device/v1/config', headers: { ...headers, authorization: `Bearer ${token}` } }, resolve).on('error', reject),
+      );
+      const chunks: Buffer[] = [];
+      for await (const chunk of res) chunks.push(chunk as Buffer);
+      return { headers: res.headers, body: Buffer.concat(chunks) };
+    } finally {
+      listener.close();
+    }
+  }
+
+  it('when the device takes gzip, sends the same document compressed, with its own ETag, and 304s either ETag', async () => {
+    const { token } = await provisioned();
+    const plain = await device(token).get('/config').set('Accept-Encoding', 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    const packed = await rawGet(token, { 'accept-encoding': 'gzip' });
+    expect(packed.headers['content-encoding']).toBe('gzip');
+    expect(packed.headers.vary).toBe('Accept-Encoding');
+    // RFC 1952: a gzip member starts with the bytes 1f 8b
+    expect([...packed.body.subarray(0, 2)]).toEqual([0x1f, 0x8b]);
+    expect(JSON.parse(gunzipSync(packed.body).toString('utf8'))).toEqual(plain.body);
+    expect(packed.body.length * 4).toBeLessThan(Number(plain.headers['content-length']));
+    // RFC 9110 §8.8.3: different content codings of one version get different strong validators
+    expect(packed.headers.etag).not.toBe(plain.headers.etag);
+    for (const etag of [plain.headers.etag as string, packed.headers.etag as string]) {
+      const again = await device(token).get('/config').set('Accept-Encoding', 'gzip').set('If-None-Match', etag);
+      expect(again.status).toBe(304);
+      expect(again.headers.etag).toBe(packed.headers.etag);
+      expect(again.headers['x-content-type-options']).toBeUndefined();
+    }
+  });
+
+  it('when gzip is refused with q=0, answers plain JSON', async () => {
+    const { token } = await provisioned();
+    const res = await device(token).get('/config').set('Accept-Encoding', 'gzip;q=0, identity');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBeUndefined();
+    expect(res.body.identity.callsign).toBe('Q9ZZT');
+  });
+});
+
 describe('device reports', () => {
   it('when a heartbeat is malformed, responds 400 naming the field and stores nothing', async () => {
     const { agent, station, token } = await provisioned();
@@ -158,6 +210,15 @@ describe('device reports', () => {
     const good = await device(token).post('/heartbeat', heartbeat);
     expect(good.status).toBe(202);
     expect((await agent.get(`/api/stations/${station.id}/health`)).body).toMatchObject({ online: true, clockOffsetMs: 12, temperatureC: 24.5, firmwareVersion: '1.4.2' });
+  });
+
+  it('when many heartbeats arrive at once, each is acknowledged only after it is stored', async () => {
+    const { station, token } = await provisioned();
+    const { HeartbeatModel } = await import('@/server/db/models/device.model');
+    const answers = await Promise.all(Array.from({ length: 25 }, (_, i) => device(token).post('/heartbeat', { ...heartbeat, uptimeS: i })));
+    expect(answers.map((a) => a.status)).toEqual(Array(25).fill(202));
+    const rows = await HeartbeatModel.findAll({ where: { stationId: station.id } });
+    expect(rows.map((r) => JSON.parse(r.report).uptimeS).sort((a: number, b: number) => a - b)).toEqual(Array.from({ length: 25 }, (_, i) => i));
   });
 
   it('when transmissions are logged, they are stored; a bad band is refused', async () => {

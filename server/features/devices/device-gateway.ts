@@ -1,5 +1,6 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { MemoryStore } from 'express-rate-limit';
+import { LRUCache } from 'lru-cache';
 import type { Sequelize } from 'sequelize';
 import type { ApiErrorBody } from '@/shared/api/contracts';
 import type { Config } from '../../config';
@@ -8,7 +9,8 @@ import { onStationChanged } from '../../lib/change-feed';
 import * as schedulesRepo from '../schedules/schedules.repo';
 import * as stationsRepo from '../stations/stations.repo';
 import * as unitsRepo from '../units/units.repo';
-import { deviceConfig, etagFor } from './device-config';
+import { acceptsGzip, gzipEtagOf, ifNoneMatchHits, representationsOf, type ConfigRepresentations } from './config-representation';
+import { deviceConfig, etagFor, planWindowStart } from './device-config';
 import { identify, type DeviceIdentity } from './tokens.service';
 
 export const RATE_WINDOW_MS = 60_000;
@@ -20,12 +22,16 @@ const EMPTY = Buffer.alloc(0);
  * change in this process drops them at once, other processes see it within DEVICE_CACHE_MS.
  */
 export function createDeviceGateway({ sequelize, config }: { sequelize: Sequelize; config: Config }) {
-  const known = new Map<string, { device: DeviceIdentity; at: number }>();
-  const configs = new Map<number, { etag: string; body: Buffer }>();
+  const known = new LRUCache<string, { device: DeviceIdentity; at: number }>({ max: 100_000 });
+  // Bounded by bytes: a fleet of thousands keeps its most recently polled configurations ready.
+  const configs = new LRUCache<number, ConfigRepresentations>({
+    maxSize: config.DEVICE_CONFIG_CACHE_MB * 1024 * 1024,
+    sizeCalculation: (r) => r.identity.body.length + r.gzip.body.length,
+  });
   const store = new MemoryStore();
   onStationChanged((stationId) => {
     if (stationId === 'all') known.clear();
-    else for (const [token, entry] of known) if (entry.device.stationId === stationId) known.delete(token);
+    else for (const token of [...known.keys()]) if (known.peek(token)?.device.stationId === stationId) known.delete(token);
   });
 
   async function authenticate(authorization: string | undefined): Promise<DeviceIdentity> {
@@ -43,22 +49,37 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
     return device;
   }
 
-  async function config_(device: DeviceIdentity, ifNoneMatch: string | undefined, nowMs = Date.now()) {
-    const etag = etagFor(device.version, nowMs);
-    if (ifNoneMatch === etag) return { status: 304 as const, etag, body: EMPTY };
+  // A version's ETags last until the plan window moves on, so a poll hashes nothing.
+  const etagMemo = new LRUCache<string, { windowStartMs: number; etags: { identity: string; gzip: string } }>({ max: 100_000 });
+  function etagsOf(version: string, nowMs: number) {
+    const windowStartMs = planWindowStart(nowMs);
+    const hit = etagMemo.get(version);
+    if (hit?.windowStartMs === windowStartMs) return hit.etags;
+    const identity = etagFor(version, nowMs);
+    const etags = { identity, gzip: gzipEtagOf(identity) };
+    etagMemo.set(version, { windowStartMs, etags });
+    return etags;
+  }
+
+  /** The configuration as the device asked for it: 304 while its ETag (either encoding's) is current, else the bytes. */
+  async function config_(device: DeviceIdentity, request: { ifNoneMatch?: string; acceptEncoding?: string }, nowMs = Date.now()) {
+    const etags = etagsOf(device.version, nowMs);
+    const etag = etags.identity;
+    const encoding = acceptsGzip(request.acceptEncoding) ? ('gzip' as const) : ('identity' as const);
+    if (ifNoneMatchHits(request.ifNoneMatch, [etags.identity, etags.gzip])) return { status: 304 as const, encoding, etag: etags[encoding], body: EMPTY };
     let cached = configs.get(device.stationId);
-    if (!cached || cached.etag !== etag) {
+    if (cached?.identity.etag !== etag) {
       const station = await stationsRepo.findById(device.stationId);
       if (!station) throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
       const [unit, schedule] = await Promise.all([
         station.unitId === null ? null : unitsRepo.findById(station.unitId),
         schedulesRepo.findByStation(station.id),
       ]);
-      // Kept as bytes, so a poll sends them without encoding anything again.
-      cached = { etag, body: Buffer.from(JSON.stringify(deviceConfig(station, unit, schedule, nowMs))) };
+      // Kept as bytes in both encodings, so a poll sends them without encoding anything again.
+      cached = representationsOf(etag, deviceConfig(station, unit, schedule, nowMs));
       configs.set(device.stationId, cached);
     }
-    return { status: 200 as const, etag, body: cached.body };
+    return { status: 200 as const, encoding, etag: cached[encoding].etag, body: cached[encoding].body };
   }
 
   /** The rate-limit store, shared with the Express limiter so both paths count the same requests. */
@@ -73,6 +94,21 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
 }
 
 export type DeviceGateway = ReturnType<typeof createDeviceGateway>;
+
+type ConfigAnswer = Awaited<ReturnType<DeviceGateway['config']>>;
+
+/** Writes a config answer; the fast path and the Express route send exactly the same thing. */
+export function sendConfig(res: ServerResponse, answer: ConfigAnswer) {
+  // A 304 repeats only what a cache needs (RFC 9110 §15.4.5): the validator and the caching headers.
+  if (answer.status === 304) {
+    res.writeHead(304, ['ETag', answer.etag, 'Cache-Control', 'private, no-cache', 'Vary', 'Accept-Encoding']);
+    return void res.end();
+  }
+  const headers = ['ETag', answer.etag, 'Cache-Control', 'private, no-cache', 'Vary', 'Accept-Encoding', 'X-Content-Type-Options', 'nosniff', 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(answer.body.length)];
+  if (answer.encoding === 'gzip') headers.push('Content-Encoding', 'gzip');
+  res.writeHead(200, headers);
+  res.end(answer.body);
+}
 
 function sendError(res: ServerResponse, error: unknown) {
   const appError = error instanceof AppError ? error : new AppError('internal', 'Something went wrong on the server. It has been logged.');
@@ -92,16 +128,8 @@ export function withDeviceFastPath(gateway: DeviceGateway, app: (req: IncomingMe
       try {
         const device = await gateway.authenticate(req.headers.authorization);
         await gateway.countRequest(device);
-        const ifNoneMatch = req.headers['if-none-match'];
-        const answer = await gateway.config(device, Array.isArray(ifNoneMatch) ? ifNoneMatch[0] : ifNoneMatch);
-        const headers = { ETag: answer.etag, 'Cache-Control': 'private, no-cache', 'X-Content-Type-Options': 'nosniff' };
-        if (answer.status === 304) {
-          res.writeHead(304, headers);
-          res.end();
-        } else {
-          res.writeHead(200, { ...headers, 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': answer.body.length });
-          res.end(answer.body);
-        }
+        const answer = await gateway.config(device, { ifNoneMatch: req.headers['if-none-match'], acceptEncoding: req.headers['accept-encoding'] });
+        sendConfig(res, answer);
       } catch (error) {
         if (!(error instanceof AppError)) onError(error);
         sendError(res, error);

@@ -1,10 +1,12 @@
 import express, { Router, type NextFunction, type Request, type Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import type { InferCreationAttributes } from 'sequelize';
 import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
 import { AppError } from '../../lib/app-error';
-import { RATE_WINDOW_MS, type DeviceGateway } from './device-gateway';
+import { createGroupWriter } from '../../lib/group-writer';
+import { RATE_WINDOW_MS, sendConfig, type DeviceGateway } from './device-gateway';
 import type { DeviceIdentity } from './tokens.service';
 
 type DeviceRequest = Request & { device?: DeviceIdentity };
@@ -15,6 +17,8 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
  */
 export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
   const router = Router();
+  // Heartbeats from many devices at once are stored a group per INSERT; each is acknowledged once written.
+  const storeHeartbeat = createGroupWriter((rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) => HeartbeatModel.bulkCreate(rows, { validate: false }));
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
     req.device = await gateway.authenticate(req.get('authorization'));
@@ -40,23 +44,14 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
   router.use(perDevice);
 
   router.get('/config', async (req: DeviceRequest, res) => {
-    const answer = await gateway.config(req.device!, req.get('if-none-match'));
-    res.setHeader('ETag', answer.etag);
-    res.setHeader('Cache-Control', 'private, no-cache');
-    if (answer.status === 304) return void res.status(304).end();
-    res.type('json').send(answer.body);
+    const answer = await gateway.config(req.device!, { ifNoneMatch: req.get('if-none-match'), acceptEncoding: req.get('accept-encoding') });
+    sendConfig(res, answer);
   });
 
   router.post('/heartbeat', async (req: DeviceRequest, res) => {
     const report = heartbeatInput.parse(req.body);
-    const row = await HeartbeatModel.create({
-      stationId: req.device!.stationId,
-      receivedAt: new Date(),
-      report: JSON.stringify(report),
-      clockOffsetMs: report.clockOffsetMs,
-      temperatureC: report.temperatureC,
-    });
-    res.status(202).json({ stored: true, id: Number(row.id) });
+    await storeHeartbeat({ stationId: req.device!.stationId, receivedAt: new Date(), report: JSON.stringify(report), clockOffsetMs: report.clockOffsetMs, temperatureC: report.temperatureC });
+    res.status(202).json({ stored: true });
   });
 
   router.post('/transmissions', async (req: DeviceRequest, res) => {
