@@ -1,8 +1,8 @@
 /**
  * npm run bench: device traffic against the real server and MariaDB, beside a bare node:http
  * JSON endpoint measured in the same run. The config poll scenarios and the bare endpoint run in
- * interleaved rounds and each round's ratio is taken against that round's bare run (this machine's
- * speed wanders); the medians are printed, with p50/p99, errors, bytes per response, the server's
+ * interleaved rounds and each poll's ratio is taken against the bare runs on either side of it (this
+ * machine's speed wanders); the medians are printed, with p50/p99, errors, bytes per response, the server's
  * CPU time per request and its peak resident memory. Heartbeats are counted in the database after.
  * Targets: config poll ≥ 50 % of bare req/s with p99 ≤ 50 ms at 50 connections, the 304 path
  * higher, 0 errors, every heartbeat stored, RSS < 300 MB. A script, not a test.
@@ -124,13 +124,18 @@ async function main() {
     // Warm both servers so JIT and caches settle before measuring.
     for (const s of [bareRun, ...polls]) await autocannon({ ...s.options, connections: 10, duration: 2 });
 
+    // Each poll run sits between two bare runs and is measured against their mean, so a change in
+    // the machine's speed during a round (seen here: ±40 %) touches both sides alike.
     for (let round = 0; round < ROUNDS; round += 1) {
-      const yardstick = await load(bareRun.options, bare.pid!);
-      bareRun.runs.push(yardstick);
+      let before = await load(bareRun.options, bare.pid!);
+      bareRun.runs.push(before);
       for (const poll of polls) {
         const run = await load(poll.options, server.pid!);
+        const after = await load(bareRun.options, bare.pid!);
+        bareRun.runs.push(after);
         poll.runs.push(run);
-        poll.shares.push(run.rps / yardstick.rps);
+        poll.shares.push(run.rps / ((before.rps + after.rps) / 2));
+        before = after;
       }
       process.stderr.write(`round ${round + 1} of ${ROUNDS} done\n`);
     }
@@ -144,7 +149,7 @@ async function main() {
     await sequelize.close();
 
     console.log(`\nNode ${process.version}, ${CONNECTIONS} connections, ${ROUNDS} interleaved rounds of ${DURATION_S} s, one server process (started as npm start does), MariaDB on loopback`);
-    console.log('medians over the rounds; share = req/s against the same round\'s bare run; CPU = the answering process\'s CPU time per request\n');
+    console.log('medians over the rounds; share = req/s against the mean of the bare runs just before and after; CPU = the answering process\'s CPU time per request\n');
     console.log('run                                  req/s  share  p50 ms  p99 ms  errors  bytes/resp  CPU µs/req  peak RSS MB');
     const row = (name: string, runs: Run[], share: string) =>
       console.log(
@@ -154,7 +159,7 @@ async function main() {
     row(bareRun.name, bareRun.runs, '100 %');
     for (const poll of polls) row(poll.name, poll.runs, pct(median(poll.shares)));
     row('heartbeat (POST, grouped INSERTs)', [beats], '');
-    console.log(`\nbare req/s per round: ${bareRun.runs.map((r) => r.rps.toFixed(0)).join(', ')}; load average ${readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ')}`);
+    console.log(`\nbare req/s, run by run: ${bareRun.runs.map((r) => r.rps.toFixed(0)).join(', ')}; load average ${readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ')}`);
     for (const poll of polls) console.log(`${poll.name} share per round: ${poll.shares.map(pct).join(', ')}`);
 
     const [gzipPoll, plainPoll, notModified] = polls;
