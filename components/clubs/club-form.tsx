@@ -9,17 +9,29 @@ import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
+import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { space } from '../ui/theme';
 
-export type ClubFormProps = { onSubmit: (values: ClubInput) => Promise<unknown> };
+export type ClubFormProps = {
+  onSubmit: (values: ClubInput) => Promise<unknown>;
+  /** An existing club's values, when editing it; a new club starts empty at 30 dBm. */
+  initialValues?: { name: string; maxPowerDbm: number };
+  submitLabel?: string;
+};
 
-/** A new club: its name and the highest power its members' stations may use. */
-export function ClubForm({ onSubmit }: ClubFormProps) {
-  const form = useForm<ClubInput>({ resolver: zodResolver(clubInput), defaultValues: { name: '', maxPowerDbm: 30 } });
+/** A club's name and the highest power its members' stations may use: for a new club or an existing one. */
+export function ClubForm({ onSubmit, initialValues, submitLabel = 'Create club' }: ClubFormProps) {
+  const form = useForm<ClubInput>({ resolver: zodResolver(clubInput), defaultValues: initialValues ?? { name: '', maxPowerDbm: 30 } });
+  const [saved, setSaved] = useState(false);
   const submit = form.handleSubmit(async (values) => {
+    setSaved(false);
     try {
       await onSubmit(values);
+      if (initialValues) {
+        form.reset(values);
+        setSaved(true);
+      }
     } catch (error) {
       applyServerErrors(form, error);
     }
@@ -30,7 +42,12 @@ export function ClubForm({ onSubmit }: ClubFormProps) {
       <FormTextField control={form.control} name="name" label="Club name" autoComplete="off" />
       <PowerField control={form.control} />
       {rootError ? <Notice message={rootError} /> : null}
-      <Button label="Create club" onPress={submit} busy={form.formState.isSubmitting} style={styles.button} />
+      {saved && !form.formState.isDirty ? (
+        <Text tone="muted" accessibilityLiveRegion="polite">
+          Saved. The review uses the new limit at once.
+        </Text>
+      ) : null}
+      <Button label={submitLabel} onPress={submit} busy={form.formState.isSubmitting} style={styles.button} />
     </View>
   );
 }

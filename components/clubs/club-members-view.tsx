@@ -1,7 +1,7 @@
 import type { UseQueryResult } from '@tanstack/react-query';
 import { StyleSheet, View } from 'react-native';
 
-import type { ClubDetail, ClubMember, Invitation } from '@/shared/schemas';
+import type { ClubDetail, ClubInput, ClubMember, Invitation } from '@/shared/schemas';
 
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
@@ -9,6 +9,7 @@ import { Notice } from '../ui/notice';
 import { ErrorState, LoadingState } from '../ui/query-states';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { ClubForm } from './club-form';
 import { InvitationList } from './invitation-list';
 import { InviteForm, type InviteInput } from './invite-form';
 import { MemberList } from './member-list';
@@ -20,12 +21,13 @@ export type ClubMembersViewProps = {
   roleError?: string;
   busyUserId?: number | null;
   onInvite: (values: InviteInput) => Promise<unknown>;
+  onUpdateClub: (values: ClubInput) => Promise<unknown>;
   onSetRole: (member: ClubMember, role: 'admin' | 'member') => void;
   onRemove: (member: ClubMember) => void;
   onLeave: () => void;
 };
 
-export function ClubMembersView({ club, myUserId, invitations, roleError, busyUserId, onInvite, onSetRole, onRemove, onLeave }: ClubMembersViewProps) {
+export function ClubMembersView({ club, myUserId, invitations, roleError, busyUserId, onInvite, onUpdateClub, onSetRole, onRemove, onLeave }: ClubMembersViewProps) {
   const isAdmin = club.myRole === 'admin';
   const admins = club.members.filter((member) => member.role === 'admin').length;
   const lastAdmin = isAdmin && admins === 1;
@@ -52,6 +54,14 @@ export function ClubMembersView({ club, myUserId, invitations, roleError, busyUs
           ) : (
             <InvitationList invitations={invitations.data ?? []} />
           )}
+        </Card>
+      ) : null}
+      {isAdmin ? (
+        <Card style={styles.section}>
+          <Text variant="heading" accessibilityRole="header">
+            Club settings
+          </Text>
+          <ClubForm initialValues={{ name: club.name, maxPowerDbm: club.maxPowerDbm }} submitLabel="Save club settings" onSubmit={onUpdateClub} />
         </Card>
       ) : null}
       <Card style={styles.section}>

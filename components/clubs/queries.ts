@@ -61,6 +61,18 @@ export function useCreateClubMutation() {
   });
 }
 
+/** Name and power limit; the limit changes the review's verdicts, the name shows in the shell. */
+export function useUpdateClubMutation(clubId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: ClubInput) => api<ClubDetail>(`/clubs/${clubId}`, { method: 'PATCH', body: input }),
+    onSuccess: async (club) => {
+      queryClient.setQueryData(clubKeys.detail(clubId), club);
+      await Promise.all([queryClient.invalidateQueries({ queryKey: clubKeys.review(clubId) }), refreshSession(queryClient)]);
+    },
+  });
+}
+
 export function useRemoveMemberMutation(clubId: number) {
   const queryClient = useQueryClient();
   return useMutation({

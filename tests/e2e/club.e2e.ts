@@ -69,6 +69,20 @@ for (const viewport of VIEWPORTS) {
         await visibleText(admin.page, memberEmail).waitFor(); // pending list
         await screenshot(admin.page, `club-members-${v}`);
 
+        // — the admin raises the club's power limit, sees it saved and shown, then puts it back
+        const power = admin.page.getByLabel('Power limit for members (dBm)');
+        const limitBefore = await power.inputValue();
+        await power.fill('61');
+        await button(admin.page, 'Save club settings').click();
+        await visibleText(admin.page, 'The power limit is at most 60 dBm (1 kW)').waitFor();
+        await power.fill('33');
+        await button(admin.page, 'Save club settings').click();
+        await visibleText(admin.page, 'Saved. The review uses the new limit at once.').waitFor();
+        await visibleText(admin.page, /power limit 33 dBm/).waitFor();
+        await screenshot(admin.page, `club-settings-${v}`);
+        const restored = await call(admin.page, 'PATCH', `/api/clubs/${clubId}`, { maxPowerDbm: Number(limitBefore) });
+        assert.equal(restored.status, 200, JSON.stringify(restored.body));
+
         // — the new person opens the mailed link signed out, registers there and accepts
         const joinUrl = await invitationLink(memberEmail);
         await member.page.goto(joinUrl.replace(/^https?:\/\/[^/]+/, BASE_URL));

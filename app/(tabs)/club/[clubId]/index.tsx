@@ -10,6 +10,7 @@ import {
   useInviteMutation,
   useRemoveMemberMutation,
   useSetMemberRoleMutation,
+  useUpdateClubMutation,
 } from '@/components/clubs/queries';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
@@ -25,6 +26,7 @@ export default function ClubMembersRoute() {
   const invite = useInviteMutation(clubId);
   const setRole = useSetMemberRoleMutation(clubId);
   const remove = useRemoveMemberMutation(clubId);
+  const update = useUpdateClubMutation(clubId);
   const [leaving, setLeaving] = useState<ClubMember | null>(null);
   const [removeError, setRemoveError] = useState<string>();
   const [roleError, setRoleError] = useState<string>();
@@ -80,6 +82,7 @@ export default function ClubMembersRoute() {
         roleError={roleError}
         busyUserId={setRole.isPending ? setRole.variables?.userId : null}
         onInvite={(values) => invite.mutateAsync(values)}
+        onUpdateClub={(values) => update.mutateAsync(values)}
         onSetRole={async (member, role) => {
           setRoleError(undefined);
           try {
