@@ -125,7 +125,7 @@ for (const viewport of VIEWPORTS) {
         await visibleText(admin.page, stationName).waitFor();
         await admin.page.getByRole('radio', { name: 'Status: Needs attention' }).click();
         await admin.page.getByRole('radio', { name: 'Band: 20 m' }).click();
-        await visibleText(admin.page, /20 m is enabled but No low-pass filter/).waitFor();
+        await visibleText(admin.page, /20 m is enabled, but no low-pass filter/).waitFor();
         await screenshot(admin.page, `club-review-${v}`);
 
         // — collisions: the seeded pair on 20 m, and a proposal to Attic beacon's owner
@@ -180,6 +180,9 @@ for (const viewport of VIEWPORTS) {
         await member.page.goto(`${BASE_URL}/stations/${station.body.id}`);
         await visibleText(member.page, /Suspended by the club since .* UTC/).waitFor();
         await button(admin.page, `Lift the stop on ${stationName}`).click();
+        await visibleText(admin.page, `Let ${stationName} send again?`).waitFor();
+        await screenshot(admin.page, `club-lift-dialog-${v}`);
+        await button(admin.page, /^Lift the stop$/).click();
         await visibleText(admin.page, `${stationName} may send again. Wren Tallis ${v} has been told.`).waitFor();
 
         // — the club log (admin) and the own logs (member, owner), each with a CSV download

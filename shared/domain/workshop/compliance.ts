@@ -53,7 +53,7 @@ export function complianceFindings(input: {
     const coverage = filterCoverage(unit.filters, found.band);
     if (!coverage.covered) {
       const where = scheduled.has(bandId) ? 'scheduled' : 'enabled';
-      findings.push({ code: 'unfiltered-band', bandId, message: `${found.band.name} is ${where} but ${coverage.reason}` });
+      findings.push({ code: 'unfiltered-band', bandId, message: `${found.band.name} is ${where}, but ${lowerFirst(coverage.reason)}` });
       continue;
     }
     const air = bandOnAir(station, unit, bandId);
@@ -74,3 +74,6 @@ export function complianceFindings(input: {
   }
   return findings;
 }
+
+/** A sentence spliced into another one starts in lower case. */
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);

@@ -24,7 +24,7 @@ const rows: ReviewRow[] = [
     callsign: 'Q2TRY',
     status: 'attention',
     bands: ['20m'],
-    findings: [{ code: 'unfiltered-band', bandId: '20m', message: '20 m is enabled but No low-pass filter covers it' }],
+    findings: [{ code: 'unfiltered-band', bandId: '20m', message: '20 m is enabled, but no low-pass filter covers it' }],
   },
   {
     ...base,
@@ -55,7 +55,7 @@ describe('ReviewTable', () => {
     expect(text).toContain('Attic beacon');
     expect(text).toContain('Ready: nothing to fix on the enabled bands.');
     expect(text).toContain('Needs attention: one thing to fix before it may send.');
-    expect(text).toContain('20 m is enabled but No low-pass filter covers it');
+    expect(text).toContain('20 m is enabled, but no low-pass filter covers it');
     expect(text).toContain('Stopped by the club: Sends outside the window.');
   });
 

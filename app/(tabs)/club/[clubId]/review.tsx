@@ -6,6 +6,7 @@ import { useClubQuery, useLiftSuspensionMutation, useReviewQuery, useSuspendMuta
 import { ReviewTable } from '@/components/clubs/review-table';
 import { SuspendDialog } from '@/components/clubs/suspend-dialog';
 import { useBreakpoints } from '@/components/ui/breakpoints';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
@@ -20,15 +21,22 @@ export default function ClubReviewRoute() {
   const suspend = useSuspendMutation(clubId);
   const lift = useLiftSuspensionMutation(clubId);
   const [suspending, setSuspending] = useState<ReviewRow | null>(null);
+  const [lifting, setLifting] = useState<ReviewRow | null>(null);
+  const [liftError, setLiftError] = useState<string>();
   const [message, setMessage] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
 
-  const onLift = async (row: ReviewRow) => {
-    setMessage(null);
+  const closeLift = () => {
+    setLifting(null);
+    setLiftError(undefined);
+  };
+  const confirmLift = async () => {
+    if (!lifting) return;
     try {
-      await lift.mutateAsync({ stationId: row.stationId });
-      setMessage({ tone: 'success', text: `${row.stationName} may send again. ${row.ownerName} has been told.` });
+      await lift.mutateAsync({ stationId: lifting.stationId });
+      setMessage({ tone: 'success', text: `${lifting.stationName} may send again. ${lifting.ownerName} has been told.` });
+      closeLift();
     } catch (error) {
-      setMessage({ tone: 'error', text: error instanceof Error ? error.message : 'The stop could not be lifted.' });
+      setLiftError(error instanceof Error ? error.message : 'The stop could not be lifted.');
     }
   };
   let body;
@@ -47,7 +55,10 @@ export default function ClubReviewRoute() {
           setMessage(null);
           setSuspending(row);
         }}
-        onLift={onLift}
+        onLift={(row) => {
+          setMessage(null);
+          setLifting(row);
+        }}
       />
     );
   const name = club.data?.name ?? 'Club';
@@ -55,16 +66,28 @@ export default function ClubReviewRoute() {
     <Screen
       maxWidth={1180}
       overlay={
-        <SuspendDialog
-          station={suspending ? { name: suspending.stationName, ownerName: suspending.ownerName } : null}
-          onCancel={() => setSuspending(null)}
-          onConfirm={async ({ reason }) => {
-            if (!suspending) return;
-            await suspend.mutateAsync({ stationId: suspending.stationId, reason });
-            setMessage({ tone: 'success', text: `${suspending.stationName} is suspended. ${suspending.ownerName} has been told why.` });
-            setSuspending(null);
-          }}
-        />
+        <>
+          <ConfirmDialog
+            visible={!!lifting}
+            title={`Let ${lifting?.stationName} send again?`}
+            message={`Its plan and device configuration go back on the air from the next slot, and ${lifting?.ownerName} is told. Lift the stop only once the reason for it is fixed.`}
+            confirmLabel="Lift the stop"
+            busy={lift.isPending}
+            error={liftError}
+            onConfirm={confirmLift}
+            onCancel={closeLift}
+          />
+          <SuspendDialog
+            station={suspending ? { name: suspending.stationName, ownerName: suspending.ownerName } : null}
+            onCancel={() => setSuspending(null)}
+            onConfirm={async ({ reason }) => {
+              if (!suspending) return;
+              await suspend.mutateAsync({ stationId: suspending.stationId, reason });
+              setMessage({ tone: 'success', text: `${suspending.stationName} is suspended. ${suspending.ownerName} has been told why.` });
+              setSuspending(null);
+            }}
+          />
+        </>
       }
     >
       <Stack.Screen options={{ title: `${name} · Review` }} />
