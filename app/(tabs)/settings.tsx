@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
-import { useSessionQuery, useSignOutMutation } from '@/components/auth/queries';
+import { ProfileForm } from '@/components/auth/profile-form';
+import { useSessionQuery, useSignOutMutation, useUpdateProfileMutation } from '@/components/auth/queries';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
@@ -20,6 +21,7 @@ const themeOptions: { value: ThemePreference; label: string }[] = [
 export default function SettingsRoute() {
   const user = useSessionQuery().data;
   const signOut = useSignOutMutation();
+  const updateProfile = useUpdateProfileMutation();
   const { preference, setPreference } = useAppTheme();
   return (
     <Screen>
@@ -28,13 +30,18 @@ export default function SettingsRoute() {
       </Text>
       <Card>
         <Text variant="heading">Account</Text>
-        <Row label="Name" value={user?.displayName ?? '—'} />
         <Row label="E-mail" value={user?.email ?? '—'} />
-        <Row label="Callsign" value={user?.callsign ?? 'Not set'} mono={!!user?.callsign} />
         <Row
           label="Clubs"
           value={user?.clubs.length ? user.clubs.map((club) => club.clubName).join(', ') : 'None'}
         />
+        {user ? (
+          <ProfileForm
+            key={user.id}
+            initialValues={{ displayName: user.displayName, callsign: user.callsign }}
+            onSubmit={(values) => updateProfile.mutateAsync(values)}
+          />
+        ) : null}
       </Card>
       <Card>
         <Text variant="heading">Appearance</Text>
@@ -56,13 +63,13 @@ export default function SettingsRoute() {
   );
 }
 
-function Row({ label, value, mono = false }: { label: string; value: string; mono?: boolean }) {
+function Row({ label, value }: { label: string; value: string }) {
   return (
     <View style={styles.row}>
       <Text variant="label" tone="muted" style={styles.rowLabel}>
         {label}
       </Text>
-      <Text variant={mono ? 'mono' : 'body'} style={styles.rowValue}>
+      <Text style={styles.rowValue}>
         {value}
       </Text>
     </View>

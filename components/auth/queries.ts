@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { api, ApiError } from '@/shared/api/client';
 import type { SessionUser } from '@/shared/api/contracts';
-import type { RegisterInput, ResetConfirmInput, ResetRequestInput, SignInInput } from '@/shared/schemas';
+import type { ProfileInput, RegisterInput, ResetConfirmInput, ResetRequestInput, SignInInput } from '@/shared/schemas';
 
 import { staleTime } from '../query/query-client';
 
@@ -39,6 +39,14 @@ export function useRegisterMutation() {
   return useMutation({
     mutationFn: (input: RegisterInput) =>
       api<SessionUser>('/auth/register', { method: 'POST', body: input }),
+    onSuccess: (user) => queryClient.setQueryData(sessionKeys.me(), user),
+  });
+}
+
+export function useUpdateProfileMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: ProfileInput) => api<SessionUser>('/auth/me', { method: 'PATCH', body: input }),
     onSuccess: (user) => queryClient.setQueryData(sessionKeys.me(), user),
   });
 }

@@ -5,11 +5,11 @@ import { StyleSheet, View } from 'react-native';
 
 import { clubInput, type ClubInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
+import { useSaveSubmit } from '../form/use-save-submit';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
-import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { space } from '../ui/theme';
 
@@ -23,30 +23,14 @@ export type ClubFormProps = {
 /** A club's name and the highest power its members' stations may use: for a new club or an existing one. */
 export function ClubForm({ onSubmit, initialValues, submitLabel = 'Create club' }: ClubFormProps) {
   const form = useForm<ClubInput>({ resolver: zodResolver(clubInput), defaultValues: initialValues ?? { name: '', maxPowerDbm: 30 } });
-  const [saved, setSaved] = useState(false);
-  const submit = form.handleSubmit(async (values) => {
-    setSaved(false);
-    try {
-      await onSubmit(values);
-      if (initialValues) {
-        form.reset(values);
-        setSaved(true);
-      }
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const { submit, saved } = useSaveSubmit(form, onSubmit, !!initialValues);
   const rootError = serverMessage(form.formState.errors);
   return (
     <View style={styles.form}>
       <FormTextField control={form.control} name="name" label="Club name" autoComplete="off" />
       <PowerField control={form.control} />
       {rootError ? <Notice message={rootError} /> : null}
-      {saved && !form.formState.isDirty ? (
-        <Text tone="muted" accessibilityLiveRegion="polite">
-          Saved. The review uses the new limit at once.
-        </Text>
-      ) : null}
+      {saved ? <Notice tone="success" message="Saved. The review uses the new limit at once." /> : null}
       <Button label={submitLabel} onPress={submit} busy={form.formState.isSubmitting} style={styles.button} />
     </View>
   );

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { alertSettingsInput, type AlertSettings } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage } from '../form/apply-server-errors';
+import { useSaveSubmit } from '../form/use-save-submit';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
@@ -22,17 +22,7 @@ export type AlertSettingsFormProps = {
 /** When the server should raise an alert for this station: how long silent, how far off the clock. */
 export function AlertSettingsForm({ settings, onSubmit, readOnly = false }: AlertSettingsFormProps) {
   const form = useForm<AlertSettings>({ resolver: zodResolver(alertSettingsInput), defaultValues: settings });
-  const [saved, setSaved] = useState(false);
-  const submit = form.handleSubmit(async (values) => {
-    setSaved(false);
-    try {
-      await onSubmit(values);
-      form.reset(values);
-      setSaved(true);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const { submit, saved } = useSaveSubmit(form, onSubmit);
   if (readOnly) {
     return (
       <View style={styles.form}>

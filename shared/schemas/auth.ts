@@ -15,6 +15,10 @@ export const registerInput = z.object({
 });
 export type RegisterInput = z.infer<typeof registerInput>;
 
+/** What a signed-in person may change about themself: the name others see and the personal callsign (empty clears it). */
+export const profileInput = z.object({ displayName: registerInput.shape.displayName, callsign: z.union([callsignField, z.literal('')]) });
+export type ProfileInput = z.input<typeof profileInput>;
+
 export const resetRequestInput = z.object({ email: emailField });
 export type ResetRequestInput = z.infer<typeof resetRequestInput>;
 

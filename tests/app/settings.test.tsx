@@ -1,4 +1,4 @@
-import { createTestQueryClient, jsonResponse, renderRoute, stubFetch } from '../utils/render';
+import { createTestQueryClient, jsonResponse, renderRoute, screenText, stubFetch } from '../utils/render';
 
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 
@@ -46,5 +46,31 @@ describe('/settings', () => {
     await waitFor(() => expect(queryClient.getQueryData(sessionKeys.me())).toBeNull());
     expect(calls).toEqual([{ url: '/api/auth/sign-out', method: 'POST', body: undefined }]);
     expect(queryClient.getQueryData(stationKeys.list())).toBeUndefined();
+  });
+
+  it('when the operator changes name and callsign, sends them upper-cased and the shell shows the new name', async () => {
+    const updated = { ...operator, displayName: 'Ilse Marrow-Venn', callsign: 'Q1IMV' };
+    const { calls } = stubFetch(() => jsonResponse(200, updated));
+    const { queryClient } = renderSettings();
+
+    expect(screen.getByLabelText('Display name').props.value).toBe('Ilse Marrow');
+    fireEvent.changeText(screen.getByLabelText('Display name'), 'Ilse Marrow-Venn');
+    fireEvent.changeText(screen.getByLabelText('Your callsign (optional)'), 'q1imv');
+    fireEvent.press(screen.getByLabelText('Save account'));
+
+    await waitFor(() => expect(calls).toEqual([{ url: '/api/auth/me', method: 'PATCH', body: { displayName: 'Ilse Marrow-Venn', callsign: 'Q1IMV' } }]));
+    await waitFor(() => expect(queryClient.getQueryData(sessionKeys.me())).toEqual(updated));
+    await waitFor(() => expect(screenText()).toContain('Saved.'));
+  });
+
+  it('when the callsign has no digit, says what to fix and sends nothing', async () => {
+    const { calls } = stubFetch(() => jsonResponse(200, operator));
+    renderSettings();
+
+    fireEvent.changeText(screen.getByLabelText('Your callsign (optional)'), 'QIMW');
+    fireEvent.press(screen.getByLabelText('Save account'));
+
+    await waitFor(() => expect(screenText()).toContain('A callsign needs a digit'));
+    expect(calls).toEqual([]);
   });
 });

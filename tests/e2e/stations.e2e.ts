@@ -39,6 +39,16 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, `${name} (edited)`).waitFor();
 
         await page.goto(`${BASE_URL}/settings`);
+        const callsign = page.getByLabel('Your callsign (optional)');
+        assert.equal(await callsign.inputValue(), 'Q1IMW');
+        await callsign.fill('q1imx/p');
+        await page.getByRole('button', { name: 'Save account' }).click();
+        await visibleText(page, 'Saved.').waitFor();
+        assert.equal(await callsign.inputValue(), 'Q1IMX/P');
+        await screenshot(page, `e2e-settings-${viewport.name}`);
+        await callsign.fill('Q1IMW'); // the demo operator as the other tests expect her
+        await page.getByRole('button', { name: 'Save account' }).click();
+        await visibleText(page, 'Saved.').waitFor();
         await page.getByRole('button', { name: 'Sign out' }).click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
         const me = await page.evaluate(async () => (await fetch('/api/auth/me')).status);

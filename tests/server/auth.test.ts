@@ -106,6 +106,37 @@ describe('GET /api/auth/me and sign-out', () => {
   });
 });
 
+describe('PATCH /api/auth/me', () => {
+  it('when the name and callsign are valid, saves them, upper-cases the callsign and logs the change', async () => {
+    const { agent } = await register();
+    const res = await agent.patch('/api/auth/me').send({ displayName: 'Mara Quell-Ostby', callsign: 'q7mqb/p' });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ displayName: 'Mara Quell-Ostby', callsign: 'Q7MQB/P' });
+    expect((await agent.get('/api/auth/me')).body).toMatchObject({ displayName: 'Mara Quell-Ostby', callsign: 'Q7MQB/P' });
+    const log = await agent.get('/api/audit');
+    expect(log.body.map((e: { action: string }) => e.action)).toContain('profile.update');
+  });
+
+  it('when the callsign is empty, clears it', async () => {
+    const { agent } = await register();
+    const res = await agent.patch('/api/auth/me').send({ displayName: 'Mara Quell', callsign: '' });
+    expect(res.status).toBe(200);
+    expect(res.body.callsign).toBeNull();
+  });
+
+  it('when the name is too short and the callsign has no digit, responds 400 naming both and changes nothing', async () => {
+    const { agent } = await register();
+    const res = await agent.patch('/api/auth/me').send({ displayName: 'M', callsign: 'QABC' });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['callsign', 'displayName']);
+    expect((await agent.get('/api/auth/me')).body).toMatchObject({ displayName: 'Mara Quell', callsign: 'Q7MQA' });
+  });
+
+  it('when anonymous, responds 401', async () => {
+    expect((await request(server.app).patch('/api/auth/me').send({ displayName: 'Nobody', callsign: '' })).status).toBe(401);
+  });
+});
+
 describe('password reset by e-mail', () => {
   it('when requested, mails a link that changes the password once and then stops working', async () => {
     const { email } = await register();

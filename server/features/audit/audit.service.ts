@@ -21,7 +21,7 @@ export type AuditRecord = {
   ownerId: number;
   clubId?: number | null;
   action: string;
-  entityType: 'station' | 'unit' | 'band' | 'calibration' | 'schedule' | 'club' | 'membership' | 'invitation' | 'proposal' | 'suspension' | 'photo';
+  entityType: 'user' | 'station' | 'unit' | 'band' | 'calibration' | 'schedule' | 'club' | 'membership' | 'invitation' | 'proposal' | 'suspension' | 'photo';
   entityId?: number | null;
   summary: string;
   before?: unknown;

@@ -3,7 +3,7 @@ import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import passport from 'passport';
 import type { Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
-import { registerInput, resetConfirmInput, resetRequestInput, signInInput } from '@/shared/schemas';
+import { profileInput, registerInput, resetConfirmInput, resetRequestInput, signInInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { AppError } from '../../lib/app-error';
 import type { Logger } from '../../lib/logger';
@@ -77,6 +77,12 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
 
   router.get('/me', (req, res) => {
     res.json(currentUser(req));
+  });
+
+  router.patch('/me', async (req, res) => {
+    const user = currentUser(req);
+    await auth.updateProfile(user, profileInput.parse(req.body));
+    res.json(await findSessionUser(user.id));
   });
 
   router.post('/password-reset', resetLimiter, async (req, res) => {

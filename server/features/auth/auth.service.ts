@@ -1,10 +1,13 @@
 import bcrypt from 'bcryptjs';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, UniqueConstraintError, type Sequelize } from 'sequelize';
-import type { RegisterInput, ResetConfirmInput } from '@/shared/schemas';
+import type { SessionUser } from '@/shared/api/contracts';
+import type { ProfileInput, RegisterInput, ResetConfirmInput } from '@/shared/schemas';
 import { PasswordResetModel } from '../../db/models/password-reset.model';
+import { inTransaction } from '../../db/transaction';
 import { UserModel } from '../../db/models/user.model';
 import { AppError } from '../../lib/app-error';
+import * as audit from '../audit/audit.service';
 import { findByEmail } from './users.repo';
 
 export const RESET_TOKEN_LIFETIME_MIN = 30;
@@ -80,5 +83,15 @@ export async function confirmPasswordReset(
       { usedAt: now },
       { where: { userId: reset.userId, usedAt: null }, transaction },
     );
+  });
+}
+
+/** Name and personal callsign; recorded in the person's own log. */
+export async function updateProfile(user: SessionUser, input: ProfileInput) {
+  const callsign = input.callsign ? input.callsign : null;
+  await inTransaction(async (transaction) => {
+    await UserModel.update({ displayName: input.displayName, callsign }, { where: { id: user.id }, transaction });
+    const before = { displayName: user.displayName, callsign: user.callsign };
+    await audit.record({ actor: { id: user.id, displayName: input.displayName }, ownerId: user.id, action: 'profile.update', entityType: 'user', entityId: user.id, summary: 'Changed the name or callsign of the account', before, after: { displayName: input.displayName, callsign } }, transaction);
   });
 }

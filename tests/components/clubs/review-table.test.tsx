@@ -65,7 +65,7 @@ describe('ReviewTable', () => {
     const text = screenText();
     expect(text).toContain('Showing 1 of 3 stations');
     expect(text).toContain('Shed rig');
-    expect(text).toContain('No low-pass filter covers it');
+    expect(text).toContain('no low-pass filter covers it');
     expect(text).not.toContain('Attic beacon');
     expect(text).not.toContain('Garden mast');
   });
