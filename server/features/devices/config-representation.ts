@@ -12,9 +12,17 @@ export type ConfigRepresentations = {
 
 export const gzipEtagOf = (etag: string) => `${etag.slice(0, -1)}-gz"`;
 
-export function representationsOf(etag: string, document: unknown): ConfigRepresentations {
+/** One version's ETags: the plain one, the gzip one, and both for an If-None-Match check. */
+export type ConfigEtags = { identity: string; gzip: string; all: readonly string[] };
+
+export function etagsFor(identity: string): ConfigEtags {
+  const gzip = gzipEtagOf(identity);
+  return { identity, gzip, all: [identity, gzip] };
+}
+
+export function representationsOf(etags: ConfigEtags, document: unknown): ConfigRepresentations {
   const body = Buffer.from(JSON.stringify(document));
-  return { identity: { etag, body }, gzip: { etag: gzipEtagOf(etag), body: gzipSync(body) } };
+  return { identity: { etag: etags.identity, body }, gzip: { etag: etags.gzip, body: gzipSync(body) } };
 }
 
 // A fleet sends a handful of distinct Accept-Encoding headers: each is parsed once.

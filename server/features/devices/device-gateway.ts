@@ -9,7 +9,7 @@ import { onStationChanged } from '../../lib/change-feed';
 import * as schedulesRepo from '../schedules/schedules.repo';
 import * as stationsRepo from '../stations/stations.repo';
 import * as unitsRepo from '../units/units.repo';
-import { acceptsGzip, gzipEtagOf, ifNoneMatchHits, representationsOf, type ConfigRepresentations } from './config-representation';
+import { acceptsGzip, etagsFor, ifNoneMatchHits, representationsOf, type ConfigEtags, type ConfigRepresentations } from './config-representation';
 import { deviceConfig, etagFor, planWindowStart } from './device-config';
 import { identify, type DeviceIdentity } from './tokens.service';
 
@@ -50,13 +50,12 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
   }
 
   // A version's ETags last until the plan window moves on, so a poll hashes nothing.
-  const etagMemo = new LRUCache<string, { windowStartMs: number; etags: { identity: string; gzip: string } }>({ max: 100_000 });
+  const etagMemo = new LRUCache<string, { windowStartMs: number; etags: ConfigEtags }>({ max: 100_000 });
   function etagsOf(version: string, nowMs: number) {
     const windowStartMs = planWindowStart(nowMs);
     const hit = etagMemo.get(version);
     if (hit?.windowStartMs === windowStartMs) return hit.etags;
-    const identity = etagFor(version, nowMs);
-    const etags = { identity, gzip: gzipEtagOf(identity) };
+    const etags = etagsFor(etagFor(version, nowMs));
     etagMemo.set(version, { windowStartMs, etags });
     return etags;
   }
@@ -64,11 +63,10 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
   /** The configuration as the device asked for it: 304 while its ETag (either encoding's) is current, else the bytes. */
   async function config_(device: DeviceIdentity, request: { ifNoneMatch?: string; acceptEncoding?: string }, nowMs = Date.now()) {
     const etags = etagsOf(device.version, nowMs);
-    const etag = etags.identity;
     const encoding = acceptsGzip(request.acceptEncoding) ? ('gzip' as const) : ('identity' as const);
-    if (ifNoneMatchHits(request.ifNoneMatch, [etags.identity, etags.gzip])) return { status: 304 as const, encoding, etag: etags[encoding], body: EMPTY };
+    if (ifNoneMatchHits(request.ifNoneMatch, etags.all)) return { status: 304 as const, encoding, etag: etags[encoding], body: EMPTY };
     let cached = configs.get(device.stationId);
-    if (cached?.identity.etag !== etag) {
+    if (cached?.identity.etag !== etags.identity) {
       const station = await stationsRepo.findById(device.stationId);
       if (!station) throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
       const [unit, schedule] = await Promise.all([
@@ -76,7 +74,7 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
         schedulesRepo.findByStation(station.id),
       ]);
       // Kept as bytes in both encodings, so a poll sends them without encoding anything again.
-      cached = representationsOf(etag, deviceConfig(station, unit, schedule, nowMs));
+      cached = representationsOf(etags, deviceConfig(station, unit, schedule, nowMs));
       configs.set(device.stationId, cached);
     }
     return { status: 200 as const, encoding, etag: cached[encoding].etag, body: cached[encoding].body };
