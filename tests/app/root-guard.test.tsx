@@ -1,4 +1,5 @@
 import { errorResponse, jsonResponse, renderRoute, screenText, stubFetch } from '../utils/render';
+import { demoOperator } from '../utils/fixtures';
 
 import { screen, waitFor } from '@testing-library/react-native';
 
@@ -7,7 +8,6 @@ import AuthLayoutRoute from '@/app/(auth)/_layout';
 import OverviewRoute from '@/app/(tabs)/index';
 import TabsLayoutRoute from '@/app/(tabs)/_layout';
 import RootLayoutRoute from '@/app/_layout';
-import type { SessionUser } from '@/shared/api/contracts';
 
 const routes = {
   _layout: RootLayoutRoute,
@@ -21,14 +21,7 @@ const routes = {
   '+not-found': () => null,
 };
 
-const operator: SessionUser = {
-  id: 2,
-  email: 'operator@faintline.example',
-  displayName: 'Ilse Marrow',
-  callsign: 'Q1IMW',
-  clubs: [],
-  adminOfClubIds: [],
-};
+const operator = demoOperator;
 
 describe('root layout guards', () => {
   it('when signed out, a visit to / lands on the sign-in screen', async () => {

@@ -1,20 +1,13 @@
 import { createTestQueryClient, jsonResponse, renderRoute, screenText, stubFetch } from '../utils/render';
+import { demoOperator } from '../utils/fixtures';
 
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 
 import SettingsRoute from '@/app/(tabs)/settings';
 import { sessionKeys } from '@/components/auth/queries';
 import { stationKeys } from '@/components/stations/queries';
-import type { SessionUser } from '@/shared/api/contracts';
 
-const operator: SessionUser = {
-  id: 2,
-  email: 'operator@faintline.example',
-  displayName: 'Ilse Marrow',
-  callsign: 'Q1IMW',
-  clubs: [],
-  adminOfClubIds: [],
-};
+const operator = demoOperator;
 
 function renderSettings() {
   const queryClient = createTestQueryClient();

@@ -1,20 +1,13 @@
 import { createTestQueryClient, jsonResponse, renderRoute, screenText, stubFetch } from '../utils/render';
+import { demoOperator, stationFixture } from '../utils/fixtures';
 
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 
 import StationDetailRoute from '@/app/(tabs)/stations/[id]';
 import { sessionKeys } from '@/components/auth/queries';
 import type { SessionUser } from '@/shared/api/contracts';
-import type { Station } from '@/shared/schemas';
 
-const operator: SessionUser = {
-  id: 2,
-  email: 'operator@faintline.example',
-  displayName: 'Ilse Marrow',
-  callsign: 'Q1IMW',
-  clubs: [{ clubId: 1, clubName: 'Saltmarsh Beacon Circle', role: 'member' }],
-  adminOfClubIds: [],
-};
+const operator: SessionUser = { ...demoOperator, clubs: [{ clubId: 1, clubName: 'Saltmarsh Beacon Circle', role: 'member' }] };
 const admin: SessionUser = {
   ...operator,
   id: 1,
@@ -24,24 +17,7 @@ const admin: SessionUser = {
   clubs: [{ clubId: 1, clubName: 'Saltmarsh Beacon Circle', role: 'admin' }],
   adminOfClubIds: [1],
 };
-const attic: Station = {
-  id: 12,
-  ownerId: 2,
-  ownerName: 'Ilse Marrow',
-  name: 'Attic beacon',
-  callsign: 'Q1IMW',
-  locator: 'IO91WM',
-  notes: 'End-fed wire under the roof tiles.',
-  unitId: null,
-  region: 'itu1',
-  audioOffsetHz: 1500,
-  transmitEnabled: false,
-  referenceErrorPpm: null,
-  suspension: null,
-  bands: [],
-  createdAt: '2026-11-28T09:12:00.000Z',
-  updatedAt: '2026-12-01T18:42:00.000Z',
-};
+const attic = stationFixture({ notes: 'End-fed wire under the roof tiles.' });
 
 function renderDetail(user: SessionUser) {
   const queryClient = createTestQueryClient();

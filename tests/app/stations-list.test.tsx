@@ -1,4 +1,5 @@
 import { errorResponse, jsonResponse, pendingFetch, renderRoute, screenText, stubFetch } from '../utils/render';
+import { stationFixture } from '../utils/fixtures';
 
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 
@@ -9,25 +10,7 @@ function renderStations() {
   return renderRoute({ 'stations/index': StationsRoute, 'stations/new': () => null }, { initialUrl: '/stations' });
 }
 
-const station = (overrides: Partial<Station>): Station => ({
-  id: 1,
-  ownerId: 7,
-  ownerName: 'Ilse Marrow',
-  name: 'Attic beacon',
-  callsign: 'Q1IMW',
-  locator: 'IO91WM',
-  notes: '',
-  unitId: null,
-  region: 'itu1',
-  audioOffsetHz: 1500,
-  transmitEnabled: false,
-  referenceErrorPpm: null,
-  suspension: null,
-  bands: [],
-  createdAt: '2026-11-30T09:00:00.000Z',
-  updatedAt: '2026-12-01T18:42:00.000Z',
-  ...overrides,
-});
+const station = (overrides: Partial<Station>) => stationFixture({ id: 1, ownerId: 7, createdAt: '2026-11-30T09:00:00.000Z', ...overrides });
 
 describe('/stations', () => {
   it('while the list loads, shows a loading state', () => {

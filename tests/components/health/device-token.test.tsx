@@ -1,41 +1,16 @@
 import { createTestQueryClient, jsonResponse, renderRoute, screenText, stubFetch, type FetchCall } from '../../utils/render';
+import { demoOperator, stationFixture } from '../../utils/fixtures';
 
 import { act, fireEvent, screen, waitFor } from '@testing-library/react-native';
 import { router } from 'expo-router';
 
 import StationDeviceRoute from '@/app/(tabs)/stations/[id]/device';
 import { sessionKeys } from '@/components/auth/queries';
-import type { SessionUser } from '@/shared/api/contracts';
-import type { Station } from '@/shared/schemas';
 
 import { healthFixture } from './fixtures';
 
-const operator: SessionUser = {
-  id: 2,
-  email: 'operator@faintline.example',
-  displayName: 'Ilse Marrow',
-  callsign: 'Q1IMW',
-  clubs: [],
-  adminOfClubIds: [],
-};
-const attic = {
-  id: 12,
-  ownerId: 2,
-  ownerName: 'Ilse Marrow',
-  name: 'Attic beacon',
-  callsign: 'Q1IMW',
-  locator: 'IO91WM',
-  notes: '',
-  unitId: null,
-  region: 'itu1',
-  audioOffsetHz: 1500,
-  transmitEnabled: false,
-  referenceErrorPpm: null,
-  suspension: null,
-  bands: [],
-  createdAt: '2026-11-28T09:12:00.000Z',
-  updatedAt: '2026-12-01T18:42:00.000Z',
-} as unknown as Station;
+const operator = demoOperator;
+const attic = stationFixture();
 
 /** A small fake server: the token exists once created; each POST issues a new one. */
 function fakeServer() {

@@ -1,30 +1,22 @@
 import type { ScheduleValues, Station, Unit } from '@/shared/schemas';
 
+import { stationFixture } from '../../utils/fixtures';
+
 export const NOW_MS = Date.parse('2026-12-02T14:02:48.000Z');
 
 /** Fictional operator's station: 40 m, 20 m and 10 m enabled, calibrated; the unit has filters for 40 m and 20 m only. */
-export const station: Station = {
-  id: 12,
+export const station: Station = stationFixture({
   ownerId: 7,
-  ownerName: 'Ilse Marrow',
-  name: 'Attic beacon',
-  callsign: 'Q1IMW',
-  locator: 'IO91WM',
-  notes: '',
   unitId: 3,
-  region: 'itu1',
-  audioOffsetHz: 1500,
   transmitEnabled: true,
-  referenceErrorPpm: null,
   bands: [
     { bandId: '40m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
     { bandId: '20m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
     { bandId: '10m', enabled: true, calibrationOffsetHz: 0, calibrationSource: 'typed', calibratedAt: '2026-12-01T10:00:00.000Z' },
   ],
-  suspension: null,
   createdAt: '2026-12-01T10:00:00.000Z',
   updatedAt: '2026-12-01T10:00:00.000Z',
-};
+});
 
 export const unit: Unit = {
   id: 3,
