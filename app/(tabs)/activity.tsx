@@ -1,11 +1,8 @@
-import { StyleSheet, View } from 'react-native';
-
-import { AuditList, CsvLink } from '@/components/audit/audit-list';
+import { AuditIntro, AuditList } from '@/components/audit/audit-list';
 import { auditCsvPath, useMyAuditQuery } from '@/components/audit/queries';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
-import { space } from '@/components/ui/theme';
 
 export default function ActivityRoute() {
   const log = useMyAuditQuery();
@@ -20,18 +17,9 @@ export default function ActivityRoute() {
       <Text variant="title" accessibilityRole="header">
         Your activity log
       </Text>
-      <View style={styles.head}>
-        <Text tone="muted" style={styles.grow}>
-          Every change to your stations and equipment, by you or by a club admin, with the time in UTC.
-        </Text>
-        <CsvLink href={auditCsvPath.mine()} />
-      </View>
+      <AuditIntro text="Every change to your stations and equipment, by you or by a club admin, with the time in UTC." csvHref={auditCsvPath.mine()} />
       {body}
     </Screen>
   );
 }
 
-const styles = StyleSheet.create({
-  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
-  grow: { flex: 1, minWidth: 220 },
-});

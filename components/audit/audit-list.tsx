@@ -85,6 +85,20 @@ function short(value: unknown): string {
   return text.length > 60 ? `${text.slice(0, 57)}…` : text;
 }
 
+export type AuditIntroProps = { text: string; csvHref: string };
+
+/** What a log holds, in a sentence, with its CSV download beside it (below it on a phone). */
+export function AuditIntro({ text, csvHref }: AuditIntroProps) {
+  return (
+    <View style={styles.intro}>
+      <Text tone="muted" style={styles.introText}>
+        {text}
+      </Text>
+      <CsvLink href={csvHref} />
+    </View>
+  );
+}
+
 export type CsvLinkProps = { href: string; label?: string };
 
 /** A plain anchor to the CSV download (the server answers with an attachment). */
@@ -105,6 +119,8 @@ const styles = StyleSheet.create({
   time: { fontSize: 13 },
   changes: { gap: 2, marginTop: space.xs },
   change: { fontFamily: fonts.mono },
+  intro: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
+  introText: { flex: 1, minWidth: 220 },
   csv: {
     fontFamily: fonts.medium,
     fontSize: 16,

@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { fonts, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { AlertList } from './alert-list';
+import { HealthFigure } from './health-figure';
 import { LinkBadge } from './link-badge';
 import {
   formatClockOffset,
@@ -66,17 +67,6 @@ function CreateToken({ health, onOpenDevice, short = false }: { health: StationH
   );
 }
 
-function Figure({ label, value }: { label: string; value: string }) {
-  return (
-    <View style={styles.figure}>
-      <Text variant="caption" tone="muted">
-        {label}
-      </Text>
-      <Text variant="mono">{value}</Text>
-    </View>
-  );
-}
-
 function lastTransmission(health: StationHealth): string | null {
   const last = health.recent[0];
   if (!last) return null;
@@ -115,11 +105,11 @@ function HealthCard({
       {health.hasDevice && health.heartbeatAgeS !== null ? (
         <>
           <View style={styles.figures}>
-            <Figure label="Clock offset" value={formatClockOffset(health.clockOffsetMs)} />
-            <Figure label="Temperature" value={formatTemperature(health.temperatureC)} />
-            <Figure label="Drift it implies" value={formatDrift(health.driftHz)} />
+            <HealthFigure label="Clock offset" value={formatClockOffset(health.clockOffsetMs)} />
+            <HealthFigure label="Temperature" value={formatTemperature(health.temperatureC)} />
+            <HealthFigure label="Drift it implies" value={formatDrift(health.driftHz)} />
           </View>
-          <View style={styles.figure}>
+          <View style={styles.transmissions}>
             <Text variant="caption" tone="muted">
               Transmissions, last 24 h
             </Text>
@@ -229,8 +219,8 @@ const styles = StyleSheet.create({
   cardHead: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', gap: space.md },
   cardTitle: { flex: 1, gap: 2 },
   underline: { textDecorationLine: 'underline' },
+  transmissions: { gap: 2, minWidth: 90 },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg, rowGap: space.sm },
-  figure: { gap: 2, minWidth: 90 },
   createButton: { alignSelf: 'flex-start', minHeight: 38, marginTop: space.xs },
   table: { borderWidth: 1, borderRadius: 16, overflow: 'hidden' },
   row: { flexDirection: 'row', borderBottomWidth: 1, paddingHorizontal: space.md, paddingVertical: space.md, gap: space.md },

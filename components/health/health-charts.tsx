@@ -10,8 +10,9 @@ import { VictoryScatter } from 'victory-native/lib/components/victory-scatter';
 
 import type { StationHealth } from '@/shared/schemas';
 
+import { axisTextOf, timeAxisStyleOf } from '../charts/axis-styles';
 import { Text } from '../ui/text';
-import { fonts, space } from '../ui/theme';
+import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 
 export type HealthChartsProps = {
@@ -60,7 +61,7 @@ function SeriesChart({
   limit?: number;
 }) {
   const { colors } = useAppTheme();
-  const axisText = { fontFamily: fonts.mono, fontSize: 11, fill: colors.textMuted };
+  const axisText = axisTextOf(colors);
   const values = points.map((p) => p.y);
   // the limit is drawn only when readings come near it; otherwise it would flatten the line
   const shownLimit = limit !== undefined && values.some((v) => Math.abs(v) > limit * 0.5) ? limit : undefined;
@@ -98,13 +99,7 @@ function SeriesChart({
             tickValues={hourTicks(fromMs, toMs, width < 520 ? 6 : 3)}
             tickFormat={(t: number) => hhmm(t)}
             label="Time (UTC)"
-            style={{
-              axis: { stroke: colors.border },
-              ticks: { stroke: colors.border, size: 4 },
-              tickLabels: axisText,
-              grid: { stroke: colors.border, strokeDasharray: '2,4' },
-              axisLabel: { ...axisText, fontFamily: fonts.medium, fontSize: 12, padding: 28, fill: colors.text },
-            }}
+            style={timeAxisStyleOf(colors)}
           />
           <VictoryAxis
             dependentAxis

@@ -12,6 +12,7 @@ import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { AlertList } from './alert-list';
 import { AlertSettingsForm } from './alert-settings-form';
+import { HealthFigure } from './health-figure';
 import { LazyHealthCharts } from './lazy-charts';
 import { LinkBadge } from './link-badge';
 import {
@@ -34,17 +35,6 @@ export type StationHealthViewProps = {
   onSaveSettings: (settings: AlertSettings) => Promise<unknown>;
   onOpenDevice?: () => void;
 };
-
-function Figure({ label, value }: { label: string; value: string }) {
-  return (
-    <View style={styles.figure}>
-      <Text variant="caption" tone="muted">
-        {label}
-      </Text>
-      <Text variant="monoLarge">{value}</Text>
-    </View>
-  );
-}
 
 /** One station's health: the latest report, open alerts, 24-hour charts, transmissions, history, thresholds. */
 export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onOpenDevice }: StationHealthViewProps) {
@@ -80,10 +70,10 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
             {health.firmwareVersion ? ` · firmware ${health.firmwareVersion}` : ''}
           </Text>
           <View style={styles.figures}>
-            <Figure label="Clock offset" value={formatClockOffset(health.clockOffsetMs)} />
-            <Figure label="Temperature" value={formatTemperature(health.temperatureC)} />
-            <Figure label="Drift it implies" value={formatDrift(health.driftHz)} />
-            <Figure label="Supply" value={formatSupply(health.supplyV)} />
+            <HealthFigure large label="Clock offset" value={formatClockOffset(health.clockOffsetMs)} />
+            <HealthFigure large label="Temperature" value={formatTemperature(health.temperatureC)} />
+            <HealthFigure large label="Drift it implies" value={formatDrift(health.driftHz)} />
+            <HealthFigure large label="Supply" value={formatSupply(health.supplyV)} />
           </View>
           <Text variant="caption" tone="muted">
             Drift: how far the temperature moves the signal on its worst band, from the unit's temperature coefficient (against 20 °C).
@@ -166,7 +156,6 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', gap: space.md },
   headTitle: { flex: 1, gap: 2 },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xl, rowGap: space.md, paddingVertical: space.xs },
-  figure: { gap: 2, minWidth: 110 },
   section: { gap: space.sm },
   chartBox: { width: '100%' },
   txList: { borderTopWidth: 1 },

@@ -1,4 +1,3 @@
-import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import type { BandId } from '@/shared/domain';
@@ -7,6 +6,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { useTickingClock } from '../ui/use-ticking-clock';
 import { bandName, formatCountdown, formatMHz, formatUtcTime } from './format';
 
 export type UpcomingTransmission = {
@@ -30,17 +30,7 @@ export type NextTransmissionsProps = {
 /** The next transmissions as the server planned them, with a live countdown to the first. */
 export function NextTransmissions({ transmissions, now = Date.now, count = 6, quietMessage }: NextTransmissionsProps) {
   const { colors } = useAppTheme();
-  const [nowMs, setNowMs] = useState(now);
-  useEffect(() => {
-    let timer: ReturnType<typeof setTimeout>;
-    const tick = () => {
-      const current = now();
-      setNowMs(current);
-      timer = setTimeout(tick, 1000 - (current % 1000) + 5);
-    };
-    tick();
-    return () => clearTimeout(timer);
-  }, [now]);
+  const nowMs = useTickingClock(1000, now);
   // a transmission stays "next" until it has started
   const coming = transmissions.filter((t) => t.startMs > nowMs).slice(0, count);
   const first = coming[0];

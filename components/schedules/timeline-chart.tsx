@@ -9,6 +9,7 @@ import { VictoryChart } from 'victory-native/lib/components/victory-chart';
 import { VictoryLine } from 'victory-native/lib/components/victory-line';
 import { VictoryScatter } from 'victory-native/lib/components/victory-scatter';
 
+import { axisTextOf, timeAxisStyleOf } from '../charts/axis-styles';
 import { fonts } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import type { TimelineModel } from './timeline-model';
@@ -30,7 +31,7 @@ export default function TimelineChart({ model, width }: TimelineChartProps) {
   const height = PAD.top + PAD.bottom + Math.max(1, lanes) * LANE_HEIGHT;
   const tickStepH = width < 520 ? 6 : 3;
   const ticks = model.hourTicksMs.filter((_, i) => i % tickStepH === 0);
-  const axisText = { fontFamily: fonts.mono, fontSize: 11, fill: colors.textMuted };
+  const axisText = axisTextOf(colors);
   return (
     <VictoryChart
       width={width}
@@ -43,13 +44,7 @@ export default function TimelineChart({ model, width }: TimelineChartProps) {
         tickValues={ticks}
         tickFormat={(t: number) => model.hourLabel(t)}
         label="UTC"
-        style={{
-          axis: { stroke: colors.border },
-          ticks: { stroke: colors.border, size: 4 },
-          tickLabels: axisText,
-          grid: { stroke: colors.border, strokeDasharray: '2,4' },
-          axisLabel: { ...axisText, fontFamily: fonts.medium, fontSize: 12, padding: 28, fill: colors.text },
-        }}
+        style={timeAxisStyleOf(colors)}
       />
       <VictoryAxis
         dependentAxis

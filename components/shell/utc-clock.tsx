@@ -1,9 +1,9 @@
-import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Text } from '../ui/text';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { useTickingClock } from '../ui/use-ticking-clock';
 import { readSlotClock } from './slot-clock';
 
 export type UtcClockProps = {
@@ -16,18 +16,7 @@ export type UtcClockProps = {
 /** Live UTC time and the countdown to the next two-minute slot, updated every second. */
 export function UtcClock({ now = Date.now, variant = 'strip' }: UtcClockProps) {
   const { colors } = useAppTheme();
-  const [nowMs, setNowMs] = useState(now);
-  useEffect(() => {
-    let timer: ReturnType<typeof setTimeout>;
-    const tick = () => {
-      const current = now();
-      setNowMs(current);
-      // wake just after the next whole second so the display never lags
-      timer = setTimeout(tick, 1000 - (current % 1000) + 5);
-    };
-    tick();
-    return () => clearTimeout(timer);
-  }, [now]);
+  const nowMs = useTickingClock(1000, now);
   const reading = readSlotClock(nowMs);
   const progress = 1 - reading.secondsToNextSlot / 120;
   const panel = variant === 'panel';

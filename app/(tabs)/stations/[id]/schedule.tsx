@@ -14,7 +14,7 @@ import {
   LazySchedulePreviewPanel as SchedulePreviewPanel,
   LazyScheduleSummary as ScheduleSummary,
 } from '@/components/schedules/lazy-parts';
-import { useMinuteClock } from '@/components/schedules/use-minute-clock';
+import { useTickingClock } from '@/components/ui/use-ticking-clock';
 import { useStationQuery } from '@/components/stations/queries';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
@@ -28,7 +28,7 @@ export default function StationScheduleRoute() {
   const me = useSessionQuery().data;
   const station = useStationQuery(stationId);
   const schedule = useScheduleQuery(stationId);
-  const nowMs = useMinuteClock();
+  const nowMs = useTickingClock(60_000);
   const range = previewRange(nowMs);
   const plan = usePlanQuery(stationId, range, !!schedule.data);
   const patch = usePatchScheduleMutation(stationId);

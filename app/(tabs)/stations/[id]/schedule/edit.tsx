@@ -4,7 +4,7 @@ import { useSessionQuery } from '@/components/auth/queries';
 import { useSaveScheduleMutation, useScheduleQuery, useScheduleUnitQuery } from '@/components/schedules/queries';
 import { LazyScheduleEditor as ScheduleEditor, LazySchedulePreviewPanel as SchedulePreviewPanel } from '@/components/schedules/lazy-parts';
 import { draftDefaults } from '@/components/schedules/draft-defaults';
-import { useMinuteClock } from '@/components/schedules/use-minute-clock';
+import { useTickingClock } from '@/components/ui/use-ticking-clock';
 import { useStationQuery } from '@/components/stations/queries';
 import { useBreakpoints } from '@/components/ui/breakpoints';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
@@ -20,7 +20,7 @@ export default function EditScheduleRoute() {
   const schedule = useScheduleQuery(stationId);
   const unit = useScheduleUnitQuery(station.data?.unitId);
   const save = useSaveScheduleMutation(stationId, !!schedule.data);
-  const nowMs = useMinuteClock();
+  const nowMs = useTickingClock(60_000);
   const { isWide } = useBreakpoints();
   const back = () => router.replace({ pathname: '/stations/[id]/schedule', params: { id } });
 
