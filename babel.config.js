@@ -22,7 +22,8 @@ function zodEnglishOnly() {
         retarget(state, path.node.source);
       },
       CallExpression(path, state) {
-        if (path.node.callee.name === 'require' && path.node.arguments[0]?.type === 'StringLiteral') retarget(state, path.node.arguments[0]);
+        if (path.node.callee.name === 'require' && path.node.arguments[0]?.type === 'StringLiteral')
+          retarget(state, path.node.arguments[0]);
       },
     },
   };

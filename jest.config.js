@@ -3,9 +3,7 @@ const expoPreset = require('jest-expo/jest-preset');
 
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 // Append to jest-expo's own allow-list rather than replacing it.
-const clientIgnore = (expoPreset.transformIgnorePatterns || []).map((pattern) =>
-  pattern.replace('(?!(', '(?!(victory|'),
-);
+const clientIgnore = (expoPreset.transformIgnorePatterns || []).map((pattern) => pattern.replace('(?!(', '(?!(victory|'));
 
 module.exports = {
   testTimeout: 30000,

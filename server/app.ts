@@ -109,5 +109,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
 
 /** The app behind node:http, with device configuration polls answered on the fast path. */
 export function createHttpHandler(app: ReturnType<typeof createApp>, logger: Logger) {
-  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, app, (error) => logger.error({ err: error }, 'device config failed'));
+  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, app, (error) =>
+    logger.error({ err: error }, 'device config failed'),
+  );
 }

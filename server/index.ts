@@ -41,10 +41,14 @@ async function main() {
   });
 
   // Alert rules run on a schedule; the job row lock keeps several server processes from doubling up.
-  const alertJob = new Cron(config.ALERTS_CRON, { protect: true, catch: (error) => logger.error({ err: error }, 'alert evaluation failed') }, async () => {
-    const mails = await evaluateAlerts(sequelize);
-    for (const mail of mails ?? []) sendLater(mailer, logger, mail);
-  });
+  const alertJob = new Cron(
+    config.ALERTS_CRON,
+    { protect: true, catch: (error) => logger.error({ err: error }, 'alert evaluation failed') },
+    async () => {
+      const mails = await evaluateAlerts(sequelize);
+      for (const mail of mails ?? []) sendLater(mailer, logger, mail);
+    },
+  );
 
   let stopping = false;
   const stop = async (signal: string) => {

@@ -17,9 +17,11 @@ export default function ActivityRoute() {
       <Text variant="title" accessibilityRole="header">
         Your activity log
       </Text>
-      <AuditIntro text="Every change to your stations and equipment, by you or by a club admin, with the time in UTC." csvHref={auditCsvPath.mine()} />
+      <AuditIntro
+        text="Every change to your stations and equipment, by you or by a club admin, with the time in UTC."
+        csvHref={auditCsvPath.mine()}
+      />
       {body}
     </Screen>
   );
 }
-

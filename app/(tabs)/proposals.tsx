@@ -41,8 +41,8 @@ export default function ProposalsRoute() {
         Offset proposals
       </Text>
       <Text tone="muted">
-        A new audio offset keeps your station clear of another club station in the same slots. Accepting changes the
-        station’s offset straight away; declining leaves it as it is.
+        A new audio offset keeps your station clear of another club station in the same slots. Accepting changes the station’s offset
+        straight away; declining leaves it as it is.
       </Text>
       {body}
     </Screen>

@@ -31,10 +31,7 @@ export default function SettingsRoute() {
       <Card>
         <Text variant="heading">Account</Text>
         <Row label="E-mail" value={user?.email ?? '—'} />
-        <Row
-          label="Clubs"
-          value={user?.clubs.length ? user.clubs.map((club) => club.clubName).join(', ') : 'None'}
-        />
+        <Row label="Clubs" value={user?.clubs.length ? user.clubs.map((club) => club.clubName).join(', ') : 'None'} />
         {user ? (
           <ProfileForm
             key={user.id}
@@ -51,13 +48,7 @@ export default function SettingsRoute() {
       <Card>
         <Text variant="heading">Session</Text>
         {signOut.isError ? <Notice message={signOut.error.message} /> : null}
-        <Button
-          label="Sign out"
-          variant="secondary"
-          busy={signOut.isPending}
-          onPress={() => signOut.mutate()}
-          style={styles.signOut}
-        />
+        <Button label="Sign out" variant="secondary" busy={signOut.isPending} onPress={() => signOut.mutate()} style={styles.signOut} />
       </Card>
     </Screen>
   );
@@ -69,9 +60,7 @@ function Row({ label, value }: { label: string; value: string }) {
       <Text variant="label" tone="muted" style={styles.rowLabel}>
         {label}
       </Text>
-      <Text style={styles.rowValue}>
-        {value}
-      </Text>
+      <Text style={styles.rowValue}>{value}</Text>
     </View>
   );
 }

@@ -106,7 +106,12 @@ export function CsvLink({ href, label = 'Download CSV' }: CsvLinkProps) {
   const { colors } = useAppTheme();
   const web = Platform.OS === 'web' ? ({ href, hrefAttrs: { download: true } } as object) : {};
   return (
-    <Text accessibilityRole="link" accessibilityLabel={label} {...web} style={[styles.csv, { borderColor: colors.primary, color: colors.primary }]}>
+    <Text
+      accessibilityRole="link"
+      accessibilityLabel={label}
+      {...web}
+      style={[styles.csv, { borderColor: colors.primary, color: colors.primary }]}
+    >
       {label}
     </Text>
   );

@@ -31,7 +31,13 @@ export function ProfileForm({ initialValues, onSubmit }: ProfileFormProps) {
   return (
     <View style={styles.form}>
       {message ? <Notice message={message} /> : null}
-      <FormTextField control={form.control} name="displayName" label="Display name" hint="Club admins and members see this name." autoComplete="name" />
+      <FormTextField
+        control={form.control}
+        name="displayName"
+        label="Display name"
+        hint="Club admins and members see this name."
+        autoComplete="name"
+      />
       <FormTextField
         control={form.control}
         name="callsign"

@@ -28,8 +28,7 @@ export function useSessionQuery() {
 export function useSignInMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: SignInInput) =>
-      api<SessionUser>('/auth/sign-in', { method: 'POST', body: input }),
+    mutationFn: (input: SignInInput) => api<SessionUser>('/auth/sign-in', { method: 'POST', body: input }),
     onSuccess: (user) => queryClient.setQueryData(sessionKeys.me(), user),
   });
 }
@@ -37,8 +36,7 @@ export function useSignInMutation() {
 export function useRegisterMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: RegisterInput) =>
-      api<SessionUser>('/auth/register', { method: 'POST', body: input }),
+    mutationFn: (input: RegisterInput) => api<SessionUser>('/auth/register', { method: 'POST', body: input }),
     onSuccess: (user) => queryClient.setQueryData(sessionKeys.me(), user),
   });
 }
@@ -67,14 +65,12 @@ type MessageBody = { message: string };
 
 export function useResetRequestMutation() {
   return useMutation({
-    mutationFn: (input: ResetRequestInput) =>
-      api<MessageBody>('/auth/password-reset', { method: 'POST', body: input }),
+    mutationFn: (input: ResetRequestInput) => api<MessageBody>('/auth/password-reset', { method: 'POST', body: input }),
   });
 }
 
 export function useResetConfirmMutation() {
   return useMutation({
-    mutationFn: (input: ResetConfirmInput) =>
-      api<MessageBody>('/auth/password-reset/confirm', { method: 'POST', body: input }),
+    mutationFn: (input: ResetConfirmInput) => api<MessageBody>('/auth/password-reset/confirm', { method: 'POST', body: input }),
   });
 }

@@ -53,7 +53,13 @@ function PowerField({ control }: { control: Control<ClubInput> }) {
         field.onChange(trimmed === '' ? undefined : /^-?\d+(\.\d+)?$/.test(trimmed) ? Number(trimmed) : Number.NaN);
       }}
       onBlur={field.onBlur}
-      error={fieldState.error ? (Number.isNaN(field.value) ? 'Give the limit as a number of dBm, such as 30' : fieldState.error.message) : undefined}
+      error={
+        fieldState.error
+          ? Number.isNaN(field.value)
+            ? 'Give the limit as a number of dBm, such as 30'
+            : fieldState.error.message
+          : undefined
+      }
     />
   );
 }

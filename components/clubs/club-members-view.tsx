@@ -27,7 +27,18 @@ export type ClubMembersViewProps = {
   onLeave: () => void;
 };
 
-export function ClubMembersView({ club, myUserId, invitations, roleError, busyUserId, onInvite, onUpdateClub, onSetRole, onRemove, onLeave }: ClubMembersViewProps) {
+export function ClubMembersView({
+  club,
+  myUserId,
+  invitations,
+  roleError,
+  busyUserId,
+  onInvite,
+  onUpdateClub,
+  onSetRole,
+  onRemove,
+  onLeave,
+}: ClubMembersViewProps) {
   const isAdmin = club.myRole === 'admin';
   const admins = club.members.filter((member) => member.role === 'admin').length;
   const lastAdmin = isAdmin && admins === 1;
@@ -37,7 +48,14 @@ export function ClubMembersView({ club, myUserId, invitations, roleError, busyUs
         {club.members.length} {club.members.length === 1 ? 'member' : 'members'} · power limit {club.maxPowerDbm} dBm
       </Text>
       {roleError ? <Notice message={roleError} /> : null}
-      <MemberList members={club.members} myUserId={myUserId} canManage={isAdmin} busyUserId={busyUserId} onSetRole={onSetRole} onRemove={onRemove} />
+      <MemberList
+        members={club.members}
+        myUserId={myUserId}
+        canManage={isAdmin}
+        busyUserId={busyUserId}
+        onSetRole={onSetRole}
+        onRemove={onRemove}
+      />
       {isAdmin ? (
         <Card style={styles.section}>
           <Text variant="heading" accessibilityRole="header">
@@ -61,7 +79,11 @@ export function ClubMembersView({ club, myUserId, invitations, roleError, busyUs
           <Text variant="heading" accessibilityRole="header">
             Club settings
           </Text>
-          <ClubForm initialValues={{ name: club.name, maxPowerDbm: club.maxPowerDbm }} submitLabel="Save club settings" onSubmit={onUpdateClub} />
+          <ClubForm
+            initialValues={{ name: club.name, maxPowerDbm: club.maxPowerDbm }}
+            submitLabel="Save club settings"
+            onSubmit={onUpdateClub}
+          />
         </Card>
       ) : null}
       <Card style={styles.section}>

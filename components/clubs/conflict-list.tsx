@@ -41,7 +41,8 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
                 {bandLabel(conflict.bandId)}
               </Text>
               <Text variant="caption" tone="muted">
-                {conflict.slotCount} shared {conflict.slotCount === 1 ? 'slot' : 'slots'} · first at {formatUtcDateTime(conflict.firstSlotUtc)}
+                {conflict.slotCount} shared {conflict.slotCount === 1 ? 'slot' : 'slots'} · first at{' '}
+                {formatUtcDateTime(conflict.firstSlotUtc)}
               </Text>
             </View>
             <Text variant="label">
@@ -66,9 +67,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
         <Text variant="heading" accessibilityRole="header">
           Offsets that would part them
         </Text>
-        <Text tone="muted">
-          Each owner gets a proposal by e-mail and in their notices. Nothing changes until they accept it.
-        </Text>
+        <Text tone="muted">Each owner gets a proposal by e-mail and in their notices. Nothing changes until they accept it.</Text>
         {data.proposals.length === 0 ? (
           <Text tone="muted">No new offset helps here: there are more stations than the 200 Hz window can hold apart.</Text>
         ) : null}
@@ -105,7 +104,8 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
         })}
         {data.unresolved.length ? (
           <Text variant="caption" tone="muted">
-            {data.unresolved.length} {data.unresolved.length === 1 ? 'station still meets' : 'stations still meet'} another after these moves.
+            {data.unresolved.length} {data.unresolved.length === 1 ? 'station still meets' : 'stations still meet'} another after these
+            moves.
           </Text>
         ) : null}
       </View>

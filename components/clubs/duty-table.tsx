@@ -19,7 +19,11 @@ export function DutyTable({ bands }: { bands: BandDuty[] }) {
         ))}
       </View>
       {bands.map((band) => (
-        <View key={band.bandId} style={[styles.row, { borderColor: colors.border }]} accessibilityLabel={`${bandLabel(band.bandId)}: ${band.transmissions} transmissions, ${band.minutesOnAir} minutes, ${band.dutyPercent} percent of slots`}>
+        <View
+          key={band.bandId}
+          style={[styles.row, { borderColor: colors.border }]}
+          accessibilityLabel={`${bandLabel(band.bandId)}: ${band.transmissions} transmissions, ${band.minutesOnAir} minutes, ${band.dutyPercent} percent of slots`}
+        >
           <Text variant="mono" style={styles.cell}>
             {bandLabel(band.bandId)}
           </Text>

@@ -51,5 +51,12 @@ export function FilterChips<T extends string>({ label, options, value, onChange 
 const styles = StyleSheet.create({
   group: { gap: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1, borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 6, minHeight: 34, justifyContent: 'center' },
+  chip: {
+    borderWidth: 1,
+    borderRadius: radius.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: 6,
+    minHeight: 34,
+    justifyContent: 'center',
+  },
 });

@@ -57,8 +57,8 @@ export function JoinPanel({ token, user, joined, onAccept, onOpenClub, onSkip, o
   return (
     <View style={styles.wrap}>
       <Text>
-        You are signed in as <Text variant="label">{user.displayName}</Text> ({user.email}). Accept to join the club that
-        invited you: its admins will see your stations and may propose offsets or stop a station that breaks the rules.
+        You are signed in as <Text variant="label">{user.displayName}</Text> ({user.email}). Accept to join the club that invited you: its
+        admins will see your stations and may propose offsets or stop a station that breaks the rules.
       </Text>
       {problem ? <Notice message={problem.message} /> : null}
       <View style={styles.actions}>
@@ -74,7 +74,8 @@ export function JoinPanel({ token, user, joined, onAccept, onOpenClub, onSkip, o
 
 /** The server's words for the token, turned into what to do next. */
 function explain(message: string): string {
-  if (/already used/i.test(message)) return 'This invitation has already been used. Ask the club admin for a new one if you still need to join.';
+  if (/already used/i.test(message))
+    return 'This invitation has already been used. Ask the club admin for a new one if you still need to join.';
   if (/expired/i.test(message)) return 'This invitation has expired (links work for 7 days). Ask the club admin to send a new one.';
   if (/not valid/i.test(message)) return 'This invitation link is not valid. Check that you opened the whole link from the e-mail.';
   return message;

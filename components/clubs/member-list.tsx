@@ -20,7 +20,9 @@ export type MemberListProps = {
 };
 
 export function MemberList({ members, myUserId, canManage, busyUserId, onSetRole, onRemove }: MemberListProps) {
-  const sorted = [...members].sort((a, b) => (a.role === b.role ? a.displayName.localeCompare(b.displayName) : a.role === 'admin' ? -1 : 1));
+  const sorted = [...members].sort((a, b) =>
+    a.role === b.role ? a.displayName.localeCompare(b.displayName) : a.role === 'admin' ? -1 : 1,
+  );
   return (
     <View style={styles.list}>
       {sorted.map((member) => {
@@ -48,7 +50,9 @@ export function MemberList({ members, myUserId, canManage, busyUserId, onSetRole
                 <Button
                   label={member.role === 'admin' ? 'Make member' : 'Make admin'}
                   variant="secondary"
-                  accessibilityLabel={member.role === 'admin' ? `Make ${member.displayName} a member` : `Make ${member.displayName} an admin`}
+                  accessibilityLabel={
+                    member.role === 'admin' ? `Make ${member.displayName} a member` : `Make ${member.displayName} an admin`
+                  }
                   busy={busyUserId === member.userId}
                   onPress={() => onSetRole(member, member.role === 'admin' ? 'member' : 'admin')}
                   style={styles.smallButton}

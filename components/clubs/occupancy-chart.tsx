@@ -61,12 +61,7 @@ export function OccupancyChart({ data, width }: OccupancyChartProps) {
         />
         <VictoryStack>
           {series.map((points, index) => (
-            <VictoryBar
-              key={bands[index]}
-              data={points}
-              barRatio={0.8}
-              style={{ data: { fill: palette[index % palette.length] } }}
-            />
+            <VictoryBar key={bands[index]} data={points} barRatio={0.8} style={{ data: { fill: palette[index % palette.length] } }} />
           ))}
         </VictoryStack>
       </VictoryChart>

@@ -39,7 +39,11 @@ export function ProposalList({ proposals, busy, error, onDecide }: ProposalListP
             {formatHz(proposal.currentOffsetHz)} → {formatHz(proposal.proposedOffsetHz)}
           </Text>
           <Text>{proposal.reason}</Text>
-          {error?.id === proposal.id ? <Text tone="danger" accessibilityRole="alert">{error.message}</Text> : null}
+          {error?.id === proposal.id ? (
+            <Text tone="danger" accessibilityRole="alert">
+              {error.message}
+            </Text>
+          ) : null}
           <View style={styles.actions}>
             <Button
               label="Accept"

@@ -76,8 +76,7 @@ export function useUpdateClubMutation(clubId: number) {
 export function useRemoveMemberMutation(clubId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ userId }: { userId: number; self: boolean }) =>
-      api<void>(`/clubs/${clubId}/members/${userId}`, { method: 'DELETE' }),
+    mutationFn: ({ userId }: { userId: number; self: boolean }) => api<void>(`/clubs/${clubId}/members/${userId}`, { method: 'DELETE' }),
     onSuccess: async (_data, { self }) => {
       if (self) {
         queryClient.removeQueries({ queryKey: [...clubKeys.all, clubId] });
@@ -113,8 +112,7 @@ export function useInvitationsQuery(clubId: number, enabled = true) {
 export function useInviteMutation(clubId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: { email: string }) =>
-      api<Invitation>(`/clubs/${clubId}/invitations`, { method: 'POST', body: input }),
+    mutationFn: (input: { email: string }) => api<Invitation>(`/clubs/${clubId}/invitations`, { method: 'POST', body: input }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.invitations(clubId) }),
   });
 }

@@ -63,7 +63,11 @@ export function ReviewTable({ rows, layout, stationHref, onSuspend, onLift }: Re
           onChange={setStatus}
           options={[
             { value: ALL, label: 'All', count: rows.length },
-            ...(['attention', 'suspended', 'off', 'ok'] as const).map((value) => ({ value, label: statusWords[value].filter, count: countOf(value) })),
+            ...(['attention', 'suspended', 'off', 'ok'] as const).map((value) => ({
+              value,
+              label: statusWords[value].filter,
+              count: countOf(value),
+            })),
           ]}
         />
         {bands.length ? (
@@ -172,9 +176,21 @@ function RowActions({ row, href, onSuspend, onLift }: RowActionsProps) {
         </Pressable>
       </Link>
       {row.suspension ? (
-        <Button label="Lift" variant="secondary" accessibilityLabel={`Lift the stop on ${row.stationName}`} onPress={() => onLift(row)} style={styles.smallButton} />
+        <Button
+          label="Lift"
+          variant="secondary"
+          accessibilityLabel={`Lift the stop on ${row.stationName}`}
+          onPress={() => onLift(row)}
+          style={styles.smallButton}
+        />
       ) : (
-        <Button label="Suspend" variant="ghost" accessibilityLabel={`Suspend ${row.stationName}`} onPress={() => onSuspend(row)} style={styles.smallButton} />
+        <Button
+          label="Suspend"
+          variant="ghost"
+          accessibilityLabel={`Suspend ${row.stationName}`}
+          onPress={() => onSuspend(row)}
+          style={styles.smallButton}
+        />
       )}
     </View>
   );

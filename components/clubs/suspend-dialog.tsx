@@ -50,12 +50,22 @@ export function SuspendDialog({ station, onConfirm, onCancel }: SuspendDialogPro
   const title = `Suspend ${station.name}?`;
   return (
     <View style={[StyleSheet.absoluteFill, styles.backdrop, { backgroundColor: colors.overlay }]}>
-      <Pressable style={StyleSheet.absoluteFill} accessibilityRole="button" accessibilityLabel="Close the dialog" onPress={busy ? undefined : onCancel} />
-      <View role="alertdialog" aria-modal aria-label={title} style={[styles.dialog, { backgroundColor: colors.surfaceRaised, borderColor: colors.border }]}>
+      <Pressable
+        style={StyleSheet.absoluteFill}
+        accessibilityRole="button"
+        accessibilityLabel="Close the dialog"
+        onPress={busy ? undefined : onCancel}
+      />
+      <View
+        role="alertdialog"
+        aria-modal
+        aria-label={title}
+        style={[styles.dialog, { backgroundColor: colors.surfaceRaised, borderColor: colors.border }]}
+      >
         <Text variant="heading">{title}</Text>
         <Text tone="muted">
-          The station stops sending: its plan empties and its device settings say it is suspended. {station.ownerName} gets an
-          e-mail with your reason. You can lift it again at any time.
+          The station stops sending: its plan empties and its device settings say it is suspended. {station.ownerName} gets an e-mail with
+          your reason. You can lift it again at any time.
         </Text>
         <FormTextField control={form.control} name="reason" label="Reason (the owner sees this)" multiline autoFocus />
         {rootError ? <Notice message={rootError} /> : null}

@@ -53,7 +53,11 @@ function FreshToken({ token, onHide }: { token: string; onHide: () => void }) {
         </Text>
       </View>
       <View style={styles.actions}>
-        <Button label={copied === 'yes' ? 'Copied' : 'Copy token'} accessibilityLabel="Copy token" onPress={async () => setCopied((await copyText(token)) ? 'yes' : 'no')} />
+        <Button
+          label={copied === 'yes' ? 'Copied' : 'Copy token'}
+          accessibilityLabel="Copy token"
+          onPress={async () => setCopied((await copyText(token)) ? 'yes' : 'no')}
+        />
         <Button label="I have stored it" variant="ghost" onPress={onHide} />
       </View>
       {copied === 'no' ? <Notice tone="info" message="This browser did not allow copying: select the token and copy it by hand." /> : null}
@@ -107,7 +111,13 @@ export function DeviceCredentials({
             </Text>
           ) : (
             <View style={styles.actions}>
-              <Button label="Replace token" accessibilityLabel="Rotate the device token" variant="secondary" busy={issuing} onPress={onRotate} />
+              <Button
+                label="Replace token"
+                accessibilityLabel="Rotate the device token"
+                variant="secondary"
+                busy={issuing}
+                onPress={onRotate}
+              />
               <Button label="Revoke token" accessibilityLabel="Revoke the device token" variant="danger" onPress={onRevoke} />
             </View>
           )}
@@ -119,8 +129,8 @@ export function DeviceCredentials({
           How a device talks to Faintline
         </Text>
         <Text>
-          Every request carries the header <Text variant="mono">Authorization: Bearer &lt;token&gt;</Text>. The configuration, with the plan of
-          transmissions, is at:
+          Every request carries the header <Text variant="mono">Authorization: Bearer &lt;token&gt;</Text>. The configuration, with the plan
+          of transmissions, is at:
         </Text>
         <Text variant="mono" selectable style={styles.url}>
           {deviceApiBase(origin)}/config

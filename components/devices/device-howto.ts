@@ -9,7 +9,8 @@ export function curlExamples(origin: string): { title: string; command: string }
   const auth = `-H "Authorization: Bearer $FAINTLINE_TOKEN"`;
   return [
     {
-      title: 'Fetch the configuration and plan (about 2 KB gzip-compressed, about ten times that plain; send If-None-Match with the last ETag to get a short 304)',
+      title:
+        'Fetch the configuration and plan (about 2 KB gzip-compressed, about ten times that plain; send If-None-Match with the last ETag to get a short 304)',
       command: `curl -i --compressed ${auth} \\\n  ${base}/config`,
     },
     {

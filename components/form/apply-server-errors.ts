@@ -6,10 +6,7 @@ import { ApiError } from '@/shared/api/client';
  * Puts a failed request's messages where the operator looks: a 400's `fields` beside their inputs,
  * everything else (and fields the form does not show) in the form-level message `errors.root.server`.
  */
-export function applyServerErrors<T extends FieldValues>(
-  form: Pick<UseFormReturn<T>, 'setError' | 'getValues'>,
-  error: unknown,
-) {
+export function applyServerErrors<T extends FieldValues>(form: Pick<UseFormReturn<T>, 'setError' | 'getValues'>, error: unknown) {
   if (!(error instanceof ApiError)) {
     form.setError('root.server', { type: 'server', message: 'Something went wrong. Please try again.' });
     return;

@@ -2,10 +2,7 @@ import { useController, type Control, type FieldValues, type Path } from 'react-
 
 import { TextField, type TextFieldProps } from '../ui/text-field';
 
-export type FormTextFieldProps<T extends FieldValues> = Omit<
-  TextFieldProps,
-  'value' | 'onChangeText' | 'error'
-> & {
+export type FormTextFieldProps<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'error'> & {
   control: Control<T>;
   name: Path<T>;
   /** Upper-case as the operator types (autoCapitalize does nothing on desktop web). */
@@ -13,13 +10,7 @@ export type FormTextFieldProps<T extends FieldValues> = Omit<
 };
 
 /** The one react-hook-form binding for text: value, change, blur and the field's error message. */
-export function FormTextField<T extends FieldValues>({
-  control,
-  name,
-  upperCase = false,
-  onBlur,
-  ...rest
-}: FormTextFieldProps<T>) {
+export function FormTextField<T extends FieldValues>({ control, name, upperCase = false, onBlur, ...rest }: FormTextFieldProps<T>) {
   const { field, fieldState } = useController({ control, name });
   return (
     <TextField

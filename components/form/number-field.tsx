@@ -20,7 +20,15 @@ const parse = (text: string) => (text.trim() === '' ? Number.NaN : Number(text.t
 const show = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? String(value) : '');
 
 /** A number input bound to react-hook-form: text in, a number (NaN while not one) out, so the schema stays z.number(). */
-export function NumberField<T extends FieldValues>({ control, name, label, hint, error, style, inputMode = 'decimal' }: NumberFieldProps<T>) {
+export function NumberField<T extends FieldValues>({
+  control,
+  name,
+  label,
+  hint,
+  error,
+  style,
+  inputMode = 'decimal',
+}: NumberFieldProps<T>) {
   const { field, fieldState } = useController({ control, name });
   const [text, setText] = useState(() => show(field.value));
   // follow changes made elsewhere (a preset, a reset) without fighting the operator's typing

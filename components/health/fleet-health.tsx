@@ -10,16 +10,7 @@ import { useAppTheme } from '../ui/theme-provider';
 import { AlertList } from './alert-list';
 import { HealthFigure } from './health-figure';
 import { LinkBadge } from './link-badge';
-import {
-  formatClockOffset,
-  formatDrift,
-  formatTemperature,
-  heardWords,
-  linkStateOf,
-  openAlerts,
-  recentWords,
-  utcTime,
-} from './words';
+import { formatClockOffset, formatDrift, formatTemperature, heardWords, linkStateOf, openAlerts, recentWords, utcTime } from './words';
 
 export type FleetHealthProps = {
   fleet: StationHealth[];
@@ -38,7 +29,13 @@ export function FleetHealth({ fleet, layout, onOpenStation, onOpenDevice, ownerO
   return (
     <View style={styles.cards}>
       {fleet.map((health) => (
-        <HealthCard key={health.stationId} health={health} onOpenStation={onOpenStation} onOpenDevice={onOpenDevice} owner={ownerOf?.(health.stationId)} />
+        <HealthCard
+          key={health.stationId}
+          health={health}
+          onOpenStation={onOpenStation}
+          onOpenDevice={onOpenDevice}
+          owner={ownerOf?.(health.stationId)}
+        />
       ))}
     </View>
   );
@@ -54,7 +51,15 @@ function StationLink({ health, onPress }: { health: StationHealth; onPress: () =
   );
 }
 
-function CreateToken({ health, onOpenDevice, short = false }: { health: StationHealth; onOpenDevice?: (id: number) => void; short?: boolean }) {
+function CreateToken({
+  health,
+  onOpenDevice,
+  short = false,
+}: {
+  health: StationHealth;
+  onOpenDevice?: (id: number) => void;
+  short?: boolean;
+}) {
   if (health.hasDevice || !onOpenDevice) return null;
   return (
     <Button

@@ -85,13 +85,7 @@ function SeriesChart({
       {points.length === 0 ? (
         <Text tone="muted">No readings in the last 24 hours.</Text>
       ) : (
-        <VictoryChart
-          width={width}
-          height={200}
-          padding={PAD}
-          domain={{ x: [fromMs, toMs], y: [low - margin, high + margin] }}
-          standalone
-        >
+        <VictoryChart width={width} height={200} padding={PAD} domain={{ x: [fromMs, toMs], y: [low - margin, high + margin] }} standalone>
           <VictoryAxis
             crossAxis={false}
             orientation="bottom"
@@ -145,7 +139,16 @@ export default function HealthCharts({ series, nowMs, width, clockLimitMs }: Hea
   }
   return (
     <View style={styles.wrap}>
-      <SeriesChart title="Clock offset" unit="ms" points={clock} fromMs={fromMs} toMs={nowMs} width={width} colour={colors.primary} limit={clockLimitMs} />
+      <SeriesChart
+        title="Clock offset"
+        unit="ms"
+        points={clock}
+        fromMs={fromMs}
+        toMs={nowMs}
+        width={width}
+        colour={colors.primary}
+        limit={clockLimitMs}
+      />
       <SeriesChart title="Temperature" unit="°C" points={temperature} fromMs={fromMs} toMs={nowMs} width={width} colour={colors.signal} />
     </View>
   );

@@ -17,7 +17,14 @@ export function LinkBadge({ state }: LinkBadgeProps) {
   }[state];
   return (
     <View style={[styles.pill, { backgroundColor: look.bg, borderColor: look.fg }]}>
-      <View style={[styles.dot, { backgroundColor: look.fg }, state === 'no-device' && styles.hollow, state === 'no-device' && { borderColor: look.fg }]} />
+      <View
+        style={[
+          styles.dot,
+          { backgroundColor: look.fg },
+          state === 'no-device' && styles.hollow,
+          state === 'no-device' && { borderColor: look.fg },
+        ]}
+      />
       <Text variant="label" style={{ color: look.fg }}>
         {linkStateWords[state]}
       </Text>

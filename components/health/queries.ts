@@ -48,8 +48,7 @@ export function useClubHealthQuery(clubId: number, { live = false }: { live?: bo
 export function useSaveAlertSettingsMutation(stationId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (settings: AlertSettings) =>
-      api<AlertSettings>(`/stations/${stationId}/alert-settings`, { method: 'PUT', body: settings }),
+    mutationFn: (settings: AlertSettings) => api<AlertSettings>(`/stations/${stationId}/alert-settings`, { method: 'PUT', body: settings }),
     onSuccess: (settings) => {
       queryClient.setQueryData<StationHealth>(healthKeys.station(stationId), (old) => (old ? { ...old, settings } : old));
       return queryClient.invalidateQueries({ queryKey: healthKeys.all });

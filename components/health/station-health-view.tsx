@@ -139,14 +139,19 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
           Alert thresholds
         </Text>
         <Text variant="caption" tone="muted">
-          The server checks every station once a minute; an alert opens once, is mailed once, and closes by itself when the cause goes
-          away.
+          The server checks every station once a minute; an alert opens once, is mailed once, and closes by itself when the cause goes away.
         </Text>
         <AlertSettingsForm settings={health.settings} onSubmit={onSaveSettings} readOnly={readOnly} />
       </Card>
 
       {health.hasDevice && onOpenDevice ? (
-        <Button label="Device token" accessibilityLabel="Manage the device token" variant="secondary" onPress={onOpenDevice} style={styles.deviceButton} />
+        <Button
+          label="Device token"
+          accessibilityLabel="Manage the device token"
+          variant="secondary"
+          onPress={onOpenDevice}
+          style={styles.deviceButton}
+        />
       ) : null}
     </>
   );

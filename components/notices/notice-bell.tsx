@@ -50,7 +50,14 @@ export function NoticeBell({ unread, variant }: NoticeBellProps) {
 
 const styles = StyleSheet.create({
   icon: { width: 40, height: 40, alignItems: 'center', justifyContent: 'center', borderRadius: radius.pill },
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.md, borderRadius: radius.md },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    paddingHorizontal: space.md,
+    paddingVertical: space.md,
+    borderRadius: radius.md,
+  },
   rowLabel: { flex: 1 },
   badge: { minWidth: 20, height: 20, borderRadius: 10, paddingHorizontal: 5, alignItems: 'center', justifyContent: 'center' },
   badgeOnIcon: { position: 'absolute', top: 2, right: 0 },

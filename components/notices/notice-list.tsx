@@ -34,10 +34,22 @@ export function NoticeList({ notices, onOpen, onMarkRead }: NoticeListProps) {
             <Text tone={unread ? 'default' : 'muted'}>{notice.message}</Text>
             <View style={styles.actions}>
               {notice.link ? (
-                <Button label="Open" variant="secondary" accessibilityLabel={`Open: ${notice.message}`} onPress={() => onOpen(notice)} style={styles.small} />
+                <Button
+                  label="Open"
+                  variant="secondary"
+                  accessibilityLabel={`Open: ${notice.message}`}
+                  onPress={() => onOpen(notice)}
+                  style={styles.small}
+                />
               ) : null}
               {unread ? (
-                <Button label="Mark as read" variant="ghost" accessibilityLabel={`Mark as read: ${notice.message}`} onPress={() => onMarkRead(notice)} style={styles.small} />
+                <Button
+                  label="Mark as read"
+                  variant="ghost"
+                  accessibilityLabel={`Mark as read: ${notice.message}`}
+                  onPress={() => onMarkRead(notice)}
+                  style={styles.small}
+                />
               ) : null}
             </View>
           </Card>

@@ -9,11 +9,7 @@ export type StationCountCardProps = { count: number | null; status: 'pending' | 
 export function StationCountCard({ count, status }: StationCountCardProps) {
   const figure = status === 'success' && count != null ? String(count) : status === 'error' ? '—' : '…';
   const caption =
-    status === 'error'
-      ? 'Your stations could not be loaded just now.'
-      : count === 1
-        ? 'station registered'
-        : 'stations registered';
+    status === 'error' ? 'Your stations could not be loaded just now.' : count === 1 ? 'station registered' : 'stations registered';
   return (
     <Card style={styles.card}>
       <View style={styles.row}>

@@ -29,7 +29,14 @@ export function AirtimeSummary({ plan, days }: AirtimeSummaryProps) {
   const rows = airtimeByDay(plan.transmissions as PlannedTransmission[]);
   const bands: BandId[] = byFrequency(rows.map((r) => r.bandId));
   const cell = (date: string, bandId: BandId) => rows.find((r) => r.dateUtc === date && r.bandId === bandId);
-  const duty = effectiveDuty({ ...plan, transmissions: plan.transmissions as PlannedTransmission[], messages: [], skippedSteps: [], warnings: [], quiet: [] });
+  const duty = effectiveDuty({
+    ...plan,
+    transmissions: plan.transmissions as PlannedTransmission[],
+    messages: [],
+    skippedSteps: [],
+    warnings: [],
+    quiet: [],
+  });
   return (
     <Card>
       <Text variant="heading" accessibilityRole="header">

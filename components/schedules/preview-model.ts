@@ -50,5 +50,9 @@ export function previewDraft(input: {
     fromMs: range.fromMs,
     toMs: range.toMs,
   });
-  return previewFromPlan(result, input.schedule.steps.map((s) => s.bandId), input.nowMs);
+  return previewFromPlan(
+    result,
+    input.schedule.steps.map((s) => s.bandId),
+    input.nowMs,
+  );
 }

@@ -48,9 +48,7 @@ export function usePlanQuery(stationId: number, range: { fromIso: string; toIso:
   return useQuery({
     queryKey: scheduleKeys.plan(stationId, range.fromIso, range.toIso),
     queryFn: () =>
-      api<ServerPlan>(
-        `/stations/${stationId}/plan?from=${encodeURIComponent(range.fromIso)}&to=${encodeURIComponent(range.toIso)}`,
-      ),
+      api<ServerPlan>(`/stations/${stationId}/plan?from=${encodeURIComponent(range.fromIso)}&to=${encodeURIComponent(range.toIso)}`),
     enabled: enabled && validId(stationId),
     staleTime: staleTime.short,
     placeholderData: keepPreviousData,
@@ -83,8 +81,7 @@ export function useSaveScheduleMutation(stationId: number, exists: boolean) {
 export function usePatchScheduleMutation(stationId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (patch: SchedulePatch) =>
-      api<Schedule>(`/stations/${stationId}/schedule`, { method: 'PATCH', body: patch }),
+    mutationFn: (patch: SchedulePatch) => api<Schedule>(`/stations/${stationId}/schedule`, { method: 'PATCH', body: patch }),
     onSuccess: (saved) => {
       queryClient.setQueryData(scheduleKeys.detail(stationId), saved);
       return queryClient.invalidateQueries({ queryKey: scheduleKeys.plans(stationId) });

@@ -174,9 +174,7 @@ export function ScheduleEditor({
         style={styles.addButton}
       />
       {!firstUsable ? (
-        <Text tone="danger">
-          No band of this station is enabled with a fitting filter, so no step can transmit. Enable a band first.
-        </Text>
+        <Text tone="danger">No band of this station is enabled with a fitting filter, so no step can transmit. Enable a band first.</Text>
       ) : null}
       <CadenceFields form={form} />
       <Card>
@@ -187,7 +185,13 @@ export function ScheduleEditor({
           Moves the audio offset from one transmission to the next, so two stations on the same offset do not meet every time.
         </Text>
         <View style={styles.fields}>
-          <NumberField control={form.control} name="stagger.stepHz" label="Step (Hz)" hint="0 to 20 Hz per transmission" style={styles.field} />
+          <NumberField
+            control={form.control}
+            name="stagger.stepHz"
+            label="Step (Hz)"
+            hint="0 to 20 Hz per transmission"
+            style={styles.field}
+          />
           <NumberField control={form.control} name="stagger.spanHz" label="Span (Hz)" hint="0 to 100 Hz in all" style={styles.field} />
         </View>
       </Card>
@@ -199,14 +203,20 @@ export function ScheduleEditor({
     <View style={styles.checks}>
       {formMessage ? <Notice message={formMessage} /> : null}
       {general.map((issue) => (
-        <Text key={issue.message} variant="label" tone={issue.level === 'block' ? 'danger' : 'signal'} accessibilityRole={issue.level === 'block' ? 'alert' : undefined}>
+        <Text
+          key={issue.message}
+          variant="label"
+          tone={issue.level === 'block' ? 'danger' : 'signal'}
+          accessibilityRole={issue.level === 'block' ? 'alert' : undefined}
+        >
           {issue.level === 'block' ? 'Blocked: ' : 'Note: '}
           {issue.message}
         </Text>
       ))}
       {blocks.length ? (
         <Text variant="caption" tone="muted">
-          {blocks.length === 1 ? 'One problem stops' : `${blocks.length} problems stop`} this schedule from being saved: fix what is marked in red.
+          {blocks.length === 1 ? 'One problem stops' : `${blocks.length} problems stop`} this schedule from being saved: fix what is marked
+          in red.
         </Text>
       ) : null}
       <View style={styles.actions}>
@@ -264,7 +274,12 @@ function CadenceFields({ form }: { form: FormApi }) {
         }}
       />
       {value.kind === 'every-nth' ? (
-        <NumberField control={form.control} name={'cadence.nth' as Path<ScheduleValues>} label="n (every nth slot)" hint="2 to 30; 5 is one slot in five" />
+        <NumberField
+          control={form.control}
+          name={'cadence.nth' as Path<ScheduleValues>}
+          label="n (every nth slot)"
+          hint="2 to 30; 5 is one slot in five"
+        />
       ) : value.kind === 'duty' ? (
         <NumberField
           control={form.control}

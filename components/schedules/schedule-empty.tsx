@@ -47,7 +47,9 @@ export function ScheduleEmpty({ station, readOnly, nowMs, onBuild }: ScheduleEmp
           )
         }
       />
-      {presets.length ? <PresetPicker presets={presets} title="Or start from one of our presets" onPick={(o) => onBuild(o.preset.id)} /> : null}
+      {presets.length ? (
+        <PresetPicker presets={presets} title="Or start from one of our presets" onPick={(o) => onBuild(o.preset.id)} />
+      ) : null}
     </View>
   );
 }

@@ -27,7 +27,12 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
   const state = station.suspension ? 'suspended' : schedule.paused ? 'paused' : 'running';
   const look = {
     running: { bg: colors.primarySoft, border: colors.primary, title: 'Running', text: 'The rotation goes on the air as planned below.' },
-    paused: { bg: colors.signalSoft, border: colors.signal, title: 'Paused', text: 'Nothing goes on the air until you resume the schedule.' },
+    paused: {
+      bg: colors.signalSoft,
+      border: colors.signal,
+      title: 'Paused',
+      text: 'Nothing goes on the air until you resume the schedule.',
+    },
     suspended: {
       bg: colors.dangerSoft,
       border: colors.danger,
@@ -59,7 +64,11 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
 
       <View accessibilityRole="list" style={styles.steps}>
         {schedule.steps.map((step, i) => (
-          <View key={i} style={[styles.step, { borderColor: colors.border }]} accessibilityLabel={`Step ${i + 1}: ${bandName(step.bandId)}, ${step.slots} slots, ${hoursLabel(step.activeHoursUtc)}`}>
+          <View
+            key={i}
+            style={[styles.step, { borderColor: colors.border }]}
+            accessibilityLabel={`Step ${i + 1}: ${bandName(step.bandId)}, ${step.slots} slots, ${hoursLabel(step.activeHoursUtc)}`}
+          >
             <Text variant="mono" tone="primary" style={styles.stepNo}>
               {i + 1}
             </Text>
@@ -74,8 +83,10 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
       </View>
       <Text variant="caption" tone="muted">
         Transmits in {cadenceLabel(schedule.cadence)}
-        {schedule.stagger.stepHz > 0 ? `, offset moving ${schedule.stagger.stepHz} Hz a time within ${schedule.stagger.spanHz} Hz` : ', offset fixed'} · from{' '}
-        {schedule.startDate}
+        {schedule.stagger.stepHz > 0
+          ? `, offset moving ${schedule.stagger.stepHz} Hz a time within ${schedule.stagger.spanHz} Hz`
+          : ', offset fixed'}{' '}
+        · from {schedule.startDate}
         {schedule.endDate ? ` to ${schedule.endDate}` : ''} (UTC days)
       </Text>
 
@@ -86,12 +97,8 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
       ) : null}
       {onEdit || onPause || onResume || onDelete ? (
         <View style={styles.actions}>
-          {schedule.paused && onResume ? (
-            <Button label="Resume schedule" onPress={onResume} busy={busy} />
-          ) : null}
-          {!schedule.paused && onPause ? (
-            <Button label="Pause schedule" variant="secondary" onPress={onPause} busy={busy} />
-          ) : null}
+          {schedule.paused && onResume ? <Button label="Resume schedule" onPress={onResume} busy={busy} /> : null}
+          {!schedule.paused && onPause ? <Button label="Pause schedule" variant="secondary" onPress={onPause} busy={busy} /> : null}
           {onEdit ? <Button label="Edit schedule" variant="secondary" onPress={onEdit} /> : null}
           {onDelete ? <Button label="Delete schedule" variant="ghost" onPress={onDelete} /> : null}
         </View>

@@ -18,8 +18,7 @@ export function ScheduleTimeline({ model, title = 'Next 24 hours (UTC)', note }:
   const { colors } = useAppTheme();
   const [width, setWidth] = useState(0);
   const total = model.marks.length;
-  const summary =
-    model.lanes.map((lane) => `${lane.label.replace('\u00a0', ' ')}: ${lane.transmissions}`).join(', ') || 'no bands';
+  const summary = model.lanes.map((lane) => `${lane.label.replace('\u00a0', ' ')}: ${lane.transmissions}`).join(', ') || 'no bands';
   return (
     <Card>
       <View style={styles.head}>

@@ -37,7 +37,18 @@ export type StepCardProps = {
 const NIGHT = { fromHour: 19, toHour: 7 };
 
 /** One step of the rotation: its band, how many slots it holds, and optional active hours in UTC. */
-export function StepCard({ control, index, count, choices, issues, serverError, bandsHref, onMoveUp, onMoveDown, onRemove }: StepCardProps) {
+export function StepCard({
+  control,
+  index,
+  count,
+  choices,
+  issues,
+  serverError,
+  bandsHref,
+  onMoveUp,
+  onMoveDown,
+  onRemove,
+}: StepCardProps) {
   const { colors } = useAppTheme();
   const n = index + 1;
   const band = useController({ control, name: `steps.${index}.bandId` });
@@ -53,7 +64,11 @@ export function StepCard({ control, index, count, choices, issues, serverError, 
   const activeHours = watched?.activeHoursUtc ?? (hours.field.value as ScheduleValues['steps'][number]['activeHoursUtc']);
   return (
     <Card style={blocks.length || serverError ? [styles.blocked, { borderColor: colors.danger }] : undefined}>
-      <View style={styles.head} accessibilityRole="header" accessibilityLabel={`Step ${n}: ${bandName(bandId)}, ${hoursLabel(activeHours)}`}>
+      <View
+        style={styles.head}
+        accessibilityRole="header"
+        accessibilityLabel={`Step ${n}: ${bandName(bandId)}, ${hoursLabel(activeHours)}`}
+      >
         <View style={styles.title}>
           <Text variant="caption" tone="muted">
             Step {n} of {count}
@@ -63,8 +78,22 @@ export function StepCard({ control, index, count, choices, issues, serverError, 
           </Text>
         </View>
         <View style={styles.actions}>
-          <Button label="Up" variant="ghost" accessibilityLabel={`Move step ${n} up`} onPress={onMoveUp} disabled={index === 0} style={styles.small} />
-          <Button label="Down" variant="ghost" accessibilityLabel={`Move step ${n} down`} onPress={onMoveDown} disabled={index === count - 1} style={styles.small} />
+          <Button
+            label="Up"
+            variant="ghost"
+            accessibilityLabel={`Move step ${n} up`}
+            onPress={onMoveUp}
+            disabled={index === 0}
+            style={styles.small}
+          />
+          <Button
+            label="Down"
+            variant="ghost"
+            accessibilityLabel={`Move step ${n} down`}
+            onPress={onMoveDown}
+            disabled={index === count - 1}
+            style={styles.small}
+          />
           <Button label="Remove" variant="ghost" accessibilityLabel={`Remove step ${n}`} onPress={onRemove} style={styles.small} />
         </View>
       </View>
@@ -118,11 +147,17 @@ export function StepCard({ control, index, count, choices, issues, serverError, 
           { value: 'all', label: 'All day', accessibilityLabel: `Step ${n} runs all day` },
           { value: 'hours', label: 'Only certain hours (UTC)', accessibilityLabel: `Step ${n} runs only at certain hours` },
         ]}
-        onPress={(option) => hours.field.onChange(option.value === 'all' ? null : activeHours ?? NIGHT)}
+        onPress={(option) => hours.field.onChange(option.value === 'all' ? null : (activeHours ?? NIGHT))}
       />
       {activeHours ? (
         <View style={styles.fields}>
-          <NumberField control={control} name={`steps.${index}.activeHoursUtc.fromHour`} label="From hour (UTC)" hint="0 to 23" style={styles.field} />
+          <NumberField
+            control={control}
+            name={`steps.${index}.activeHoursUtc.fromHour`}
+            label="From hour (UTC)"
+            hint="0 to 23"
+            style={styles.field}
+          />
           <NumberField
             control={control}
             name={`steps.${index}.activeHoursUtc.toHour`}

@@ -40,12 +40,7 @@ export default function TimelineChart({ model, width }: TimelineChartProps) {
       domain={{ x: [model.fromMs, model.toMs], y: [0.5, Math.max(1, lanes) + 0.5] }}
       standalone
     >
-      <VictoryAxis
-        tickValues={ticks}
-        tickFormat={(t: number) => model.hourLabel(t)}
-        label="UTC"
-        style={timeAxisStyleOf(colors)}
-      />
+      <VictoryAxis tickValues={ticks} tickFormat={(t: number) => model.hourLabel(t)} label="UTC" style={timeAxisStyleOf(colors)} />
       <VictoryAxis
         dependentAxis
         tickValues={model.lanes.map((_, i) => i + 1)}

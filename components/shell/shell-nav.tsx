@@ -32,9 +32,7 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
   const { colors } = useAppTheme();
   const insets = useSafeAreaInsets();
   const rail = variant === 'rail';
-  const items = state.routes
-    .map((route, index) => ({ route, index, tab: shellTabs[route.name] }))
-    .filter((item) => item.tab);
+  const items = state.routes.map((route, index) => ({ route, index, tab: shellTabs[route.name] })).filter((item) => item.tab);
 
   const buttons = items.map(({ route, index, tab }) => {
     const focused = state.index === index;
@@ -85,7 +83,12 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
       accessibilityRole="tablist"
       style={[
         styles.bar,
-        { backgroundColor: colors.surface, borderColor: colors.border, height: layout.tabBarHeight + insets.bottom, paddingBottom: insets.bottom },
+        {
+          backgroundColor: colors.surface,
+          borderColor: colors.border,
+          height: layout.tabBarHeight + insets.bottom,
+          paddingBottom: insets.bottom,
+        },
       ]}
     >
       {buttons}
@@ -98,9 +101,7 @@ export function ShellHeader({ now, accessory }: { now?: () => number; accessory?
   const { colors } = useAppTheme();
   const insets = useSafeAreaInsets();
   return (
-    <View
-      style={[styles.header, { backgroundColor: colors.surface, borderColor: colors.border, paddingTop: insets.top + space.sm }]}
-    >
+    <View style={[styles.header, { backgroundColor: colors.surface, borderColor: colors.border, paddingTop: insets.top + space.sm }]}>
       <Wordmark />
       <View style={styles.headerEnd}>
         <UtcClock variant="strip" now={now} />

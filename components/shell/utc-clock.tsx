@@ -24,16 +24,16 @@ export function UtcClock({ now = Date.now, variant = 'strip' }: UtcClockProps) {
     <View
       accessibilityRole="timer"
       accessibilityLabel={`Time ${reading.utc}, next slot in ${reading.countdown}`}
-      style={[
-        panel ? styles.panel : styles.strip,
-        panel && { backgroundColor: colors.surfaceRaised, borderColor: colors.border },
-      ]}
+      style={[panel ? styles.panel : styles.strip, panel && { backgroundColor: colors.surfaceRaised, borderColor: colors.border }]}
     >
       <Text variant={panel ? 'monoLarge' : 'mono'} style={styles.time} accessibilityElementsHidden>
         {reading.utc}
       </Text>
       <Text variant="caption" tone="signal" style={styles.countdown}>
-        next slot in <Text variant="caption" style={[styles.mono, { color: colors.signal }]}>{reading.countdown}</Text>
+        next slot in{' '}
+        <Text variant="caption" style={[styles.mono, { color: colors.signal }]}>
+          {reading.countdown}
+        </Text>
       </Text>
       {panel ? (
         <View style={[styles.track, { backgroundColor: colors.border }]}>

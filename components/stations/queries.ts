@@ -60,8 +60,7 @@ export function useCreateStationMutation() {
 export function useUpdateStationMutation(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (patch: StationPatch) =>
-      api<Station>(`/stations/${id}`, { method: 'PATCH', body: patch }),
+    mutationFn: (patch: StationPatch) => api<Station>(`/stations/${id}`, { method: 'PATCH', body: patch }),
     onSuccess: (updated) => {
       queryClient.setQueryData(stationKeys.detail(id), updated);
       return invalidateStationLists(queryClient);

@@ -58,12 +58,7 @@ export function StationForm({ defaultValues, submitLabel = 'Save station', onSub
   return (
     <View style={styles.form}>
       {message ? <Notice message={message} /> : null}
-      <FormTextField
-        control={form.control}
-        name="name"
-        label="Name"
-        hint="Your own name for it, such as “Loft beacon”."
-      />
+      <FormTextField control={form.control} name="name" label="Name" hint="Your own name for it, such as “Loft beacon”." />
       <FormTextField
         control={form.control}
         name="callsign"

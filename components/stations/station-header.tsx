@@ -27,12 +27,8 @@ export function StationHeader({ station, onEdit, onDelete }: StationHeaderProps)
       </View>
       {onEdit || onDelete ? (
         <View style={styles.actions}>
-          {onEdit ? (
-            <Button label="Edit" variant="secondary" accessibilityLabel={`Edit ${station.name}`} onPress={onEdit} />
-          ) : null}
-          {onDelete ? (
-            <Button label="Delete" variant="danger" accessibilityLabel={`Delete ${station.name}`} onPress={onDelete} />
-          ) : null}
+          {onEdit ? <Button label="Edit" variant="secondary" accessibilityLabel={`Edit ${station.name}`} onPress={onEdit} /> : null}
+          {onDelete ? <Button label="Delete" variant="danger" accessibilityLabel={`Delete ${station.name}`} onPress={onDelete} /> : null}
         </View>
       ) : null}
     </View>

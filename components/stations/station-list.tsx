@@ -87,10 +87,7 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
     { key: 'updated', label: 'Updated (UTC)', style: styles.colUpdated },
   ];
   return (
-    <View
-      accessibilityRole="list"
-      style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}
-    >
+    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
         {header.map((column) => (
           <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
@@ -99,13 +96,7 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
         ))}
       </View>
       {stations.map((station, index) => (
-        <StationRow
-          key={station.id}
-          station={station}
-          href={hrefFor(station)}
-          showOwner={showOwner}
-          last={index === stations.length - 1}
-        />
+        <StationRow key={station.id} station={station} href={hrefFor(station)} showOwner={showOwner} last={index === stations.length - 1} />
       ))}
     </View>
   );

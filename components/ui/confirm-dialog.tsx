@@ -69,12 +69,7 @@ export function ConfirmDialog({
         ) : null}
         <View style={styles.actions}>
           <Button label={cancelLabel} variant="ghost" onPress={onCancel} disabled={busy} />
-          <Button
-            label={confirmLabel}
-            variant={destructive ? 'danger' : 'primary'}
-            onPress={onConfirm}
-            busy={busy}
-          />
+          <Button label={confirmLabel} variant={destructive ? 'danger' : 'primary'} onPress={onConfirm} busy={busy} />
         </View>
       </View>
     </View>

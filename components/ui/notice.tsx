@@ -15,11 +15,7 @@ export function Notice({ message, tone = 'error' }: NoticeProps) {
     success: { backgroundColor: colors.primarySoft, borderColor: colors.primary },
   }[tone];
   return (
-    <View
-      style={[styles.box, look]}
-      accessibilityRole={tone === 'error' ? 'alert' : undefined}
-      accessibilityLiveRegion="polite"
-    >
+    <View style={[styles.box, look]} accessibilityRole={tone === 'error' ? 'alert' : undefined} accessibilityLiveRegion="polite">
       <Text variant="label">{message}</Text>
     </View>
   );

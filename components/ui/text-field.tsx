@@ -1,12 +1,5 @@
 import { forwardRef, useState } from 'react';
-import {
-  StyleSheet,
-  TextInput,
-  View,
-  type StyleProp,
-  type TextInputProps,
-  type ViewStyle,
-} from 'react-native';
+import { StyleSheet, TextInput, View, type StyleProp, type TextInputProps, type ViewStyle } from 'react-native';
 
 import { Text } from './text';
 import { fonts, radius, space } from './theme';

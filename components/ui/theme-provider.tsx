@@ -18,9 +18,7 @@ export type AppThemeProviderProps = { children: ReactNode; initialPreference?: T
 /** Follows the system scheme unless the operator picked one in Settings (kept in localStorage on web). */
 export function AppThemeProvider({ children, initialPreference }: AppThemeProviderProps) {
   const system = useColorScheme();
-  const [preference, setPreferenceState] = useState<ThemePreference>(
-    () => initialPreference ?? readThemePreference(),
-  );
+  const [preference, setPreferenceState] = useState<ThemePreference>(() => initialPreference ?? readThemePreference());
   const setPreference = useCallback((next: ThemePreference) => {
     writeThemePreference(next);
     setPreferenceState(next);
@@ -32,10 +30,7 @@ export function AppThemeProvider({ children, initialPreference }: AppThemeProvid
     document.documentElement.style.colorScheme = scheme;
     document.body.style.backgroundColor = palettes[scheme].background;
   }, [scheme]);
-  const value = useMemo(
-    () => ({ scheme, colors: palettes[scheme], preference, setPreference }),
-    [scheme, preference, setPreference],
-  );
+  const value = useMemo(() => ({ scheme, colors: palettes[scheme], preference, setPreference }), [scheme, preference, setPreference]);
   return <ThemeContext.Provider value={value}>{children}</ThemeContext.Provider>;
 }
 

@@ -16,8 +16,7 @@ export function apiUpload<T>(path: string, body: FormData, onProgress?: (progres
     request.upload.onprogress = (event) => {
       if (event.lengthComputable) onProgress?.({ sentBytes: event.loaded, totalBytes: event.total });
     };
-    request.onerror = () =>
-      reject(new ApiError(0, 'network', 'Faintline cannot reach its server. Check your connection and try again.'));
+    request.onerror = () => reject(new ApiError(0, 'network', 'Faintline cannot reach its server. Check your connection and try again.'));
     request.onload = () => {
       let data: unknown;
       try {
@@ -28,7 +27,11 @@ export function apiUpload<T>(path: string, body: FormData, onProgress?: (progres
       if (request.status >= 200 && request.status < 300) return resolve(data as T);
       const error = (data as ApiErrorBody | undefined)?.error;
       const fallback =
-        request.status === 413 ? 'That photo is too large.' : request.status === 415 ? 'That file type cannot be used.' : `The server answered ${request.status}`;
+        request.status === 413
+          ? 'That photo is too large.'
+          : request.status === 415
+            ? 'That file type cannot be used.'
+            : `The server answered ${request.status}`;
       reject(
         new ApiError(
           request.status,

@@ -109,7 +109,13 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
 
       <FormSection title="Identity" description="How you and your club tell this board apart.">
         <FormTextField control={control} name="name" label="Unit name" hint="Your own name for it, such as “Loft board”." />
-        <FormTextField control={control} name="serialLabel" label="Serial or label" hint="Optional: what is written on the board or its box." mono />
+        <FormTextField
+          control={control}
+          name="serialLabel"
+          label="Serial or label"
+          hint="Optional: what is written on the board or its box."
+          mono
+        />
       </FormSection>
 
       <FormSection title="Controller and time source" description="What runs the beacon and how it knows the UTC time.">
@@ -165,8 +171,20 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
 
       <FormSection title="Output level" description="Power out of the generator and anything that lowers it before the amplifier.">
         <View style={styles.pair}>
-          <FormNumberField control={control} name="generatorLevelDbm" label="Generator output (dBm)" hint="e.g. 10 dBm = 10 mW." style={styles.pairItem} />
-          <FormNumberField control={control} name="attenuatorDb" label="Attenuator (dB)" hint="0 if none is fitted." style={styles.pairItem} />
+          <FormNumberField
+            control={control}
+            name="generatorLevelDbm"
+            label="Generator output (dBm)"
+            hint="e.g. 10 dBm = 10 mW."
+            style={styles.pairItem}
+          />
+          <FormNumberField
+            control={control}
+            name="attenuatorDb"
+            label="Attenuator (dB)"
+            hint="0 if none is fitted."
+            style={styles.pairItem}
+          />
         </View>
       </FormSection>
 
@@ -197,18 +215,11 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
         title="Low-pass filters"
         description="Every band you transmit on needs its own filter; Faintline will not enable a band no filter covers."
       >
-        {filters.fields.length === 0 ? (
-          <Text tone="muted">No filters yet. Add one for each band you will use.</Text>
-        ) : null}
+        {filters.fields.length === 0 ? <Text tone="muted">No filters yet. Add one for each band you will use.</Text> : null}
         {filters.fields.map((field, index) => (
           <FilterRow key={field.id} control={control} index={index} onRemove={() => filters.remove(index)} />
         ))}
-        <Button
-          label="Add a filter"
-          variant="secondary"
-          onPress={() => filters.append({ ...newFilter, bands: [] })}
-          style={styles.start}
-        />
+        <Button label="Add a filter" variant="secondary" onPress={() => filters.append({ ...newFilter, bands: [] })} style={styles.start} />
       </FormSection>
 
       <FormSection title="Antenna">
@@ -258,7 +269,13 @@ function FilterRow({ control, index, onRemove }: { control: Control<UnitFields>;
         chipLabel={(option) => `Filter ${number} type ${option.label}`}
       />
       <View style={styles.pair}>
-        <FormNumberField control={control} name={`filters.${index}.order`} label={`Filter ${number} order`} hint="Number of poles, e.g. 5." style={styles.pairItem} />
+        <FormNumberField
+          control={control}
+          name={`filters.${index}.order`}
+          label={`Filter ${number} order`}
+          hint="Number of poles, e.g. 5."
+          style={styles.pairItem}
+        />
         <FormNumberField
           control={control}
           name={`filters.${index}.cutoffHz`}

@@ -60,7 +60,12 @@ export function UnitPhotos({ unitName, photos, readOnly, progress, uploading, er
         ))}
       </View>
       {uploading ? (
-        <View style={styles.progress} accessibilityRole="progressbar" accessibilityLabel="Uploading the photo" accessibilityValue={{ now: percent ?? 0, min: 0, max: 100 }}>
+        <View
+          style={styles.progress}
+          accessibilityRole="progressbar"
+          accessibilityLabel="Uploading the photo"
+          accessibilityValue={{ now: percent ?? 0, min: 0, max: 100 }}
+        >
           <Text variant="label">
             Uploading the photo…{percent === null ? '' : ` ${percent} %`}
             {progress ? ` (${kb(progress.sentBytes)} of ${kb(progress.totalBytes)})` : ''}

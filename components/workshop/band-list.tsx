@@ -40,7 +40,10 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
     <View style={styles.list}>
       {!unit ? <Notice message={NO_UNIT} /> : null}
       {unit && usable.length === 0 ? (
-        <Notice tone="info" message="No filter on this unit covers a band of this licence region. Add the right low-pass filter to the unit first." />
+        <Notice
+          tone="info"
+          message="No filter on this unit covers a band of this licence region. Add the right low-pass filter to the unit first."
+        />
       ) : null}
       {usable.map(({ band, setting, enabled, blocked }) => {
         const air = unit && enabled ? bandOnAir(station, unit, band.id) : null;
@@ -108,9 +111,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
           <Text variant="heading" accessibilityRole="header">
             {unit ? 'Bands no filter covers' : 'Bands'}
           </Text>
-          {unit ? (
-            <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text>
-          ) : null}
+          {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
           {closed.map(({ band, blocked }) => (
             <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>
               <Toggle

@@ -110,15 +110,14 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
     }
   };
 
-  if (!firstBand)
-    return <Notice tone="info" message="Enable a band first: a measurement is made on a band the beacon transmits on." />;
+  if (!firstBand) return <Notice tone="info" message="Enable a band first: a measurement is made on a band the beacon transmits on." />;
 
   const message = serverMessage(form.formState.errors);
   return (
     <View style={styles.wrap}>
       <Text tone="muted">
-        Let the beacon send a steady carrier, or one transmission, on a band. Read on a receiver you trust what frequency it really
-        heard. Faintline works out the reference crystal’s error from that one reading and proposes an offset for every enabled band.
+        Let the beacon send a steady carrier, or one transmission, on a band. Read on a receiver you trust what frequency it really heard.
+        Faintline works out the reference crystal’s error from that one reading and proposes an offset for every enabled band.
       </Text>
       {message ? <Notice message={message} /> : null}
       <ChoiceChips

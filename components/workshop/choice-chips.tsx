@@ -105,6 +105,13 @@ function Chips<T extends string | number>({
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1.5, borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 6, minHeight: 36, justifyContent: 'center' },
+  chip: {
+    borderWidth: 1.5,
+    borderRadius: radius.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: 6,
+    minHeight: 36,
+    justifyContent: 'center',
+  },
   disabled: { opacity: 0.45 },
 });

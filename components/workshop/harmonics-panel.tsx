@@ -28,7 +28,8 @@ export function HarmonicsPanel({ harmonics, bandName }: HarmonicsPanelProps) {
           styles.verdict,
           {
             borderColor: verdict.tone === 'primary' ? colors.primary : verdict.tone === 'danger' ? colors.danger : colors.signal,
-            backgroundColor: verdict.tone === 'primary' ? colors.primarySoft : verdict.tone === 'danger' ? colors.dangerSoft : colors.signalSoft,
+            backgroundColor:
+              verdict.tone === 'primary' ? colors.primarySoft : verdict.tone === 'danger' ? colors.dangerSoft : colors.signalSoft,
           },
         ]}
         accessibilityRole={harmonics.pass === true ? undefined : 'alert'}
@@ -67,23 +68,19 @@ export function HarmonicsPanel({ harmonics, bandName }: HarmonicsPanelProps) {
             <Text variant="mono" style={[styles.cell, cells[4]]}>
               {h.rawDbc === null ? '' : db(h.resultDbc, '')}
             </Text>
-            <Text
-              variant="label"
-              tone={h.pass === false ? 'danger' : h.pass === null ? 'signal' : 'primary'}
-              style={cells[5]}
-            >
+            <Text variant="label" tone={h.pass === false ? 'danger' : h.pass === null ? 'signal' : 'primary'} style={cells[5]}>
               {h.rawDbc === null ? '—' : h.pass === false ? 'Fail' : h.pass === null ? 'Unknown' : 'Pass'}
             </Text>
           </View>
         ))}
       </View>
       <Text variant="caption" tone="muted">
-        Raw levels are those of the generator’s square-wave output (even harmonics vanish at 50 % duty); filter attenuation is modelled from the
-        filter’s type, order and cut-off. The limit applies to every harmonic: {formatValue(-limit.limitDb, 1, 'dBc')} or lower.
+        Raw levels are those of the generator’s square-wave output (even harmonics vanish at 50 % duty); filter attenuation is modelled from
+        the filter’s type, order and cut-off. The limit applies to every harmonic: {formatValue(-limit.limitDb, 1, 'dBc')} or lower.
       </Text>
       <Text variant="caption">
-        Rules differ by country, and your local licence conditions always win over these defaults. Check the result with a spectrum
-        analyser when you can.
+        Rules differ by country, and your local licence conditions always win over these defaults. Check the result with a spectrum analyser
+        when you can.
       </Text>
     </View>
   );

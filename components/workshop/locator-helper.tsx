@@ -31,7 +31,8 @@ export function LocatorHelper({ onLocator }: LocatorHelperProps) {
 
   const locate = () => {
     const geo = Platform.OS === 'web' && typeof navigator !== 'undefined' ? navigator.geolocation : undefined;
-    if (!geo) return setMessage({ tone: 'danger', text: 'This browser cannot tell its location: type the latitude and longitude instead.' });
+    if (!geo)
+      return setMessage({ tone: 'danger', text: 'This browser cannot tell its location: type the latitude and longitude instead.' });
     setLocating(true);
     setMessage(null);
     geo.getCurrentPosition(
@@ -66,7 +67,11 @@ export function LocatorHelper({ onLocator }: LocatorHelperProps) {
         <TextField label="Longitude (°)" value={lon} onChangeText={setLon} inputMode="decimal" mono style={styles.item} />
       </View>
       <View style={styles.actions}>
-        <Button label="Fill the locator" variant="secondary" onPress={() => fill(parseNumberText(lat), parseNumberText(lon), 'from the coordinates')} />
+        <Button
+          label="Fill the locator"
+          variant="secondary"
+          onPress={() => fill(parseNumberText(lat), parseNumberText(lon), 'from the coordinates')}
+        />
         <Button label="Use my location" variant="ghost" busy={locating} onPress={locate} />
       </View>
       {message ? (

@@ -52,7 +52,10 @@ export function OnAirView({ station, unit, bandId, bandIds, onBand }: OnAirViewP
           <FormSection title="Messages" description={`Callsign ${station.callsign}, locator ${station.locator}.`}>
             <MessagePlan plan={stationMessages(station, unit)} showSymbols />
           </FormSection>
-          <FormSection title="Tones" description={`Dial frequency ${formatHz(air.band.dialHz, 0)} plus the audio offset of ${station.audioOffsetHz} Hz.`}>
+          <FormSection
+            title="Tones"
+            description={`Dial frequency ${formatHz(air.band.dialHz, 0)} plus the audio offset of ${station.audioOffsetHz} Hz.`}
+          >
             {air.command.tonesHz.map((toneHz, index) => (
               <View key={index} style={styles.toneRow}>
                 <Text variant="label" style={styles.toneLabel}>

@@ -26,7 +26,16 @@ export type StationWorkshopProps = {
 };
 
 /** The station's hardware, power, messages and bands, with the ways into the workshop screens. */
-export function StationWorkshop({ station, unit, unitLoading, unitError, readOnly, onOpenBands, onOpenCalibration, onOpenOnAir }: StationWorkshopProps) {
+export function StationWorkshop({
+  station,
+  unit,
+  unitLoading,
+  unitError,
+  readOnly,
+  onOpenBands,
+  onOpenCalibration,
+  onOpenOnAir,
+}: StationWorkshopProps) {
   const regionBands = bandsFor(station.region);
   const names = new Map(regionBands.map((band) => [band.id as string, band.name]));
   const order = regionBands.map((band) => band.id as string);
@@ -67,9 +76,7 @@ export function StationWorkshop({ station, unit, unitLoading, unitError, readOnl
           <Text>{enabled.length ? enabled.map((b) => names.get(b.bandId) ?? b.bandId).join(', ') : 'None enabled yet'}</Text>
         </Fact>
         <Fact label="Reference error">
-          <Text variant="mono">
-            {station.referenceErrorPpm === null ? 'not measured' : `${station.referenceErrorPpm.toFixed(3)} ppm`}
-          </Text>
+          <Text variant="mono">{station.referenceErrorPpm === null ? 'not measured' : `${station.referenceErrorPpm.toFixed(3)} ppm`}</Text>
         </Fact>
         <View style={styles.actions}>
           <Button label="Bands and calibration" onPress={onOpenBands} />

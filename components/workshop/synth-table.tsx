@@ -17,8 +17,8 @@ export function SynthTable({ synth }: SynthTableProps) {
     <View style={styles.wrap}>
       <View style={styles.facts}>
         <Text>
-          Output divider <Text variant="mono">{synth.outputDivider}</Text>, R divider <Text variant="mono">{synth.rDivider}</Text>, reference{' '}
-          <Text variant="mono">{formatHz(synth.referenceHz, 0)}</Text>
+          Output divider <Text variant="mono">{synth.outputDivider}</Text>, R divider <Text variant="mono">{synth.rDivider}</Text>,
+          reference <Text variant="mono">{formatHz(synth.referenceHz, 0)}</Text>
         </Text>
         <Text variant="caption" tone="muted">
           Output divider registers

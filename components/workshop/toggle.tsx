@@ -37,12 +37,7 @@ export function Toggle({ label, value, onChange, hint, disabled = false, busy = 
           </Text>
         ) : null}
       </View>
-      <View
-        style={[
-          styles.track,
-          { backgroundColor: value ? colors.primary : colors.border, opacity: inactive ? 0.5 : 1 },
-        ]}
-      >
+      <View style={[styles.track, { backgroundColor: value ? colors.primary : colors.border, opacity: inactive ? 0.5 : 1 }]}>
         <View style={[styles.knob, { backgroundColor: colors.surfaceRaised }, value ? styles.knobOn : null]} />
       </View>
     </Pressable>

@@ -80,7 +80,9 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
       : drift === 0
         ? 'Warm-up drift: none expected (TCXO or GPS-disciplined reference).'
         : `Warm-up drift for 10 °C: ±${drift.toFixed(1)} Hz; ${
-            driftInside ? `the tones stay inside (${formatValue(driftedWindow!.marginHz, 1, 'Hz')} to spare).` : 'the tones would leave the window once the board warms up.'
+            driftInside
+              ? `the tones stay inside (${formatValue(driftedWindow!.marginHz, 1, 'Hz')} to spare).`
+              : 'the tones would leave the window once the board warms up.'
           }`;
 
   return (
@@ -104,7 +106,15 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
             />
           ) : null}
           {/* the strip outside the window, then the window */}
-          <Rect x={pad} y={STRIP_TOP} width={width - 2 * pad} height={STRIP_HEIGHT} fill={colors.background} stroke={colors.border} rx={4} />
+          <Rect
+            x={pad}
+            y={STRIP_TOP}
+            width={width - 2 * pad}
+            height={STRIP_HEIGHT}
+            fill={colors.background}
+            stroke={colors.border}
+            rx={4}
+          />
           <Rect
             x={x(WINDOW_LOW_OFFSET_HZ)}
             y={STRIP_TOP}
@@ -115,11 +125,27 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
             strokeWidth={1}
           />
           {[1450, 1500, 1550].map((hz) => (
-            <Line key={hz} x1={x(hz)} x2={x(hz)} y1={STRIP_TOP + STRIP_HEIGHT - 5} y2={STRIP_TOP + STRIP_HEIGHT} stroke={colors.primary} opacity={0.5} />
+            <Line
+              key={hz}
+              x1={x(hz)}
+              x2={x(hz)}
+              y1={STRIP_TOP + STRIP_HEIGHT - 5}
+              y2={STRIP_TOP + STRIP_HEIGHT}
+              stroke={colors.primary}
+              opacity={0.5}
+            />
           ))}
           {/* the tone group on the strip */}
           {tones.map((hz, index) => (
-            <Line key={index} x1={x(hz)} x2={x(hz)} y1={STRIP_TOP - 2} y2={STRIP_TOP + STRIP_HEIGHT + 2} stroke={toneColor} strokeWidth={1.5} />
+            <Line
+              key={index}
+              x1={x(hz)}
+              x2={x(hz)}
+              y1={STRIP_TOP - 2}
+              y2={STRIP_TOP + STRIP_HEIGHT + 2}
+              stroke={toneColor}
+              strokeWidth={1.5}
+            />
           ))}
           {/* warm-up drift bracket under the strip */}
           {drift ? (
@@ -136,13 +162,25 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
             stroke={colors.border}
             strokeWidth={1}
           />
-          <Rect x={loupeLeft} y={LOUPE_TOP} width={LOUPE_WIDTH} height={LOUPE_HEIGHT} fill={colors.surfaceRaised} stroke={colors.border} rx={6} />
+          <Rect
+            x={loupeLeft}
+            y={LOUPE_TOP}
+            width={LOUPE_WIDTH}
+            height={LOUPE_HEIGHT}
+            fill={colors.surfaceRaised}
+            stroke={colors.border}
+            rx={6}
+          />
           {[WINDOW_LOW_OFFSET_HZ, WINDOW_HIGH_OFFSET_HZ].filter(inLoupe).map((edge) => (
             <Rect
               key={edge}
               x={edge === WINDOW_LOW_OFFSET_HZ ? loupeLeft + 1 : loupeX(edge)}
               y={LOUPE_TOP + 1}
-              width={edge === WINDOW_LOW_OFFSET_HZ ? Math.max(0, loupeX(edge) - loupeLeft - 1) : Math.max(0, loupeLeft + LOUPE_WIDTH - 1 - loupeX(edge))}
+              width={
+                edge === WINDOW_LOW_OFFSET_HZ
+                  ? Math.max(0, loupeX(edge) - loupeLeft - 1)
+                  : Math.max(0, loupeLeft + LOUPE_WIDTH - 1 - loupeX(edge))
+              }
               height={LOUPE_HEIGHT - 2}
               fill={colors.dangerSoft}
             />
@@ -154,12 +192,21 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
               x2={loupeX(hz)}
               y1={LOUPE_TOP + 6}
               y2={LOUPE_TOP + LOUPE_HEIGHT - 14}
-              stroke={window.tonesHz[index] < window.windowLowHz || window.tonesHz[index] > window.windowHighHz ? colors.danger : colors.primary}
+              stroke={
+                window.tonesHz[index] < window.windowLowHz || window.tonesHz[index] > window.windowHighHz ? colors.danger : colors.primary
+              }
               strokeWidth={3}
               strokeLinecap="round"
             />
           ))}
-          <SvgText x={loupeLeft + LOUPE_WIDTH / 2} y={LOUPE_TOP + LOUPE_HEIGHT - 4} fontSize={9} fill={colors.textMuted} textAnchor="middle" fontFamily={fonts.mono}>
+          <SvgText
+            x={loupeLeft + LOUPE_WIDTH / 2}
+            y={LOUPE_TOP + LOUPE_HEIGHT - 4}
+            fontSize={9}
+            fill={colors.textMuted}
+            textAnchor="middle"
+            fontFamily={fonts.mono}
+          >
             {`4 tones · ${(TONE_SPACING_HZ * 3).toFixed(2)} Hz`}
           </SvgText>
           {/* axis: offsets above the dial */}

@@ -30,7 +30,12 @@ export function WorkshopHeader({ title, station, intro, actions = [] }: Workshop
         {actions.length ? (
           <View style={styles.actions}>
             {actions.map((action) => (
-              <Button key={action.label} label={action.label} variant={action.secondary ? 'secondary' : 'primary'} onPress={action.onPress} />
+              <Button
+                key={action.label}
+                label={action.label}
+                variant={action.secondary ? 'secondary' : 'primary'}
+                onPress={action.onPress}
+              />
             ))}
           </View>
         ) : null}

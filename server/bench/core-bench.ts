@@ -222,7 +222,9 @@ export const BENCHMARKS: Record<string, (minSeconds?: number) => BenchResult> = 
 
 export function main(names: string[] = Object.keys(BENCHMARKS)): BenchResult[] {
   const load = loadavg()[0].toFixed(1);
-  console.log(`Faintline core benchmarks, Node ${process.version}, ${process.platform}/${process.arch}, ${cpus().length} CPUs, load average ${load}`);
+  console.log(
+    `Faintline core benchmarks, Node ${process.version}, ${process.platform}/${process.arch}, ${cpus().length} CPUs, load average ${load}`,
+  );
   const results = names.map((name) => {
     const bench = BENCHMARKS[name];
     if (!bench) throw new Error(`Unknown benchmark '${name}': use ${Object.keys(BENCHMARKS).join(', ')}`);

@@ -93,7 +93,9 @@ export function buildProgram(io: CliIo = defaultIo): Command {
   const emit = (value: unknown): void => io.out(JSON.stringify(value));
 
   const program = new Command('faintline')
-    .description('Faintline beacon computations: WSPR messages and symbols, locators, paths, tones, synthesizer plans, power, filters and band rotation plans.')
+    .description(
+      'Faintline beacon computations: WSPR messages and symbols, locators, paths, tones, synthesizer plans, power, filters and band rotation plans.',
+    )
     .showHelpAfterError()
     .configureOutput({ writeOut: (s) => io.out(s.trimEnd()), writeErr: (s) => io.err(s.trimEnd()) });
 
@@ -110,7 +112,8 @@ export function buildProgram(io: CliIo = defaultIo): Command {
           fail(`'${text}': ${r.reason}`);
           continue;
         }
-        if (r.power.rounded) io.err(`faintline: power ${r.power.requestedDbm} dBm is not a WSPR level; sending ${r.power.reportedDbm} dBm.`);
+        if (r.power.rounded)
+          io.err(`faintline: power ${r.power.requestedDbm} dBm is not a WSPR level; sending ${r.power.reportedDbm} dBm.`);
         emit({ message: r.message, type: r.type, symbols: Array.from(r.symbols), power: r.power });
       }
     });
@@ -157,7 +160,12 @@ export function buildProgram(io: CliIo = defaultIo): Command {
   program
     .command('tones')
     .description('The four tones on a band, corrected for calibration, and whether they sit inside the 200 Hz window.')
-    .requiredOption('--band <band>', `band: ${bandsFor('itu1').map((b) => b.id).join(', ')}`)
+    .requiredOption(
+      '--band <band>',
+      `band: ${bandsFor('itu1')
+        .map((b) => b.id)
+        .join(', ')}`,
+    )
     .option('--offset <Hz>', 'audio offset of tone 0 above the dial frequency', number('Offset'), 1500)
     .option('--ppm <ppm>', 'reference error in ppm (positive = runs fast)', number('ppm'), 0)
     .option('--band-offset <Hz>', 'extra measured offset on this band, in Hz', number('Band offset'), 0)
@@ -167,7 +175,10 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       if (!b.ok) return fail(b);
       const cmd = commandForBand(b.band.dialHz, opts.offset, { referenceErrorPpm: opts.ppm, bandOffsetHz: opts.bandOffset });
       emit({ band: b.band.id, region: opts.region, ...cmd });
-      if (!cmd.window.inside) io.err(`faintline: warning: a tone falls outside ${cmd.window.windowLowHz}–${cmd.window.windowHighHz} Hz; choose an offset between 1400 and 1595 Hz.`);
+      if (!cmd.window.inside)
+        io.err(
+          `faintline: warning: a tone falls outside ${cmd.window.windowLowHz}–${cmd.window.windowHighHz} Hz; choose an offset between 1400 and 1595 Hz.`,
+        );
     });
 
   program
@@ -247,30 +258,49 @@ export function buildProgram(io: CliIo = defaultIo): Command {
     .option('--order <n>', '3, 5 or 7', number('Order'), 5)
     .option('--core <core>', 'iron-powder toroid for the inductors, e.g. T-50-2', 'T-50-2')
     .option('--duty <fraction>', 'duty cycle of the drive, 0 to 1', number('Duty cycle'), 0.5)
-    .option('--limit <dB>', 'spurious limit below the fundamental; default 43 dB under 30 MHz, 60 dB above (47 CFR 97.307)', number('Limit'))
+    .option(
+      '--limit <dB>',
+      'spurious limit below the fundamental; default 43 dB under 30 MHz, 60 dB above (47 CFR 97.307)',
+      number('Limit'),
+    )
     .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
-    .action((opts: { band?: string; frequency?: number; cutoff?: number; kind: string; order: number; core: string; duty: number; limit?: number; region: LicenceRegion }) => {
-      let fundamentalHz: number;
-      if (opts.frequency !== undefined) fundamentalHz = opts.frequency;
-      else if (opts.band) {
-        const b = bandFor(opts.band, opts.region);
-        if (!b.ok) return fail(b);
-        fundamentalHz = b.band.dialHz + 1500;
-      } else return fail('Give --band or --frequency.');
-      if (!(opts.duty > 0 && opts.duty < 1)) return fail('Duty cycle must be between 0 and 1.');
-      const harmonics = requiredFilterAttenuation(fundamentalHz, { dutyCycle: opts.duty, limitDb: opts.limit });
-      const r = designLowPass({
-        kind: opts.kind as FilterKind,
-        order: opts.order,
-        cutoffHz: opts.cutoff ?? fundamentalHz * 1.15,
-        core: opts.core,
-        atFrequenciesHz: harmonics.map((h) => h.frequencyHz),
-      });
-      if (!r.ok) return fail(r);
-      const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
-      emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
-      if (!meets) io.err('faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.');
-    });
+    .action(
+      (opts: {
+        band?: string;
+        frequency?: number;
+        cutoff?: number;
+        kind: string;
+        order: number;
+        core: string;
+        duty: number;
+        limit?: number;
+        region: LicenceRegion;
+      }) => {
+        let fundamentalHz: number;
+        if (opts.frequency !== undefined) fundamentalHz = opts.frequency;
+        else if (opts.band) {
+          const b = bandFor(opts.band, opts.region);
+          if (!b.ok) return fail(b);
+          fundamentalHz = b.band.dialHz + 1500;
+        } else return fail('Give --band or --frequency.');
+        if (!(opts.duty > 0 && opts.duty < 1)) return fail('Duty cycle must be between 0 and 1.');
+        const harmonics = requiredFilterAttenuation(fundamentalHz, { dutyCycle: opts.duty, limitDb: opts.limit });
+        const r = designLowPass({
+          kind: opts.kind as FilterKind,
+          order: opts.order,
+          cutoffHz: opts.cutoff ?? fundamentalHz * 1.15,
+          core: opts.core,
+          atFrequenciesHz: harmonics.map((h) => h.frequencyHz),
+        });
+        if (!r.ok) return fail(r);
+        const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
+        emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
+        if (!meets)
+          io.err(
+            'faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.',
+          );
+      },
+    );
 
   program
     .command('plan')
@@ -281,7 +311,11 @@ export function buildProgram(io: CliIo = defaultIo): Command {
     .requiredOption('--callsign <callsign>', 'your callsign, plain (K1ABC) or with one prefix or suffix (PJ4/K1ABC)')
     .requiredOption('--locator <locator>', '4- or 6-character Maidenhead locator; 6 characters send Type 1 and Type 3 in turn')
     .requiredOption('--power <dBm>', 'reported power in dBm (0, 3, 7, 10, 13 … 60)', number('Power'))
-    .requiredOption('--band <band[@from-to]>', 'a step of the rotation, in order; repeat for more. 40m@20-6 runs 40 m only from 20:00 to 06:00 UTC', collect)
+    .requiredOption(
+      '--band <band[@from-to]>',
+      'a step of the rotation, in order; repeat for more. 40m@20-6 runs 40 m only from 20:00 to 06:00 UTC',
+      collect,
+    )
     .option('--slots <n>', 'transmissions in a row on each band before moving on (1–30; pairs round up)', number('Slots'), 1)
     .option('--duty <percent>', 'share of the slots to use, drawn afresh each UTC day (1–100; default 20)', number('Duty'))
     .option('--every <n>', 'use every nth slot instead of a share (2–30)', number('Every'))
@@ -292,7 +326,11 @@ export function buildProgram(io: CliIo = defaultIo): Command {
     .option('--offset <Hz>', 'audio offset of tone 0 above the dial (1400–1595)', number('Offset'), 1500)
     .option('--stagger-step <Hz>', 'move the audio offset by this much per transmission (0–20)', number('Stagger step'), 0)
     .option('--stagger-span <Hz>', 'range the stagger walks across, centred on --offset (0–100)', number('Stagger span'), 30)
-    .option('--cal <band=Hz>', "a band's measured generator error in Hz (positive = radiates high), e.g. 20m=+4.5; repeat per band", collect)
+    .option(
+      '--cal <band=Hz>',
+      "a band's measured generator error in Hz (positive = radiates high), e.g. 20m=+4.5; repeat per band",
+      collect,
+    )
     .option('--seed <text>', 'what the daily share draw is seeded with (default: the callsign)')
     .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
     .option('--summary', 'end with one line of minutes on the air per band and UTC day, and the duty reached')
@@ -314,7 +352,11 @@ export function buildProgram(io: CliIo = defaultIo): Command {
         if (!m) return fail(`--band '${text}' is not a band or band@from-to (such as 40m@20-6).`);
         const b = bandFor(m[1], opts.region);
         if (!b.ok) return fail(b);
-        steps.push({ bandId: b.band.id, slots: opts.slots, activeHoursUtc: m[2] === undefined ? null : { fromHour: Number(m[2]), toHour: Number(m[3]) } });
+        steps.push({
+          bandId: b.band.id,
+          slots: opts.slots,
+          activeHoursUtc: m[2] === undefined ? null : { fromHour: Number(m[2]), toHour: Number(m[3]) },
+        });
       }
       const calibration = new Map<string, number>();
       for (const text of opts.cal ?? []) {
@@ -332,10 +374,21 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       });
       if (!parsed.success) {
         const flag = (path: PropertyKey[]): string =>
-          path[0] === 'steps' && typeof path[1] === 'number' ? `--band ${opts.band[path[1]]}` :
-          path[0] === 'cadence' ? (opts.every !== undefined ? '--every' : '--duty') :
-          path[0] === 'stagger' ? (path[1] === 'spanHz' ? '--stagger-span' : '--stagger-step') :
-          path[0] === 'startDate' ? '--start-date' : path[0] === 'endDate' ? '--end-date' : 'schedule';
+          path[0] === 'steps' && typeof path[1] === 'number'
+            ? `--band ${opts.band[path[1]]}`
+            : path[0] === 'cadence'
+              ? opts.every !== undefined
+                ? '--every'
+                : '--duty'
+              : path[0] === 'stagger'
+                ? path[1] === 'spanHz'
+                  ? '--stagger-span'
+                  : '--stagger-step'
+                : path[0] === 'startDate'
+                  ? '--start-date'
+                  : path[0] === 'endDate'
+                    ? '--end-date'
+                    : 'schedule';
         for (const issue of parsed.error.issues) fail(`${flag(issue.path)}: ${issue.message}`);
         return;
       }
@@ -371,7 +424,8 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       }
       const blocks = issues.filter((i) => i.level === 'block');
       if (blocks.length) {
-        for (const issue of blocks) fail(`${issue.stepIndex === undefined ? '' : `--band ${opts.band[issue.stepIndex]}: `}${issue.message}`);
+        for (const issue of blocks)
+          fail(`${issue.stepIndex === undefined ? '' : `--band ${opts.band[issue.stepIndex]}: `}${issue.message}`);
         return;
       }
       const result = expandPlan({ schedule: rules, station, unit, fromMs, toMs: fromMs + opts.hours * 3_600_000 });
@@ -380,7 +434,10 @@ export function buildProgram(io: CliIo = defaultIo): Command {
         const { stepIndex: _step, ...line } = t;
         emit(line);
       }
-      if (opts.summary) emit({ summary: { airtime: airtimeByDay(result.transmissions), duty: effectiveDuty(result), transmissions: result.transmissions.length } });
+      if (opts.summary)
+        emit({
+          summary: { airtime: airtimeByDay(result.transmissions), duty: effectiveDuty(result), transmissions: result.transmissions.length },
+        });
     });
 
   return program;

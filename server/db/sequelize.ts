@@ -34,7 +34,8 @@ export function createSequelize(databaseUrl: string): Sequelize {
   OffsetProposalModel.initModel(sequelize);
   NotificationModel.initModel(sequelize);
   AuditEntryModel.initModel(sequelize);
-  for (const model of [DeviceTokenModel, HeartbeatModel, DeviceTransmissionModel, AlertSettingsModel, AlertModel]) model.initModel(sequelize);
+  for (const model of [DeviceTokenModel, HeartbeatModel, DeviceTransmissionModel, AlertSettingsModel, AlertModel])
+    model.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });

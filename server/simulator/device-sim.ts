@@ -71,7 +71,9 @@ export class SimulatedDevice {
 
   private async poll() {
     // Asks for gzip as firmware with an inflater would (about 2 KB instead of 27); fetch inflates it.
-    const res = await this.call('/config', { headers: { 'Accept-Encoding': 'gzip', ...(this.etag ? { 'If-None-Match': this.etag } : {}) } });
+    const res = await this.call('/config', {
+      headers: { 'Accept-Encoding': 'gzip', ...(this.etag ? { 'If-None-Match': this.etag } : {}) },
+    });
     this.stats.polls += 1;
     if (res.status === 304) {
       this.stats.notModified += 1;
@@ -90,7 +92,9 @@ export class SimulatedDevice {
     for (const t of due) this.sent.add(t.startUtc);
     const res = await this.call('/transmissions', {
       method: 'POST',
-      body: JSON.stringify({ transmissions: due.map((t) => ({ startUtc: t.startUtc, bandId: t.bandId, frequencyHz: t.carrierHz, messageText: t.messageText })) }),
+      body: JSON.stringify({
+        transmissions: due.map((t) => ({ startUtc: t.startUtc, bandId: t.bandId, frequencyHz: t.carrierHz, messageText: t.messageText })),
+      }),
     });
     if (res.ok) this.stats.transmissions += due.length;
   }

@@ -17,23 +17,46 @@ const program = new Command('simulate')
   .parse();
 
 const opts = program.opts<{ devices: string; speed: string; url: string; silence: string; tokens?: string }>();
-const tokens = opts.tokens ? opts.tokens.split(',').map((t, i) => ({ name: `device ${i + 1}`, token: t.trim() })) : DEMO_DEVICES.map((d) => ({ name: d.stationName, token: d.token }));
+const tokens = opts.tokens
+  ? opts.tokens.split(',').map((t, i) => ({ name: `device ${i + 1}`, token: t.trim() }))
+  : DEMO_DEVICES.map((d) => ({ name: d.stationName, token: d.token }));
 const count = Math.min(Number(opts.devices), tokens.length);
 if (!(count > 0) || !(Number(opts.speed) > 0)) {
   console.error('Give --devices as a positive number and --speed above 0.');
   process.exit(2);
 }
-if (Number(opts.devices) > tokens.length) console.error(`Only ${tokens.length} device tokens are known; simulating ${count}. Pass more with --tokens.`);
+if (Number(opts.devices) > tokens.length)
+  console.error(`Only ${tokens.length} device tokens are known; simulating ${count}. Pass more with --tokens.`);
 
-const devices = tokens.slice(0, count).map(
-  (t) => new SimulatedDevice({ baseUrl: opts.url, token: t.token, name: t.name, speed: Number(opts.speed), silenceChance: Number(opts.silence), log: (line) => console.log(line) }),
-);
+const devices = tokens
+  .slice(0, count)
+  .map(
+    (t) =>
+      new SimulatedDevice({
+        baseUrl: opts.url,
+        token: t.token,
+        name: t.name,
+        speed: Number(opts.speed),
+        silenceChance: Number(opts.silence),
+        log: (line) => console.log(line),
+      }),
+  );
 console.log(`Simulating ${count} device(s) against ${opts.url}, reporting every ${(60 / Number(opts.speed)).toFixed(1)} s. Ctrl-C stops.`);
 for (const device of devices) device.start();
 
 const summary = setInterval(() => {
-  const total = devices.reduce((sum, d) => ({ polls: sum.polls + d.stats.polls, heartbeats: sum.heartbeats + d.stats.heartbeats, transmissions: sum.transmissions + d.stats.transmissions, errors: sum.errors + d.stats.errors }), { polls: 0, heartbeats: 0, transmissions: 0, errors: 0 });
-  console.log(`${new Date().toISOString().slice(11, 19)} UTC  polls ${total.polls}  heartbeats ${total.heartbeats}  transmissions ${total.transmissions}  errors ${total.errors}  silent ${devices.filter((d) => d.silent).length}`);
+  const total = devices.reduce(
+    (sum, d) => ({
+      polls: sum.polls + d.stats.polls,
+      heartbeats: sum.heartbeats + d.stats.heartbeats,
+      transmissions: sum.transmissions + d.stats.transmissions,
+      errors: sum.errors + d.stats.errors,
+    }),
+    { polls: 0, heartbeats: 0, transmissions: 0, errors: 0 },
+  );
+  console.log(
+    `${new Date().toISOString().slice(11, 19)} UTC  polls ${total.polls}  heartbeats ${total.heartbeats}  transmissions ${total.transmissions}  errors ${total.errors}  silent ${devices.filter((d) => d.silent).length}`,
+  );
 }, 15_000);
 
 function stop() {

@@ -26,7 +26,8 @@ export async function api<T>(path: string, options: ApiOptions = {}): Promise<T>
     response = await fetch(`${baseUrl}${path}`, {
       method: options.method ?? 'GET',
       credentials: 'include',
-      headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      headers:
+        options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
       body: options.body === undefined ? undefined : JSON.stringify(options.body),
     });
   } catch {

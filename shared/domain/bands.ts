@@ -11,9 +11,7 @@ import { WINDOW_HIGH_OFFSET_HZ, WINDOW_LOW_OFFSET_HZ } from './tones';
 export type LicenceRegion = 'itu1' | 'itu2' | 'itu3';
 export const LICENCE_REGIONS: readonly LicenceRegion[] = ['itu1', 'itu2', 'itu3'];
 
-export type BandId =
-  | '2200m' | '630m' | '160m' | '80m' | '60m' | '40m' | '30m' | '20m'
-  | '17m' | '15m' | '12m' | '10m' | '6m' | '4m' | '2m';
+export type BandId = '2200m' | '630m' | '160m' | '80m' | '60m' | '40m' | '30m' | '20m' | '17m' | '15m' | '12m' | '10m' | '6m' | '4m' | '2m';
 
 type Sourced<T> = { value: T; source: string };
 type BandEntry = {
@@ -35,26 +33,38 @@ export const BAND_TABLE: readonly BandEntry[] = [
   { id: '2200m', name: '2200 m', dialHz: dial(136_000), edgesHz: edges(135_700, 137_800) },
   { id: '630m', name: '630 m', dialHz: dial(474_200), edgesHz: edges(472_000, 479_000) },
   {
-    id: '160m', name: '160 m', dialHz: dial(1_836_600), edgesHz: edges(1_800_000, 2_000_000),
+    id: '160m',
+    name: '160 m',
+    dialHz: dial(1_836_600),
+    edgesHz: edges(1_800_000, 2_000_000),
     regionalEdgesHz: { itu1: edges(1_810_000, 2_000_000) },
   },
   {
-    id: '80m', name: '80 m', dialHz: dial(3_568_600), edgesHz: edges(3_500_000, 4_000_000),
+    id: '80m',
+    name: '80 m',
+    dialHz: dial(3_568_600),
+    edgesHz: edges(3_500_000, 4_000_000),
     regionalEdgesHz: { itu1: edges(3_500_000, 3_800_000), itu3: edges(3_500_000, 3_900_000) },
   },
   {
-    id: '60m', name: '60 m', dialHz: dial(5_287_200),
+    id: '60m',
+    name: '60 m',
+    dialHz: dial(5_287_200),
     regionalDialHz: {
       itu1: {
         value: 5_364_700,
-        source: 'WSPR dial inside the WRC-15 allocation 5351.5–5366.5 kHz used by most Region 1 administrations (from memory; team TRADE.md gives 5.364700 "in some regions")',
+        source:
+          'WSPR dial inside the WRC-15 allocation 5351.5–5366.5 kHz used by most Region 1 administrations (from memory; team TRADE.md gives 5.364700 "in some regions")',
       },
     },
     edgesHz: edges(5_250_000, 5_450_000, '60 m is allocated nationally; these outer edges are indicative only (from memory)'),
     regionalEdgesHz: { itu1: edges(5_351_500, 5_366_500, 'WRC-15 secondary allocation (from memory)') },
   },
   {
-    id: '40m', name: '40 m', dialHz: dial(7_038_600), edgesHz: edges(7_000_000, 7_200_000),
+    id: '40m',
+    name: '40 m',
+    dialHz: dial(7_038_600),
+    edgesHz: edges(7_000_000, 7_200_000),
     regionalEdgesHz: { itu2: edges(7_000_000, 7_300_000) },
   },
   { id: '30m', name: '30 m', dialHz: dial(10_138_700), edgesHz: edges(10_100_000, 10_150_000) },
@@ -64,11 +74,16 @@ export const BAND_TABLE: readonly BandEntry[] = [
   { id: '12m', name: '12 m', dialHz: dial(24_924_600), edgesHz: edges(24_890_000, 24_990_000) },
   { id: '10m', name: '10 m', dialHz: dial(28_124_600), edgesHz: edges(28_000_000, 29_700_000) },
   {
-    id: '6m', name: '6 m', dialHz: dial(50_293_000), edgesHz: edges(50_000_000, 54_000_000),
+    id: '6m',
+    name: '6 m',
+    dialHz: dial(50_293_000),
+    edgesHz: edges(50_000_000, 54_000_000),
     regionalEdgesHz: { itu1: edges(50_000_000, 52_000_000, 'Region 1 after WRC-19 (many administrations 50–52 MHz; from memory)') },
   },
   {
-    id: '4m', name: '4 m', dialHz: dial(70_091_000),
+    id: '4m',
+    name: '4 m',
+    dialHz: dial(70_091_000),
     regionalDialHz: {
       itu2: null,
       itu3: null,
@@ -76,7 +91,10 @@ export const BAND_TABLE: readonly BandEntry[] = [
     edgesHz: edges(70_000_000, 70_500_000, 'national allocations in parts of Region 1 only (from memory)'),
   },
   {
-    id: '2m', name: '2 m', dialHz: dial(144_489_000), edgesHz: edges(144_000_000, 148_000_000),
+    id: '2m',
+    name: '2 m',
+    dialHz: dial(144_489_000),
+    edgesHz: edges(144_000_000, 148_000_000),
     regionalEdgesHz: { itu1: edges(144_000_000, 146_000_000) },
   },
 ];
@@ -106,7 +124,8 @@ export function bandFor(id: string, region: LicenceRegion = 'itu1'): Result<{ ba
   const entry = BAND_TABLE.find((b) => b.id === id.trim().toLowerCase().replace(/\s+/g, ''));
   if (!entry) return refuse(`Unknown band '${id}': use one of ${BAND_IDS.join(', ')}.`);
   const regional = entry.regionalDialHz?.[region];
-  if (regional === null) return refuse(`${entry.name} has no amateur allocation in ${region.toUpperCase()} (from memory; check your licence).`);
+  if (regional === null)
+    return refuse(`${entry.name} has no amateur allocation in ${region.toUpperCase()} (from memory; check your licence).`);
   const dialHz = regional ?? entry.dialHz;
   const bandEdges = entry.regionalEdgesHz?.[region] ?? entry.edgesHz;
   return {

@@ -57,8 +57,11 @@ export function toroidTurns(inductanceH: number, core: string): Result<{ winding
   if (!entry) return refuse(`Unknown core '${core}': use one of ${Object.keys(TOROIDS).join(', ')}.`);
   const uh = inductanceH * 1e6;
   const turns = Math.max(1, Math.round(100 * Math.sqrt(uh / entry.alUhPer100Turns)));
-  const got = (entry.alUhPer100Turns * (turns / 100) ** 2) * 1e-6;
-  return { ok: true, winding: { core: core.toUpperCase(), turns, inductanceH: got, errorPercent: ((got - inductanceH) / inductanceH) * 100 } };
+  const got = entry.alUhPer100Turns * (turns / 100) ** 2 * 1e-6;
+  return {
+    ok: true,
+    winding: { core: core.toUpperCase(), turns, inductanceH: got, errorPercent: ((got - inductanceH) / inductanceH) * 100 },
+  };
 }
 
 export type FilterElement = { position: number; kind: 'C' | 'L'; g: number; value: number; unit: 'F' | 'H'; winding?: Winding };

@@ -76,9 +76,8 @@ export function latLonToLocator(position: LatLon, precision: number = 6): Result
     const j = Math.floor(y / h + 1e-9);
     const ci = Math.min(i, p === 0 ? 17 : p === 2 ? 23 : 9);
     const cj = Math.min(j, p === 0 ? 17 : p === 2 ? 23 : 9);
-    out += p % 2 === 0
-      ? String.fromCharCode((p === 2 ? 97 : 65) + ci) + String.fromCharCode((p === 2 ? 97 : 65) + cj)
-      : String(ci) + String(cj);
+    out +=
+      p % 2 === 0 ? String.fromCharCode((p === 2 ? 97 : 65) + ci) + String.fromCharCode((p === 2 ? 97 : 65) + cj) : String(ci) + String(cj);
     x -= ci * w;
     y -= cj * h;
   }

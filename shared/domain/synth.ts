@@ -31,10 +31,7 @@ export type DividerRegisters = {
  * AN619 parameters: P1 = 128·a + ⌊128·b/c⌋ − 512, P2 = 128·b − c·⌊128·b/c⌋, P3 = c.
  * For an output divider, `rDivider` (1…128) and divide-by-4 go into the third byte.
  */
-export function encodeDivider(
-  fraction: Fraction,
-  options: { rDivider?: number; divideBy4?: boolean } = {},
-): DividerRegisters {
+export function encodeDivider(fraction: Fraction, options: { rDivider?: number; divideBy4?: boolean } = {}): DividerRegisters {
   const { a, b, c } = fraction;
   let p1: number;
   let p2: number;
@@ -66,7 +63,10 @@ export function encodeDivider(
 
 /** Best rational approximation num/den of x in [0, 1) with den ≤ maxDen (continued fractions with semiconvergents). */
 export function bestRational(x: number, maxDen: number = MAX_DENOMINATOR): { num: number; den: number } {
-  let p0 = 0, q0 = 1, p1 = 1, q1 = 0;
+  let p0 = 0,
+    q0 = 1,
+    p1 = 1,
+    q1 = 0;
   let v = x;
   for (let i = 0; i < 64; i++) {
     const ai = Math.floor(v);
@@ -78,7 +78,10 @@ export function bestRational(x: number, maxDen: number = MAX_DENOMINATOR): { num
       const qs = k * q1 + q0;
       return Math.abs(ps / qs - x) < Math.abs(p1 / q1 - x) ? { num: ps, den: qs } : { num: p1, den: q1 };
     }
-    p0 = p1; q0 = q1; p1 = p2; q1 = q2;
+    p0 = p1;
+    q0 = q1;
+    p1 = p2;
+    q1 = q2;
     const rest = v - ai;
     if (rest < 1e-18 || Math.abs(p1 / q1 - x) < 1e-17) break;
     v = 1 / rest;

@@ -3,7 +3,13 @@ import { z } from './zod-setup';
 
 export const clubInput = z.object({
   name: z.string().trim().min(3, 'Give the club a name of at least 3 characters').max(120, 'Use at most 120 characters'),
-  maxPowerDbm: z.number().int('Give the limit in whole dBm').min(0, 'The power limit is at least 0 dBm').max(60, 'The power limit is at most 60 dBm (1 kW)').optional().default(30),
+  maxPowerDbm: z
+    .number()
+    .int('Give the limit in whole dBm')
+    .min(0, 'The power limit is at least 0 dBm')
+    .max(60, 'The power limit is at most 60 dBm (1 kW)')
+    .optional()
+    .default(30),
 });
 export type ClubInput = z.input<typeof clubInput>;
 export const clubPatch = z.object({ name: clubInput.shape.name, maxPowerDbm: z.number().int().min(0).max(60) }).partial();
@@ -12,7 +18,11 @@ export const invitationInput = z.object({ email: emailField });
 export const acceptInvitationInput = z.object({ token: z.string().min(20, 'The invitation link is incomplete').max(200) });
 export const memberRoleInput = z.object({ role: z.enum(['member', 'admin'], { message: 'The role is member or admin' }) });
 export const suspensionInput = z.object({
-  reason: z.string().trim().min(5, 'Say in a few words why the station is stopped (at least 5 characters)').max(300, 'Use at most 300 characters'),
+  reason: z
+    .string()
+    .trim()
+    .min(5, 'Say in a few words why the station is stopped (at least 5 characters)')
+    .max(300, 'Use at most 300 characters'),
 });
 export const offsetProposalInput = z.object({
   stationId: z.number().int().positive(),
@@ -20,7 +30,14 @@ export const offsetProposalInput = z.object({
   reason: z.string().trim().max(300).optional().default('Separates this station from another club station in the same slots'),
 });
 
-export type ClubMember = { userId: number; displayName: string; callsign: string | null; email: string; role: 'member' | 'admin'; joinedAt: string };
+export type ClubMember = {
+  userId: number;
+  displayName: string;
+  callsign: string | null;
+  email: string;
+  role: 'member' | 'admin';
+  joinedAt: string;
+};
 export type ClubDetail = { id: number; name: string; maxPowerDbm: number; myRole: 'member' | 'admin'; members: ClubMember[] };
 export type Invitation = { id: number; email: string; expiresAt: string; acceptedAt: string | null; createdAt: string };
 export type ReviewFinding = { code: string; bandId?: string; message: string };

@@ -1,16 +1,24 @@
 import { TIME_SOURCES, bandIdField } from './unit';
 import { z } from './zod-setup';
 
-const isoUtc = (label: string) => z.iso.datetime({ offset: true, message: `Give ${label} as an ISO 8601 UTC time, e.g. 2026-12-02T10:00:01Z` });
+const isoUtc = (label: string) =>
+  z.iso.datetime({ offset: true, message: `Give ${label} as an ISO 8601 UTC time, e.g. 2026-12-02T10:00:01Z` });
 
 export const heartbeatInput = z.object({
   uptimeS: z.number().int('uptimeS is whole seconds').min(0, 'uptimeS cannot be negative'),
   firmwareVersion: z.string().trim().min(1, 'Give the firmware version').max(40),
   timeSource: z.enum(TIME_SOURCES, { message: 'timeSource is network, gps or rtc' }),
-  clockOffsetMs: z.number().min(-600_000, 'clockOffsetMs beyond ±10 minutes: fix the clock first').max(600_000, 'clockOffsetMs beyond ±10 minutes: fix the clock first'),
+  clockOffsetMs: z
+    .number()
+    .min(-600_000, 'clockOffsetMs beyond ±10 minutes: fix the clock first')
+    .max(600_000, 'clockOffsetMs beyond ±10 minutes: fix the clock first'),
   temperatureC: z.number().min(-60).max(125).nullable().optional().default(null),
   supplyV: z.number().min(0).max(60).nullable().optional().default(null),
-  lastTransmission: z.object({ startUtc: isoUtc('lastTransmission.startUtc'), bandId: bandIdField }).nullable().optional().default(null),
+  lastTransmission: z
+    .object({ startUtc: isoUtc('lastTransmission.startUtc'), bandId: bandIdField })
+    .nullable()
+    .optional()
+    .default(null),
   errorCodes: z.array(z.string().trim().min(1).max(16)).max(20).optional().default([]),
 });
 export type HeartbeatInput = z.input<typeof heartbeatInput>;
@@ -36,7 +44,15 @@ export const alertSettingsInput = z.object({
 export type AlertSettings = z.infer<typeof alertSettingsInput>;
 
 export type AlertRule = 'silent' | 'clock-offset' | 'drift-out-of-window' | 'transmitting-while-suspended';
-export type Alert = { id: number; stationId: number; rule: AlertRule; message: string; openedAt: string; lastSeenAt: string; resolvedAt: string | null };
+export type Alert = {
+  id: number;
+  stationId: number;
+  rule: AlertRule;
+  message: string;
+  openedAt: string;
+  lastSeenAt: string;
+  resolvedAt: string | null;
+};
 
 export type StationHealth = {
   stationId: number;

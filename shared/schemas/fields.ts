@@ -29,9 +29,6 @@ export const locatorField = z
 
 export const emailField = z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(190);
 
-export const passwordField = z
-  .string()
-  .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
+export const passwordField = z.string().min(10, 'Use at least 10 characters').max(200, 'Use at most 200 characters');
 
 export const idParam = z.coerce.number().int().positive();

@@ -66,12 +66,21 @@ export const cadenceField = z.discriminatedUnion(
 );
 
 export const staggerField = z.object({
-  stepHz: z.number().min(0, 'The stagger step cannot be negative').max(MAX_STAGGER_STEP_HZ, `Move the offset by at most ${MAX_STAGGER_STEP_HZ} Hz per transmission`),
-  spanHz: z.number().min(0, 'The stagger span cannot be negative').max(MAX_STAGGER_SPAN_HZ, `Keep the stagger within ${MAX_STAGGER_SPAN_HZ} Hz: the whole window is only 200 Hz`),
+  stepHz: z
+    .number()
+    .min(0, 'The stagger step cannot be negative')
+    .max(MAX_STAGGER_STEP_HZ, `Move the offset by at most ${MAX_STAGGER_STEP_HZ} Hz per transmission`),
+  spanHz: z
+    .number()
+    .min(0, 'The stagger span cannot be negative')
+    .max(MAX_STAGGER_SPAN_HZ, `Keep the stagger within ${MAX_STAGGER_SPAN_HZ} Hz: the whole window is only 200 Hz`),
 });
 
 const dateField = (label: string) =>
-  z.string().trim().refine((v) => dayNumber(v) !== null, `Give the ${label} date as YYYY-MM-DD, a real calendar day (UTC)`);
+  z
+    .string()
+    .trim()
+    .refine((v) => dayNumber(v) !== null, `Give the ${label} date as YYYY-MM-DD, a real calendar day (UTC)`);
 
 const fields = {
   name: z.string().trim().min(1, 'Give the schedule a name').max(80, 'Use at most 80 characters'),
@@ -91,7 +100,11 @@ const endNotBeforeStart = (value: { startDate?: string; endDate?: string | null 
   const start = dayNumber(value.startDate);
   const end = dayNumber(value.endDate);
   if (start !== null && end !== null && end < start) {
-    ctx.addIssue({ code: 'custom', path: ['endDate'], message: `The end date ${value.endDate} is before the start date ${value.startDate}: move it later, or clear it` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['endDate'],
+      message: `The end date ${value.endDate} is before the start date ${value.startDate}: move it later, or clear it`,
+    });
   }
 };
 
@@ -114,13 +127,13 @@ export type ScheduleValues = z.output<typeof scheduleInput>;
 export const schedulePatch = z
   .strictObject(
     {
-    name: fields.name.optional(),
-    steps: fields.steps.optional(),
-    cadence: fields.cadence.optional(),
-    stagger: fields.stagger.optional(),
-    startDate: fields.startDate.optional(),
-    endDate: fields.endDate.optional(),
-    paused: fields.paused.optional(),
+      name: fields.name.optional(),
+      steps: fields.steps.optional(),
+      cadence: fields.cadence.optional(),
+      stagger: fields.stagger.optional(),
+      startDate: fields.startDate.optional(),
+      endDate: fields.endDate.optional(),
+      paused: fields.paused.optional(),
     },
     {
       error: (issue) =>

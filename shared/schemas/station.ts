@@ -28,22 +28,27 @@ export const stationInput = z.object({
   locator: locatorField,
   notes: z.string().trim().max(2000, 'Use at most 2000 characters').optional().default(''),
   unitId: z.number().int().positive().nullable().optional().default(null),
-  region: z.enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]]).optional().default('itu1'),
+  region: z
+    .enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]])
+    .optional()
+    .default('itu1'),
   audioOffsetHz: audioOffsetField.optional().default(1500),
   transmitEnabled: z.boolean().optional().default(false),
 });
 export type StationInput = z.input<typeof stationInput>;
 
-export const stationPatch = z.object({
-  name: stationInput.shape.name,
-  callsign: encodableCallsign,
-  locator: locatorField,
-  notes: z.string().trim().max(2000, 'Use at most 2000 characters'),
-  unitId: z.number().int().positive().nullable(),
-  region: z.enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]]),
-  audioOffsetHz: audioOffsetField,
-  transmitEnabled: z.boolean(),
-}).partial();
+export const stationPatch = z
+  .object({
+    name: stationInput.shape.name,
+    callsign: encodableCallsign,
+    locator: locatorField,
+    notes: z.string().trim().max(2000, 'Use at most 2000 characters'),
+    unitId: z.number().int().positive().nullable(),
+    region: z.enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]]),
+    audioOffsetHz: audioOffsetField,
+    transmitEnabled: z.boolean(),
+  })
+  .partial();
 export type StationPatch = z.input<typeof stationPatch>;
 
 export type StationBand = {

@@ -49,7 +49,10 @@ export const unitInput = z.object({
   timeSource: z.enum(TIME_SOURCES),
   generatorKind: z.enum(GENERATOR_KINDS),
   referenceHz: z.number().min(1e6, 'The reference is at least 1 MHz').max(200e6, 'The reference is at most 200 MHz'),
-  tolerancePpm: z.number().min(0, 'A tolerance cannot be negative: give its size, e.g. 10 for ±10 ppm').max(1000, 'A tolerance above 1000 ppm is not a crystal'),
+  tolerancePpm: z
+    .number()
+    .min(0, 'A tolerance cannot be negative: give its size, e.g. 10 for ±10 ppm')
+    .max(1000, 'A tolerance above 1000 ppm is not a crystal'),
   tempCoPpmPerC: z.number().min(0, 'Give the coefficient’s size (no sign)').max(50).nullable().default(null),
   disciplined: z.boolean().default(false),
   generatorLevelDbm: z.number().min(-40, 'Below −40 dBm is not a generator output').max(30, 'Above 30 dBm is not a generator output'),

@@ -51,7 +51,9 @@ describe('/settings', () => {
     fireEvent.changeText(screen.getByLabelText('Your callsign (optional)'), 'q1imv');
     fireEvent.press(screen.getByLabelText('Save account'));
 
-    await waitFor(() => expect(calls).toEqual([{ url: '/api/auth/me', method: 'PATCH', body: { displayName: 'Ilse Marrow-Venn', callsign: 'Q1IMV' } }]));
+    await waitFor(() =>
+      expect(calls).toEqual([{ url: '/api/auth/me', method: 'PATCH', body: { displayName: 'Ilse Marrow-Venn', callsign: 'Q1IMV' } }]),
+    );
     await waitFor(() => expect(queryClient.getQueryData(sessionKeys.me())).toEqual(updated));
     await waitFor(() => expect(screenText()).toContain('Saved.'));
   });

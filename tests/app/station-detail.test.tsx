@@ -22,10 +22,7 @@ const attic = stationFixture({ notes: 'End-fed wire under the roof tiles.' });
 function renderDetail(user: SessionUser) {
   const queryClient = createTestQueryClient();
   queryClient.setQueryData(sessionKeys.me(), user);
-  return renderRoute(
-    { 'stations/index': () => null, 'stations/[id]': StationDetailRoute },
-    { initialUrl: '/stations/12', queryClient },
-  );
+  return renderRoute({ 'stations/index': () => null, 'stations/[id]': StationDetailRoute }, { initialUrl: '/stations/12', queryClient });
 }
 
 describe('/stations/[id]', () => {

@@ -103,18 +103,36 @@ for (const viewport of VIEWPORTS) {
 
         // — arrange a filter violation as the member: 20 m enabled on a unit that then loses its filters
         const unit = await call<{ id: number }>(member.page, 'POST', '/api/units', {
-          name: `Porch board ${v}`, serialLabel: 'PB-1', controller: 'Wi-Fi microcontroller', timeSource: 'network', generatorKind: 'pll',
-          referenceHz: 25e6, tolerancePpm: 10, tempCoPpmPerC: 0.5, disciplined: false, generatorLevelDbm: 10, attenuatorDb: 0, amplifier: null,
+          name: `Porch board ${v}`,
+          serialLabel: 'PB-1',
+          controller: 'Wi-Fi microcontroller',
+          timeSource: 'network',
+          generatorKind: 'pll',
+          referenceHz: 25e6,
+          tolerancePpm: 10,
+          tempCoPpmPerC: 0.5,
+          disciplined: false,
+          generatorLevelDbm: 10,
+          attenuatorDb: 0,
+          amplifier: null,
           filters: [{ bands: ['20m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 15.6e6 }],
-          antenna: { kind: 'dipole', bands: ['20m'], gainDbi: 2.15 }, notes: '',
+          antenna: { kind: 'dipole', bands: ['20m'], gainDbi: 2.15 },
+          notes: '',
         });
         assert.equal(unit.status, 201, JSON.stringify(unit.body));
         const stationName = `Porch beacon ${v}`;
         const station = await call<{ id: number }>(member.page, 'POST', '/api/stations', {
-          name: stationName, callsign: 'Q7WRT', locator: 'JO22', unitId: unit.body.id, transmitEnabled: true,
+          name: stationName,
+          callsign: 'Q7WRT',
+          locator: 'JO22',
+          unitId: unit.body.id,
+          transmitEnabled: true,
         });
         assert.equal(station.status, 201, JSON.stringify(station.body));
-        const band = await call(member.page, 'PUT', `/api/stations/${station.body.id}/bands/20m`, { enabled: true, calibrationOffsetHz: 0 });
+        const band = await call(member.page, 'PUT', `/api/stations/${station.body.id}/bands/20m`, {
+          enabled: true,
+          calibrationOffsetHz: 0,
+        });
         assert.equal(band.status, 200, JSON.stringify(band.body));
         const stripped = await call(member.page, 'PATCH', `/api/units/${unit.body.id}`, { filters: [] });
         assert.equal(stripped.status, 200, JSON.stringify(stripped.body));
@@ -141,7 +159,9 @@ for (const viewport of VIEWPORTS) {
         // — the owner of Attic beacon sees a notice and accepts the offset
         await signIn(owner.page, 'operator@faintline.example');
         await link(owner.page, /^Notices, \d+ unread$/).waitFor();
-        const attic = (await call<{ id: number; name: string; audioOffsetHz: number }[]>(owner.page, 'GET', '/api/stations')).body.find((s) => s.name === 'Attic beacon')!;
+        const attic = (await call<{ id: number; name: string; audioOffsetHz: number }[]>(owner.page, 'GET', '/api/stations')).body.find(
+          (s) => s.name === 'Attic beacon',
+        )!;
         await link(owner.page, /^Notices/).click();
         await owner.page.waitForURL(/\/notices$/);
         await visibleText(owner.page, /proposes moving Attic beacon/).waitFor();
@@ -150,7 +170,9 @@ for (const viewport of VIEWPORTS) {
         await button(owner.page, /^Accept .* for Attic beacon$/).waitFor();
         await screenshot(owner.page, `club-proposals-${v}`);
         // Wait for this accept itself: an earlier screen size's accepted proposal shows the same words.
-        const accepted = owner.page.waitForResponse((r) => /\/api\/offset-proposals\/\d+\/accept$/.test(r.url()) && r.request().method() === 'POST');
+        const accepted = owner.page.waitForResponse(
+          (r) => /\/api\/offset-proposals\/\d+\/accept$/.test(r.url()) && r.request().method() === 'POST',
+        );
         await button(owner.page, /^Accept .* for Attic beacon$/).click();
         assert.equal((await accepted).status(), 200);
         await visibleText(owner.page, /Accepted: the station uses the new offset/).waitFor();
@@ -203,14 +225,19 @@ for (const viewport of VIEWPORTS) {
         await screenshot(member.page, `club-activity-${v}`);
         await owner.page.goto(`${BASE_URL}/activity`);
         await visibleText(owner.page, /Accepted the club's audio offset .* for Attic beacon/).waitFor();
-        assert.equal(await owner.page.getByRole('link', { name: 'Download CSV' }).locator('visible=true').first().getAttribute('href'), '/api/audit?format=csv');
+        assert.equal(
+          await owner.page.getByRole('link', { name: 'Download CSV' }).locator('visible=true').first().getAttribute('href'),
+          '/api/audit?format=csv',
+        );
 
         // put Attic beacon back, so the next screen size finds the seeded collision again
         await call(owner.page, 'PATCH', `/api/stations/${attic.id}`, { audioOffsetHz: attic.audioOffsetHz });
         assert.deepEqual([...admin.errors, ...member.errors, ...owner.errors], []);
       } catch (error) {
         // what each browser showed when it failed, for the person reading the report
-        await Promise.all([admin, member, owner].map((b, i) => b.page.screenshot({ path: `screenshots/club-failure-${v}-${i}.png` }).catch(() => {})));
+        await Promise.all(
+          [admin, member, owner].map((b, i) => b.page.screenshot({ path: `screenshots/club-failure-${v}-${i}.png` }).catch(() => {})),
+        );
         throw error;
       } finally {
         await Promise.all([admin.close(), member.close(), owner.close()]);

@@ -5,7 +5,17 @@ import type { Page } from 'playwright-core';
 import { DEMO_DEVICES } from '@/server/db/seed/demo-devices';
 import { SimulatedDevice } from '@/server/simulator/device-sim';
 
-import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, visibleText, type Browser, type RunningServer } from './harness';
+import {
+  BASE_URL,
+  VIEWPORTS,
+  openBrowser,
+  screenshot,
+  signIn,
+  startServer,
+  visibleText,
+  type Browser,
+  type RunningServer,
+} from './harness';
 
 // Short thresholds so a silence shows within seconds: offline after 10 s, alert rounds every 2 s.
 const FAST_ENV = { DEVICE_OFFLINE_AFTER_S: '10', ALERTS_CRON: '*/2 * * * * *', DEVICE_RATE_LIMIT: '100000', DEVICE_CACHE_MS: '0' };
@@ -45,70 +55,77 @@ function atticText(page: Page, text: string | RegExp) {
 }
 
 describe('fleet health with a live simulated device', () => {
-  it('when the device falls silent, both screen sizes show it go offline and raise an alert, then recover', { timeout: 420_000 }, async () => {
-    const started = Date.now();
-    const browsers: Browser[] = [];
-    try {
-      for (const viewport of [VIEWPORTS[1], VIEWPORTS[0]]) browsers.push(await openBrowser(viewport));
-      const [wide, phone] = browsers as [Browser, Browser];
-      await signIn(wide.page, 'operator@faintline.example');
-      await visibleText(wide.page, /Ilse Marrow/).waitFor();
+  it(
+    'when the device falls silent, both screen sizes show it go offline and raise an alert, then recover',
+    { timeout: 420_000 },
+    async () => {
+      const started = Date.now();
+      const browsers: Browser[] = [];
+      try {
+        for (const viewport of [VIEWPORTS[1], VIEWPORTS[0]]) browsers.push(await openBrowser(viewport));
+        const [wide, phone] = browsers as [Browser, Browser];
+        await signIn(wide.page, 'operator@faintline.example');
+        await visibleText(wide.page, /Ilse Marrow/).waitFor();
 
-      // thresholds as short as they go, and the densest rotation the editor allows (every other slot)
-      const stations = await callApi(wide.page, 'GET', '/stations');
-      const attic = (stations.body as { id: number; name: string }[]).find((s) => s.name === 'Attic beacon')!;
-      assert.ok(attic, 'the demo data has the Attic beacon');
-      const settings = await callApi(wide.page, 'PUT', `/stations/${attic.id}/alert-settings`, { silentMinutes: 1, clockOffsetMs: 10_000 });
-      assert.equal(settings.status, 200, JSON.stringify(settings.body));
-      const schedule = await callApi(wide.page, 'PATCH', `/stations/${attic.id}/schedule`, { cadence: { kind: 'every-nth', nth: 2 } });
-      assert.equal(schedule.status, 200, JSON.stringify(schedule.body));
+        // thresholds as short as they go, and the densest rotation the editor allows (every other slot)
+        const stations = await callApi(wide.page, 'GET', '/stations');
+        const attic = (stations.body as { id: number; name: string }[]).find((s) => s.name === 'Attic beacon')!;
+        assert.ok(attic, 'the demo data has the Attic beacon');
+        const settings = await callApi(wide.page, 'PUT', `/stations/${attic.id}/alert-settings`, {
+          silentMinutes: 1,
+          clockOffsetMs: 10_000,
+        });
+        assert.equal(settings.status, 200, JSON.stringify(settings.body));
+        const schedule = await callApi(wide.page, 'PATCH', `/stations/${attic.id}/schedule`, { cadence: { kind: 'every-nth', nth: 2 } });
+        assert.equal(schedule.status, 200, JSON.stringify(schedule.body));
 
-      device = new SimulatedDevice({ baseUrl: BASE_URL, token: ATTIC_TOKEN, name: 'attic', speed: 60, silenceChance: 0 });
-      device.start();
+        device = new SimulatedDevice({ baseUrl: BASE_URL, token: ATTIC_TOKEN, name: 'attic', speed: 60, silenceChance: 0 });
+        device.start();
 
-      await signIn(phone.page, 'operator@faintline.example');
-      await visibleText(phone.page, /Ilse Marrow/).waitFor();
-      for (const { page } of browsers) {
-        await page.goto(`${BASE_URL}/health`);
-        await visibleText(page, 'Fleet health').waitFor();
-        await atticText(page, 'Online').waitFor({ timeout: 20_000 });
-        await atticText(page, /Heard \d+ s ago/).waitFor();
+        await signIn(phone.page, 'operator@faintline.example');
+        await visibleText(phone.page, /Ilse Marrow/).waitFor();
+        for (const { page } of browsers) {
+          await page.goto(`${BASE_URL}/health`);
+          await visibleText(page, 'Fleet health').waitFor();
+          await atticText(page, 'Online').waitFor({ timeout: 20_000 });
+          await atticText(page, /Heard \d+ s ago/).waitFor();
+        }
+        await screenshot(wide.page, 'e2e-health-online-wide');
+        await screenshot(phone.page, 'e2e-health-online-phone');
+
+        device.setSilent(true);
+        for (const { page } of browsers) await atticText(page, 'Offline').waitFor({ timeout: 30_000 });
+        // the silent rule needs a minute of silence with a transmission due in that minute: with a slot
+        // every 4 minutes that takes up to about 5 minutes (see the report: a server-side knob would make it seconds)
+        for (const { page } of browsers) await atticText(page, SILENT_TITLE).waitFor({ timeout: 320_000 });
+        await atticText(wide.page, /No word from the device for over a minute/).waitFor();
+        await screenshot(wide.page, 'e2e-health-alert-wide');
+        await screenshot(phone.page, 'e2e-health-alert-phone');
+
+        device.setSilent(false);
+        for (const { page } of browsers) {
+          await atticText(page, 'Online').waitFor({ timeout: 20_000 });
+          await atticText(page, SILENT_TITLE).waitFor({ state: 'hidden', timeout: 20_000 });
+        }
+        await screenshot(wide.page, 'e2e-health-recovered-wide');
+
+        // the station's page keeps the closed alert in its history
+        await atticText(wide.page, 'Attic beacon').click();
+        await wide.page.waitForURL(/\/health\/\d+$/);
+        await atticText(wide.page, /Silent while scheduled · resolved/).waitFor({ timeout: 15_000 });
+        await atticText(wide.page, 'No open alerts.').waitFor();
+        await atticText(wide.page, 'Clock offset (ms)').waitFor();
+        await screenshot(wide.page, 'e2e-health-station-wide');
+
+        for (const browser of browsers) assert.deepEqual(browser.errors, []);
+        console.log(`health cycle took ${Math.round((Date.now() - started) / 1000)} s`);
+      } finally {
+        device?.stop();
+        device = null;
+        for (const browser of browsers) await browser.close();
       }
-      await screenshot(wide.page, 'e2e-health-online-wide');
-      await screenshot(phone.page, 'e2e-health-online-phone');
-
-      device.setSilent(true);
-      for (const { page } of browsers) await atticText(page, 'Offline').waitFor({ timeout: 30_000 });
-      // the silent rule needs a minute of silence with a transmission due in that minute: with a slot
-      // every 4 minutes that takes up to about 5 minutes (see the report: a server-side knob would make it seconds)
-      for (const { page } of browsers) await atticText(page, SILENT_TITLE).waitFor({ timeout: 320_000 });
-      await atticText(wide.page, /No word from the device for over a minute/).waitFor();
-      await screenshot(wide.page, 'e2e-health-alert-wide');
-      await screenshot(phone.page, 'e2e-health-alert-phone');
-
-      device.setSilent(false);
-      for (const { page } of browsers) {
-        await atticText(page, 'Online').waitFor({ timeout: 20_000 });
-        await atticText(page, SILENT_TITLE).waitFor({ state: 'hidden', timeout: 20_000 });
-      }
-      await screenshot(wide.page, 'e2e-health-recovered-wide');
-
-      // the station's page keeps the closed alert in its history
-      await atticText(wide.page, 'Attic beacon').click();
-      await wide.page.waitForURL(/\/health\/\d+$/);
-      await atticText(wide.page, /Silent while scheduled · resolved/).waitFor({ timeout: 15_000 });
-      await atticText(wide.page, 'No open alerts.').waitFor();
-      await atticText(wide.page, 'Clock offset (ms)').waitFor();
-      await screenshot(wide.page, 'e2e-health-station-wide');
-
-      for (const browser of browsers) assert.deepEqual(browser.errors, []);
-      console.log(`health cycle took ${Math.round((Date.now() - started) / 1000)} s`);
-    } finally {
-      device?.stop();
-      device = null;
-      for (const browser of browsers) await browser.close();
-    }
-  });
+    },
+  );
 });
 
 for (const viewport of VIEWPORTS) {

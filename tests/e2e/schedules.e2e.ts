@@ -28,8 +28,15 @@ async function threeBandStation(page: Page, stationName: string): Promise<number
     generatorLevelDbm: 10,
     filters: [filter('20m', 15.6e6), filter('40m', 7.8e6), filter('80m', 4.2e6)],
   });
-  const station = await send('POST', '/stations', { name: stationName, callsign: 'Q1IMW', locator: 'IO91WM', unitId: unit.id, audioOffsetHz: 1500 });
-  for (const band of ['20m', '40m', '80m']) await send('PUT', `/stations/${station.id}/bands/${band}`, { enabled: true, calibrationOffsetHz: 0 });
+  const station = await send('POST', '/stations', {
+    name: stationName,
+    callsign: 'Q1IMW',
+    locator: 'IO91WM',
+    unitId: unit.id,
+    audioOffsetHz: 1500,
+  });
+  for (const band of ['20m', '40m', '80m'])
+    await send('PUT', `/stations/${station.id}/bands/${band}`, { enabled: true, calibrationOffsetHz: 0 });
   return station.id as number;
 }
 
@@ -88,14 +95,22 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, `Three bands ${viewport.name}`).waitFor();
         await page.getByLabel('Schedule status: Running').locator('visible=true').waitFor();
         await visibleText(page, 'Next transmission in').waitFor();
-        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg text', { hasText: 'UTC' }).first().waitFor();
+        await page
+          .getByRole('img', { name: /^Timeline of \d+ transmissions/ })
+          .locator('svg text', { hasText: 'UTC' })
+          .first()
+          .waitFor();
         await screenshot(page, `e2e-schedule-saved-${viewport.name}`);
 
         // the server stored the rotation as built
         const saved = await (await page.request.get(`${BASE_URL}/api/stations/${stationId}/schedule`)).json();
         assert.deepEqual(
           saved.steps.map((s: { bandId: string; activeHoursUtc: unknown }) => [s.bandId, s.activeHoursUtc]),
-          [['20m', null], ['40m', null], ['80m', { fromHour: 20, toHour: 6 }]],
+          [
+            ['20m', null],
+            ['40m', null],
+            ['80m', { fromHour: 20, toHour: 6 }],
+          ],
         );
 
         await page.getByRole('button', { name: 'Pause schedule' }).click();
@@ -119,7 +134,11 @@ for (const viewport of VIEWPORTS) {
         const attic = stations.find((s: { name: string }) => s.name === 'Attic beacon');
         await page.goto(`${BASE_URL}/stations/${attic.id}/schedule`);
         await visibleText(page, 'Day and night').waitFor();
-        await page.getByRole('img', { name: /^Timeline of \d+ transmissions/ }).locator('svg text', { hasText: 'UTC' }).first().waitFor();
+        await page
+          .getByRole('img', { name: /^Timeline of \d+ transmissions/ })
+          .locator('svg text', { hasText: 'UTC' })
+          .first()
+          .waitFor();
         await screenshot(page, `e2e-schedule-seeded-${viewport.name}`);
         assert.deepEqual(browser.errors, []);
       } catch (error) {

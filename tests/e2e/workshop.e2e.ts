@@ -55,7 +55,10 @@ for (const viewport of VIEWPORTS) {
 
         // photos: a file of the wrong kind is refused in words, a PNG uploads, and deleting asks first
         const choose = async (file: { name: string; mimeType: string; buffer: Buffer }) => {
-          const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Add a photo' }).click()]);
+          const [chooser] = await Promise.all([
+            page.waitForEvent('filechooser'),
+            page.getByRole('button', { name: 'Add a photo' }).click(),
+          ]);
           await chooser.setFiles(file);
         };
         await choose({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') });
@@ -128,7 +131,13 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, /Calibration: \+29\.60 Hz \(measured\)/).waitFor();
         await visibleText(page, /All four tones are inside the 40 m window/).waitFor();
         await visibleText(page, /All four tones are inside the 20 m window/).waitFor();
-        assert.equal(await page.getByText(/^Warning:/).locator('visible=true').count(), 0);
+        assert.equal(
+          await page
+            .getByText(/^Warning:/)
+            .locator('visible=true')
+            .count(),
+          0,
+        );
         await screenshot(page, `e2e-bands-${viewport.name}`);
 
         // 6. on-air detail for 40 m
@@ -150,7 +159,10 @@ for (const viewport of VIEWPORTS) {
         assert.equal(validate(config), true, JSON.stringify(validate.errors));
         assert.equal(config.station.id, stationId);
         assert.deepEqual(
-          config.bands.filter((b: { enabled: boolean }) => b.enabled).map((b: { bandId: string }) => b.bandId).sort(),
+          config.bands
+            .filter((b: { enabled: boolean }) => b.enabled)
+            .map((b: { bandId: string }) => b.bandId)
+            .sort(),
           ['20m', '40m'],
         );
         assert.equal(config.bands.find((b: { bandId: string }) => b.bandId === '40m').calibrationOffsetHz, 29.6);

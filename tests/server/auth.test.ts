@@ -74,7 +74,13 @@ describe('POST /api/auth/sign-in', () => {
     const { email } = await register();
     const statuses: number[] = [];
     for (let i = 0; i < server.config.SIGN_IN_ATTEMPTS + 1; i += 1) {
-      statuses.push((await request(server.app).post('/api/auth/sign-in').send({ email, password: `wrong-${i}` })).status);
+      statuses.push(
+        (
+          await request(server.app)
+            .post('/api/auth/sign-in')
+            .send({ email, password: `wrong-${i}` })
+        ).status,
+      );
     }
     expect(statuses.slice(0, server.config.SIGN_IN_ATTEMPTS).every((s) => s === 401)).toBe(true);
     expect(statuses.at(-1)).toBe(429);
@@ -161,7 +167,9 @@ describe('password reset by e-mail', () => {
     const { createPasswordReset } = await import('@/server/features/auth/auth.service');
     const longAgo = new Date(Date.now() - 31 * 60_000);
     const reset = await createPasswordReset(email, longAgo);
-    const res = await request(server.app).post('/api/auth/password-reset/confirm').send({ token: reset!.token, password: 'a-brand-new-password' });
+    const res = await request(server.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token: reset!.token, password: 'a-brand-new-password' });
     expect(res.status).toBe(400);
   });
 

@@ -18,7 +18,9 @@ async function scenario() {
   const clubId = await makeClub('Harbour Circle', admin.user.id, [member.user.id]);
   await makeClub('Other Circle', otherAdmin.user.id, [outsider.user.id]);
   const { body: unit } = await member.agent.post('/api/units').send(validUnit);
-  const { body: station } = await member.agent.post('/api/stations').send({ name: 'Member beacon', callsign: 'Q9ZZT', locator: 'JO22', unitId: unit.id, transmitEnabled: true });
+  const { body: station } = await member.agent
+    .post('/api/stations')
+    .send({ name: 'Member beacon', callsign: 'Q9ZZT', locator: 'JO22', unitId: unit.id, transmitEnabled: true });
   const agents: Record<Persona, request.Agent | ReturnType<typeof request>> = {
     anonymous: request(server.app),
     outsider: outsider.agent,
@@ -31,19 +33,72 @@ async function scenario() {
 
 // For each club route: the status each persona must get. Reads and admin actions are hidden (404)
 // from people outside the club, refused (403) to plain members, and allowed to this club's admins.
-const routes: { method: 'get' | 'post' | 'patch' | 'delete'; path: (c: number, s: number) => string; body?: object; expect: Record<Persona, number> }[] = [
+const routes: {
+  method: 'get' | 'post' | 'patch' | 'delete';
+  path: (c: number, s: number) => string;
+  body?: object;
+  expect: Record<Persona, number>;
+}[] = [
   { method: 'get', path: (c) => `/api/clubs/${c}`, expect: { anonymous: 401, outsider: 404, member: 200, otherAdmin: 404, admin: 200 } },
-  { method: 'patch', path: (c) => `/api/clubs/${c}`, body: { maxPowerDbm: 27 }, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/stations`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/review`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/conflicts`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/occupancy`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/invitations`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'post', path: (c) => `/api/clubs/${c}/invitations`, body: { email: 'new@test.faintline.example' }, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 } },
-  { method: 'get', path: (c) => `/api/clubs/${c}/audit`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 } },
-  { method: 'post', path: (c, s) => `/api/clubs/${c}/offset-proposals`, body: { stationId: 0, proposedOffsetHz: 1480 }, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 } },
-  { method: 'post', path: (c, s) => `/api/clubs/${c}/stations/${s}/suspension`, body: { reason: 'Testing the rules' }, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 } },
-  { method: 'delete', path: (c, s) => `/api/clubs/${c}/stations/${s}/suspension`, expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 204 } },
+  {
+    method: 'patch',
+    path: (c) => `/api/clubs/${c}`,
+    body: { maxPowerDbm: 27 },
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/stations`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/review`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/conflicts`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/occupancy`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/invitations`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'post',
+    path: (c) => `/api/clubs/${c}/invitations`,
+    body: { email: 'new@test.faintline.example' },
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 },
+  },
+  {
+    method: 'get',
+    path: (c) => `/api/clubs/${c}/audit`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 200 },
+  },
+  {
+    method: 'post',
+    path: (c, s) => `/api/clubs/${c}/offset-proposals`,
+    body: { stationId: 0, proposedOffsetHz: 1480 },
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 },
+  },
+  {
+    method: 'post',
+    path: (c, s) => `/api/clubs/${c}/stations/${s}/suspension`,
+    body: { reason: 'Testing the rules' },
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 },
+  },
+  {
+    method: 'delete',
+    path: (c, s) => `/api/clubs/${c}/stations/${s}/suspension`,
+    expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 204 },
+  },
 ];
 
 describe('club routes: who may do what', () => {
@@ -54,7 +109,10 @@ describe('club routes: who may do what', () => {
         const body = route.body && 'stationId' in route.body ? { ...route.body, stationId: station.id } : route.body;
         const agent = agents[persona] as request.Agent;
         const res = await agent[route.method](route.path(clubId, station.id)).send(body ?? {});
-        expect({ route: `${route.method} ${route.path(clubId, station.id)}`, status: res.status }).toEqual({ route: `${route.method} ${route.path(clubId, station.id)}`, status: route.expect[persona] });
+        expect({ route: `${route.method} ${route.path(clubId, station.id)}`, status: res.status }).toEqual({
+          route: `${route.method} ${route.path(clubId, station.id)}`,
+          status: route.expect[persona],
+        });
         if (res.status >= 400) expect(JSON.stringify(res.body)).not.toMatch(/Member beacon|Q9ZZT|Club Member/);
       }
     });
@@ -129,8 +187,12 @@ describe('suspension', () => {
   it('when the admin suspends a station, its plan and config say suspended, the owner gets mail and a notice; lifting restores it', async () => {
     const { admin, member, clubId, station } = await scenario();
     await member.agent.put(`/api/stations/${station.id}/bands/20m`).send({ enabled: true, calibrationOffsetHz: 0 });
-    await member.agent.post(`/api/stations/${station.id}/schedule`).send({ steps: [{ bandId: '20m', slots: 1 }], cadence: { kind: 'every-nth', nth: 5 }, startDate: '2026-01-01' });
-    const res = await admin.agent.post(`/api/clubs/${clubId}/stations/${station.id}/suspension`).send({ reason: 'Harmonics on 40 m reported by two members' });
+    await member.agent
+      .post(`/api/stations/${station.id}/schedule`)
+      .send({ steps: [{ bandId: '20m', slots: 1 }], cadence: { kind: 'every-nth', nth: 5 }, startDate: '2026-01-01' });
+    const res = await admin.agent
+      .post(`/api/clubs/${clubId}/stations/${station.id}/suspension`)
+      .send({ reason: 'Harmonics on 40 m reported by two members' });
     expect(res.status).toBe(201);
     const mail = await server.smtp.waitFor((m) => m.to.includes(member.email) && /suspended/.test(m.subject));
     expect(mail.text).toMatch(/Harmonics on 40 m/);
@@ -165,9 +227,14 @@ describe('review, conflicts and proposals', () => {
     const { MembershipModel } = await import('@/server/db/models/membership.model');
     await MembershipModel.create({ clubId, userId: second.user.id, role: 'member' });
     const { body: unit2 } = await second.agent.post('/api/units').send(validUnit);
-    const { body: station2 } = await second.agent.post('/api/stations').send({ name: 'Twin beacon', callsign: 'Q9ZZU', locator: 'JO22', unitId: unit2.id, transmitEnabled: true });
+    const { body: station2 } = await second.agent
+      .post('/api/stations')
+      .send({ name: 'Twin beacon', callsign: 'Q9ZZU', locator: 'JO22', unitId: unit2.id, transmitEnabled: true });
     const rules = { steps: [{ bandId: '20m', slots: 1 }], cadence: { kind: 'every-nth', nth: 5 }, startDate: '2026-01-01' };
-    for (const [agent, s] of [[member.agent, station], [second.agent, station2]] as const) {
+    for (const [agent, s] of [
+      [member.agent, station],
+      [second.agent, station2],
+    ] as const) {
       await agent.put(`/api/stations/${s.id}/bands/20m`).send({ enabled: true, calibrationOffsetHz: 0 });
       await agent.post(`/api/stations/${s.id}/schedule`).send(rules);
     }
@@ -181,7 +248,9 @@ describe('review, conflicts and proposals', () => {
     expect(Math.abs(proposal.proposedOffsetHz - proposal.currentOffsetHz)).toBeGreaterThanOrEqual(6);
 
     const owner = proposal.stationId === station.id ? member : second;
-    const created = await admin.agent.post(`/api/clubs/${clubId}/offset-proposals`).send({ stationId: proposal.stationId, proposedOffsetHz: proposal.proposedOffsetHz });
+    const created = await admin.agent
+      .post(`/api/clubs/${clubId}/offset-proposals`)
+      .send({ stationId: proposal.stationId, proposedOffsetHz: proposal.proposedOffsetHz });
     expect(created.status).toBe(201);
     const mail = await server.smtp.waitFor((m) => m.to.includes(owner.email) && /audio offset/.test(m.subject));
     expect(mail.text).toMatch(/Nothing changes until you accept/);

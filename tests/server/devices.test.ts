@@ -23,19 +23,36 @@ beforeEach(() => truncateAll(server.sequelize));
 async function provisioned() {
   const owner = await signedInAgent(server.app);
   const { body: unit } = await owner.agent.post('/api/units').send(validUnit);
-  const { body: station } = await owner.agent.post('/api/stations').send({ name: 'Device station', callsign: 'Q9ZZT', locator: 'JO22AB', unitId: unit.id, transmitEnabled: true });
+  const { body: station } = await owner.agent
+    .post('/api/stations')
+    .send({ name: 'Device station', callsign: 'Q9ZZT', locator: 'JO22AB', unitId: unit.id, transmitEnabled: true });
   await owner.agent.put(`/api/stations/${station.id}/bands/20m`).send({ enabled: true, calibrationOffsetHz: 12.5 });
-  await owner.agent.post(`/api/stations/${station.id}/schedule`).send({ steps: [{ bandId: '20m', slots: 2 }], cadence: { kind: 'every-nth', nth: 5 }, startDate: '2026-01-01' });
+  await owner.agent
+    .post(`/api/stations/${station.id}/schedule`)
+    .send({ steps: [{ bandId: '20m', slots: 2 }], cadence: { kind: 'every-nth', nth: 5 }, startDate: '2026-01-01' });
   const { body } = await owner.agent.post(`/api/stations/${station.id}/device-token`);
   return { ...owner, unit, station, token: body.token as string };
 }
 
 const device = (token: string) => ({
   get: (path: string) => request(handler).get(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`),
-  post: (path: string, body: unknown) => request(handler).post(`/api/device/v1${path}`).set('Authorization', `Bearer ${token}`).send(body as object),
+  post: (path: string, body: unknown) =>
+    request(handler)
+      .post(`/api/device/v1${path}`)
+      .set('Authorization', `Bearer ${token}`)
+      .send(body as object),
 });
 
-const heartbeat = { uptimeS: 3600, firmwareVersion: '1.4.2', timeSource: 'network', clockOffsetMs: 12, temperatureC: 24.5, supplyV: 5.02, lastTransmission: null, errorCodes: [] };
+const heartbeat = {
+  uptimeS: 3600,
+  firmwareVersion: '1.4.2',
+  timeSource: 'network',
+  clockOffsetMs: 12,
+  temperatureC: 24.5,
+  supplyV: 5.02,
+  lastTransmission: null,
+  errorCodes: [],
+};
 
 describe('device tokens', () => {
   it('when created, the token works; rotated, the old one stops at once; revoked, the new one stops too', async () => {
@@ -110,10 +127,19 @@ describe('GET /api/device/v1/config', () => {
     const changes: [string, () => Promise<unknown>][] = [
       ['station', () => agent.patch(`/api/stations/${station.id}`).send({ audioOffsetHz: 1490 })],
       ['bands', () => agent.put(`/api/stations/${station.id}/bands/40m`).send({ enabled: true })],
-      ['calibration', () => agent.post(`/api/stations/${station.id}/calibration`).send({ source: 'typed', offsets: [{ bandId: '20m', calibrationOffsetHz: 13 }] })],
+      [
+        'calibration',
+        () =>
+          agent
+            .post(`/api/stations/${station.id}/calibration`)
+            .send({ source: 'typed', offsets: [{ bandId: '20m', calibrationOffsetHz: 13 }] }),
+      ],
       ['schedule', () => agent.patch(`/api/stations/${station.id}/schedule`).send({ stagger: { stepHz: 2, spanHz: 6 } })],
       ['unit', () => agent.patch(`/api/units/${unit.id}`).send({ attenuatorDb: 3 })],
-      ['suspension', () => admin.agent.post(`/api/clubs/${clubId}/stations/${station.id}/suspension`).send({ reason: 'Checking the device API' })],
+      [
+        'suspension',
+        () => admin.agent.post(`/api/clubs/${clubId}/stations/${station.id}/suspension`).send({ reason: 'Checking the device API' }),
+      ],
     ];
     for (const [what, change] of changes) {
       await new Promise((r) => setTimeout(r, 5)); // change stamps are kept to the millisecond
@@ -137,7 +163,10 @@ describe('the config poll on both paths', () => {
     expect(viaExpress.status).toBe(200);
     expect(viaExpress.headers.etag).toBe(fast.headers.etag);
     expect(viaExpress.body).toEqual(fast.body);
-    const notModified = await request(server.app).get('/api/device/v1/config').set('Authorization', `Bearer ${token}`).set('If-None-Match', fast.headers.etag);
+    const notModified = await request(server.app)
+      .get('/api/device/v1/config')
+      .set('Authorization', `Bearer ${token}`)
+      .set('If-None-Match', fast.headers.etag);
     expect(notModified.status).toBe(304);
   });
 
@@ -159,7 +188,10 @@ describe('config encodings', () => {
     try {
       const { port } = listener.address() as AddressInfo;
       const res = await new Promise<IncomingMessage>((resolve, reject) =>
-        get({ host: '127.0.0.1', port, path: '/api/device/v1/config', headers: { ...headers, authorization: `Bearer ${token}` } }, resolve).on('error', reject),
+        get(
+          { host: '127.0.0.1', port, path: '/api/device/v1/config', headers: { ...headers, authorization: `Bearer ${token}` } },
+          resolve,
+        ).on('error', reject),
       );
       const chunks: Buffer[] = [];
       for await (const chunk of res) chunks.push(chunk as Buffer);
@@ -209,7 +241,12 @@ describe('device reports', () => {
     expect(await HeartbeatModel.count({ where: { stationId: station.id } })).toBe(0);
     const good = await device(token).post('/heartbeat', heartbeat);
     expect(good.status).toBe(202);
-    expect((await agent.get(`/api/stations/${station.id}/health`)).body).toMatchObject({ online: true, clockOffsetMs: 12, temperatureC: 24.5, firmwareVersion: '1.4.2' });
+    expect((await agent.get(`/api/stations/${station.id}/health`)).body).toMatchObject({
+      online: true,
+      clockOffsetMs: 12,
+      temperatureC: 24.5,
+      firmwareVersion: '1.4.2',
+    });
   });
 
   it('when many heartbeats arrive at once, each is acknowledged only after it is stored', async () => {
@@ -218,15 +255,32 @@ describe('device reports', () => {
     const answers = await Promise.all(Array.from({ length: 25 }, (_, i) => device(token).post('/heartbeat', { ...heartbeat, uptimeS: i })));
     expect(answers.map((a) => a.status)).toEqual(Array(25).fill(202));
     const rows = await HeartbeatModel.findAll({ where: { stationId: station.id } });
-    expect(rows.map((r) => JSON.parse(r.report).uptimeS).sort((a: number, b: number) => a - b)).toEqual(Array.from({ length: 25 }, (_, i) => i));
+    expect(rows.map((r) => JSON.parse(r.report).uptimeS).sort((a: number, b: number) => a - b)).toEqual(
+      Array.from({ length: 25 }, (_, i) => i),
+    );
   });
 
   it('when transmissions are logged, they are stored; a bad band is refused', async () => {
     const { agent, station, token } = await provisioned();
-    const sent = await device(token).post('/transmissions', { transmissions: [{ startUtc: new Date(Math.floor(Date.now() / 120_000) * 120_000 + 1000).toISOString(), bandId: '20m', frequencyHz: 14_097_100, messageText: 'Q9ZZT JO22 10' }] });
+    const sent = await device(token).post('/transmissions', {
+      transmissions: [
+        {
+          startUtc: new Date(Math.floor(Date.now() / 120_000) * 120_000 + 1000).toISOString(),
+          bandId: '20m',
+          frequencyHz: 14_097_100,
+          messageText: 'Q9ZZT JO22 10',
+        },
+      ],
+    });
     expect(sent.status).toBe(202);
     expect((await agent.get(`/api/stations/${station.id}/health`)).body.recent).toHaveLength(1);
-    expect((await device(token).post('/transmissions', { transmissions: [{ startUtc: 'now', bandId: '11m', frequencyHz: 1, messageText: 'x' }] })).status).toBe(400);
+    expect(
+      (
+        await device(token).post('/transmissions', {
+          transmissions: [{ startUtc: 'now', bandId: '11m', frequencyHz: 1, messageText: 'x' }],
+        })
+      ).status,
+    ).toBe(400);
   });
 
   it('when a device sends more than its limit in a minute, responds 429', async () => {
@@ -244,7 +298,13 @@ describe('alerts, with a controllable clock', () => {
     const { HeartbeatModel, AlertModel } = await import('@/server/db/models/device.model');
     const { station, email } = await provisioned();
     const t0 = Date.UTC(2026, 11, 2, 12, 0, 0);
-    await HeartbeatModel.create({ stationId: station.id, receivedAt: new Date(t0), report: JSON.stringify(heartbeat), clockOffsetMs: 5, temperatureC: 24 });
+    await HeartbeatModel.create({
+      stationId: station.id,
+      receivedAt: new Date(t0),
+      report: JSON.stringify(heartbeat),
+      clockOffsetMs: 5,
+      temperatureC: 24,
+    });
     expect(await evaluateAlerts(server.sequelize, t0 + 60_000)).toEqual([]);
 
     const later = t0 + 45 * 60_000; // silent 45 minutes, limit 30
@@ -256,7 +316,13 @@ describe('alerts, with a controllable clock', () => {
     expect(again).toEqual([]);
     expect(await AlertModel.count({ where: { stationId: station.id } })).toBe(1);
 
-    await HeartbeatModel.create({ stationId: station.id, receivedAt: new Date(later + 90_000), report: JSON.stringify(heartbeat), clockOffsetMs: 5, temperatureC: 24 });
+    await HeartbeatModel.create({
+      stationId: station.id,
+      receivedAt: new Date(later + 90_000),
+      report: JSON.stringify(heartbeat),
+      clockOffsetMs: 5,
+      temperatureC: 24,
+    });
     expect(await evaluateAlerts(server.sequelize, later + 120_000)).toEqual([]);
     const alert = await AlertModel.findOne({ where: { stationId: station.id } });
     expect(alert!.resolvedAt).not.toBeNull();
@@ -279,7 +345,13 @@ describe('alerts, with a controllable clock', () => {
     await HeartbeatModel.create({ stationId: station.id, receivedAt: new Date(t0), report: '{}', clockOffsetMs: 1800, temperatureC: 24 });
     const mails = await evaluateAlerts(server.sequelize, t0 + 1000);
     expect(mails!.map((m) => m.subject)).toEqual([expect.stringMatching(/clock off/)]);
-    await HeartbeatModel.create({ stationId: station.id, receivedAt: new Date(t0 + 60_000), report: '{}', clockOffsetMs: 40, temperatureC: 24 });
+    await HeartbeatModel.create({
+      stationId: station.id,
+      receivedAt: new Date(t0 + 60_000),
+      report: '{}',
+      clockOffsetMs: 40,
+      temperatureC: 24,
+    });
     await evaluateAlerts(server.sequelize, t0 + 61_000);
     expect(await AlertModel.count({ where: { stationId: station.id, resolvedAt: null } })).toBe(0);
   });

@@ -15,7 +15,9 @@ const threeBandUnit = {
 async function stationReady() {
   const owner = await signedInAgent(server.app);
   const { body: unit } = await owner.agent.post('/api/units').send(threeBandUnit);
-  const { body: station } = await owner.agent.post('/api/stations').send({ name: 'Rotator', callsign: 'Q9ZZT', locator: 'JO22', unitId: unit.id });
+  const { body: station } = await owner.agent
+    .post('/api/stations')
+    .send({ name: 'Rotator', callsign: 'Q9ZZT', locator: 'JO22', unitId: unit.id });
   for (const band of ['80m', '40m', '20m']) {
     await owner.agent.put(`/api/stations/${station.id}/bands/${band}`).send({ enabled: true, calibrationOffsetHz: 0 });
   }
@@ -56,7 +58,9 @@ describe('schedules API', () => {
 
   it('when a step uses a band no filter covers, responds 400 saying why and saves nothing', async () => {
     const { agent, station } = await stationReady();
-    const res = await agent.post(`/api/stations/${station.id}/schedule`).send({ ...rotation, steps: [...rotation.steps, { bandId: '10m', slots: 1 }] });
+    const res = await agent
+      .post(`/api/stations/${station.id}/schedule`)
+      .send({ ...rotation, steps: [...rotation.steps, { bandId: '10m', slots: 1 }] });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['steps.3']).toMatch(/10 m/);
     expect((await agent.get(`/api/stations/${station.id}/schedule`)).status).toBe(404);

@@ -12,7 +12,13 @@ let fakeS3: S3rver;
 let s3Port = 0;
 
 beforeAll(async () => {
-  fakeS3 = new S3rver({ port: 0, address: '127.0.0.1', silent: true, directory: path.join(folder, 's3'), configureBuckets: [{ name: 'faintline-test', configs: [] }] });
+  fakeS3 = new S3rver({
+    port: 0,
+    address: '127.0.0.1',
+    silent: true,
+    directory: path.join(folder, 's3'),
+    configureBuckets: [{ name: 'faintline-test', configs: [] }],
+  });
   const address = (await fakeS3.run()) as unknown as { port: number };
   s3Port = address.port;
 });
@@ -25,7 +31,14 @@ const drivers: [string, () => FileStorage][] = [
   ['local disk', () => localDiskStorage(path.join(folder, 'disk'))],
   [
     'S3-compatible',
-    () => s3Storage({ endpoint: `http://127.0.0.1:${s3Port}`, region: 'us-east-1', bucket: 'faintline-test', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' }),
+    () =>
+      s3Storage({
+        endpoint: `http://127.0.0.1:${s3Port}`,
+        region: 'us-east-1',
+        bucket: 'faintline-test',
+        accessKeyId: 'S3RVER',
+        secretAccessKey: 'S3RVER',
+      }),
   ],
 ];
 
@@ -48,7 +61,9 @@ describe.each(drivers)('file storage on %s', (_name, make) => {
 
 describe('local disk storage', () => {
   it('when a key tries to leave the upload folder, refuses it', async () => {
-    await expect(localDiskStorage(path.join(folder, 'disk')).put('../escape.txt', Buffer.from('x'), 'text/plain')).rejects.toThrow(/escapes/);
+    await expect(localDiskStorage(path.join(folder, 'disk')).put('../escape.txt', Buffer.from('x'), 'text/plain')).rejects.toThrow(
+      /escapes/,
+    );
   });
 });
 
@@ -67,10 +82,18 @@ describe('unit photos through the S3 driver', () => {
       await truncateAll(server.sequelize);
       const { agent } = await signedInAgent(server.app);
       const { body: unit } = await agent.post('/api/units').send(validUnit);
-      const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#335566' } }).png().toBuffer();
+      const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#335566' } })
+        .png()
+        .toBuffer();
       const up = await agent.post(`/api/units/${unit.id}/photos`).attach('photo', png, { filename: 'a.png', contentType: 'image/png' });
       expect(up.status).toBe(201);
-      const stored = s3Storage({ endpoint: `http://127.0.0.1:${s3Port}`, region: 'us-east-1', bucket: 'faintline-test', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' });
+      const stored = s3Storage({
+        endpoint: `http://127.0.0.1:${s3Port}`,
+        region: 'us-east-1',
+        bucket: 'faintline-test',
+        accessKeyId: 'S3RVER',
+        secretAccessKey: 'S3RVER',
+      });
       const { UnitPhotoModel } = await import('@/server/db/models/unit-photo.model');
       const row = await UnitPhotoModel.findByPk(up.body.id);
       expect((await stored.get(row!.thumbKey))?.contentType).toBe('image/webp');

@@ -10,7 +10,9 @@ afterAll(() => server.close());
 beforeEach(() => truncateAll(server.sequelize));
 
 const png = (width = 64, height = 48) =>
-  sharp({ create: { width, height, channels: 3, background: { r: 20, g: 90, b: 110 } } }).png().toBuffer();
+  sharp({ create: { width, height, channels: 3, background: { r: 20, g: 90, b: 110 } } })
+    .png()
+    .toBuffer();
 
 describe('POST /api/units', () => {
   it('when an operator registers a valid unit, responds 201 with defaults filled in', async () => {
@@ -80,7 +82,9 @@ describe('unit photos', () => {
     const admin = await signedInAgent(server.app);
     await makeClub('Photo Circle', admin.user.id, [member.user.id]);
     const { body: unit } = await member.agent.post('/api/units').send(validUnit);
-    const up = await member.agent.post(`/api/units/${unit.id}/photos`).attach('photo', await png(800, 600), { filename: 'board.png', contentType: 'image/png' });
+    const up = await member.agent
+      .post(`/api/units/${unit.id}/photos`)
+      .attach('photo', await png(800, 600), { filename: 'board.png', contentType: 'image/png' });
     expect(up.status).toBe(201);
     expect(up.body.contentType).toBe('image/png');
 
@@ -112,9 +116,13 @@ describe('unit photos', () => {
     const { agent } = await signedInAgent(server.app);
     const { body: unit } = await agent.post('/api/units').send(validUnit);
     const text = Buffer.from('this is not a picture');
-    const plain = await agent.post(`/api/units/${unit.id}/photos`).attach('photo', text, { filename: 'notes.txt', contentType: 'text/plain' });
+    const plain = await agent
+      .post(`/api/units/${unit.id}/photos`)
+      .attach('photo', text, { filename: 'notes.txt', contentType: 'text/plain' });
     expect(plain.status).toBe(415);
-    const disguised = await agent.post(`/api/units/${unit.id}/photos`).attach('photo', text, { filename: 'fake.png', contentType: 'image/png' });
+    const disguised = await agent
+      .post(`/api/units/${unit.id}/photos`)
+      .attach('photo', text, { filename: 'fake.png', contentType: 'image/png' });
     expect(disguised.status).toBe(400);
     expect(disguised.body.error.fields.photo).toMatch(/JPEG, PNG or WebP/);
     expect((await agent.get(`/api/units/${unit.id}`)).body.photos).toEqual([]);
@@ -124,7 +132,9 @@ describe('unit photos', () => {
     const owner = await signedInAgent(server.app);
     const { body: unit } = await owner.agent.post('/api/units').send(validUnit);
     const stranger = await signedInAgent(server.app);
-    const res = await stranger.agent.post(`/api/units/${unit.id}/photos`).attach('photo', await png(), { filename: 'x.png', contentType: 'image/png' });
+    const res = await stranger.agent
+      .post(`/api/units/${unit.id}/photos`)
+      .attach('photo', await png(), { filename: 'x.png', contentType: 'image/png' });
     expect(res.status).toBe(404);
   });
 });

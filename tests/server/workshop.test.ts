@@ -84,15 +84,23 @@ describe('calibration', () => {
     await agent.put(`/api/stations/${station.id}/bands/20m`).send({ enabled: true });
     await agent.put(`/api/stations/${station.id}/bands/40m`).send({ enabled: true });
     const commandedHz = 7_040_100;
-    const res = await agent.post(`/api/stations/${station.id}/calibration/proposal`).send({ bandId: '40m', commandedHz, observedHz: commandedHz + 29.6 });
+    const res = await agent
+      .post(`/api/stations/${station.id}/calibration/proposal`)
+      .send({ bandId: '40m', commandedHz, observedHz: commandedHz + 29.6 });
     expect(res.status).toBe(200);
     // ppm = (observed / commanded − 1) · 10⁶ (definition of parts per million)
     expect(res.body.referenceErrorPpm).toBeCloseTo((29.6 / commandedHz) * 1e6, 6);
-    const byBand = Object.fromEntries(res.body.offsets.map((o: { bandId: string; calibrationOffsetHz: number }) => [o.bandId, o.calibrationOffsetHz]));
+    const byBand = Object.fromEntries(
+      res.body.offsets.map((o: { bandId: string; calibrationOffsetHz: number }) => [o.bandId, o.calibrationOffsetHz]),
+    );
     // 20 m carrier 14 097 100 Hz scales the same ppm: 14 097 100 × 29.6 / 7 040 100
     expect(byBand['20m']).toBeCloseTo((14_097_100 * 29.6) / commandedHz, 1);
     expect(byBand['40m']).toBeCloseTo(29.6, 1);
-    expect((await agent.get(`/api/stations/${station.id}`)).body.bands.every((b: { calibrationOffsetHz: unknown }) => b.calibrationOffsetHz === null)).toBe(true);
+    expect(
+      (await agent.get(`/api/stations/${station.id}`)).body.bands.every(
+        (b: { calibrationOffsetHz: unknown }) => b.calibrationOffsetHz === null,
+      ),
+    ).toBe(true);
   });
 
   it('when the operator accepts proposals, they are saved together with the ppm', async () => {
@@ -100,11 +108,20 @@ describe('calibration', () => {
     const res = await agent.post(`/api/stations/${station.id}/calibration`).send({
       source: 'measured',
       referenceErrorPpm: 4.2,
-      offsets: [{ bandId: '40m', calibrationOffsetHz: 29.6 }, { bandId: '20m', calibrationOffsetHz: 59.2 }],
+      offsets: [
+        { bandId: '40m', calibrationOffsetHz: 29.6 },
+        { bandId: '20m', calibrationOffsetHz: 59.2 },
+      ],
     });
     expect(res.status).toBe(200);
     expect(res.body.referenceErrorPpm).toBe(4.2);
-    expect(res.body.bands.map((b: { bandId: string; calibrationOffsetHz: number; calibrationSource: string }) => [b.bandId, b.calibrationOffsetHz, b.calibrationSource])).toEqual([
+    expect(
+      res.body.bands.map((b: { bandId: string; calibrationOffsetHz: number; calibrationSource: string }) => [
+        b.bandId,
+        b.calibrationOffsetHz,
+        b.calibrationSource,
+      ]),
+    ).toEqual([
       ['20m', 59.2, 'measured'],
       ['40m', 29.6, 'measured'],
     ]);
@@ -114,7 +131,10 @@ describe('calibration', () => {
     const { agent, station } = await stationWithUnit();
     const res = await agent.post(`/api/stations/${station.id}/calibration`).send({
       source: 'typed',
-      offsets: [{ bandId: '40m', calibrationOffsetHz: 12 }, { bandId: '20m', calibrationOffsetHz: 9000 }],
+      offsets: [
+        { bandId: '40m', calibrationOffsetHz: 12 },
+        { bandId: '20m', calibrationOffsetHz: 9000 },
+      ],
     });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['offsets.1.calibrationOffsetHz']).toMatch(/5000 Hz/);

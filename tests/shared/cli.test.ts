@@ -15,7 +15,11 @@ function run(...args: string[]): Promise<Run> {
   });
 }
 
-const lines = (r: Run): unknown[] => r.stdout.trim().split('\n').map((l) => JSON.parse(l));
+const lines = (r: Run): unknown[] =>
+  r.stdout
+    .trim()
+    .split('\n')
+    .map((l) => JSON.parse(l));
 
 describe('faintline command', () => {
   it('when asked for help, lists the commands and exits 0', async () => {
@@ -43,10 +47,7 @@ describe('faintline command', () => {
 
   it('when converting between locator and position, prints both ways', async () => {
     // E. T. Tyson, QST January 1989: Munich 48.14666 N, 11.60833 E is JN58td
-    const [to, from] = await Promise.all([
-      run('locator', '--lat=48.14666', '--lon=11.60833', '--precision=6'),
-      run('locator', 'JN58td'),
-    ]);
+    const [to, from] = await Promise.all([run('locator', '--lat=48.14666', '--lon=11.60833', '--precision=6'), run('locator', 'JN58td')]);
     expect(lines(to)[0]).toEqual({ locator: 'JN58td' });
     expect(lines(from)[0]).toMatchObject({ locator: 'JN58td', lat: expect.closeTo(48.1458, 3), lon: expect.closeTo(11.625, 3) });
   });

@@ -13,7 +13,11 @@ describe('squareWaveHarmonics', () => {
   });
 
   it('when the duty cycle is 50 %, the even harmonics vanish', () => {
-    expect(squareWaveHarmonics(7e6).filter((h) => h.harmonic % 2 === 0).every((h) => h.levelDbc === null)).toBe(true);
+    expect(
+      squareWaveHarmonics(7e6)
+        .filter((h) => h.harmonic % 2 === 0)
+        .every((h) => h.levelDbc === null),
+    ).toBe(true);
   });
 
   it('when the duty cycle is 25 %, the 2nd harmonic is −3.01 dBc and the 4th vanishes', () => {

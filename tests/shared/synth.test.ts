@@ -43,19 +43,22 @@ describe('planSynth', () => {
     [25e6, 17.5, 28_124_600 + 1500],
     [27e6, -8, 136_000 + 1500],
     [25e6, 3, 144_489_000 + 1500],
-  ])('when the reference is %i Hz off by %p ppm and the carrier is %i Hz, plans all four tones within 1 mHz', (referenceHz, ppm, carrierHz) => {
-    const r = planSynth({ referenceHz, referenceErrorPpm: ppm, targetsHz: toneFrequenciesHz(carrierHz) });
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
-    expect(r.maxAbsErrorHz).toBeLessThan(1e-3);
-    expect(r.outputDivider % 2).toBe(0);
-    for (const tone of r.tones) {
-      expect(tone.vcoHz).toBeGreaterThanOrEqual(600e6);
-      expect(tone.vcoHz).toBeLessThanOrEqual(900e6);
-      expect(tone.feedback.c).toBeLessThanOrEqual(MAX_DENOMINATOR);
-      expect(tone.registers.bytes).toHaveLength(8);
-    }
-  });
+  ])(
+    'when the reference is %i Hz off by %p ppm and the carrier is %i Hz, plans all four tones within 1 mHz',
+    (referenceHz, ppm, carrierHz) => {
+      const r = planSynth({ referenceHz, referenceErrorPpm: ppm, targetsHz: toneFrequenciesHz(carrierHz) });
+      expect(r.ok).toBe(true);
+      if (!r.ok) return;
+      expect(r.maxAbsErrorHz).toBeLessThan(1e-3);
+      expect(r.outputDivider % 2).toBe(0);
+      for (const tone of r.tones) {
+        expect(tone.vcoHz).toBeGreaterThanOrEqual(600e6);
+        expect(tone.vcoHz).toBeLessThanOrEqual(900e6);
+        expect(tone.feedback.c).toBeLessThanOrEqual(MAX_DENOMINATOR);
+        expect(tone.registers.bytes).toHaveLength(8);
+      }
+    },
+  );
 
   it('when the frequency is beyond what the generator reaches, refuses', () => {
     expect(planSynth({ referenceHz: 25e6, targetsHz: [1000] }).ok).toBe(false);

@@ -1,4 +1,12 @@
-import { nextSlotStartMs, slotPosition, slotsInRange, slotStartAtOrAfterMs, slotStartMs, SYMBOL_PERIOD_MS, TX_DURATION_MS } from '@/shared/domain/timing';
+import {
+  nextSlotStartMs,
+  slotPosition,
+  slotsInRange,
+  slotStartAtOrAfterMs,
+  slotStartMs,
+  SYMBOL_PERIOD_MS,
+  TX_DURATION_MS,
+} from '@/shared/domain/timing';
 
 const at = (iso: string): number => Date.parse(iso);
 

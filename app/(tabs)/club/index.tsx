@@ -23,11 +23,7 @@ export default function ClubRoute() {
           A club lets operators who share bands look after their beacons together: one plan, no collisions, the same limits.
         </Text>
       </View>
-      <ClubHub
-        clubs={user?.clubs ?? []}
-        pendingProposals={pending}
-        onCreate={() => router.push('/club/new')}
-      />
+      <ClubHub clubs={user?.clubs ?? []} pendingProposals={pending} onCreate={() => router.push('/club/new')} />
       {user?.adminOfClubIds.length ? <TextLink href="/club/health" label="Club fleet health" /> : null}
     </Screen>
   );

@@ -43,11 +43,7 @@ export default function StationDetailRoute() {
       <>
         <StationHeader
           station={station.data}
-          onEdit={
-            readOnly
-              ? undefined
-              : () => router.push({ pathname: '/stations/[id]/edit', params: { id: String(stationId) } })
-          }
+          onEdit={readOnly ? undefined : () => router.push({ pathname: '/stations/[id]/edit', params: { id: String(stationId) } })}
           onDelete={readOnly ? undefined : () => setConfirming(true)}
         />
         <StationDeviceLinks stationId={stationId} readOnly={readOnly} />

@@ -19,9 +19,7 @@ export default function StationsRoute() {
   let body;
   if (stations.isPending) body = <LoadingState label="Loading your stations…" />;
   else if (stations.isError)
-    body = (
-      <ErrorState title="Your stations could not be loaded" error={stations.error} onRetry={() => stations.refetch()} />
-    );
+    body = <ErrorState title="Your stations could not be loaded" error={stations.error} onRetry={() => stations.refetch()} />;
   else if (stations.data.length === 0)
     body = (
       <EmptyState

@@ -52,7 +52,9 @@ export default function UnitDetailRoute() {
     if (!(PHOTO_TYPES as readonly string[]).includes(file.type))
       return setPickError(`“${file.name}” is not a JPEG, PNG or WebP photo. Choose one of those.`);
     if (file.size > PHOTO_MAX_BYTES)
-      return setPickError(`“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a photo may be at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`);
+      return setPickError(
+        `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a photo may be at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`,
+      );
     setProgress({ sentBytes: 0, totalBytes: file.size });
     upload.mutate(file, { onSettled: () => setProgress(null) });
   };
@@ -104,7 +106,12 @@ export default function UnitDetailRoute() {
                   })
                 }
               />
-              <Button label="Delete" variant="danger" accessibilityLabel={`Delete ${unit.data.name}`} onPress={() => setAsking({ kind: 'unit' })} />
+              <Button
+                label="Delete"
+                variant="danger"
+                accessibilityLabel={`Delete ${unit.data.name}`}
+                onPress={() => setAsking({ kind: 'unit' })}
+              />
             </View>
           )}
         </View>

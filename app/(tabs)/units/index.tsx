@@ -25,8 +25,7 @@ export default function UnitsRoute() {
 
   let body;
   if (units.isPending) body = <LoadingState label="Loading your units…" />;
-  else if (units.isError)
-    body = <ErrorState title="Your units could not be loaded" error={units.error} onRetry={() => units.refetch()} />;
+  else if (units.isError) body = <ErrorState title="Your units could not be loaded" error={units.error} onRetry={() => units.refetch()} />;
   else if (units.data.length === 0)
     body = (
       <EmptyState

@@ -56,5 +56,6 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const table of ['job_locks', 'alerts', 'alert_settings', 'device_transmissions', 'device_heartbeats', 'device_tokens']) await qi.dropTable(table);
+  for (const table of ['job_locks', 'alerts', 'alert_settings', 'device_transmissions', 'device_heartbeats', 'device_tokens'])
+    await qi.dropTable(table);
 }

@@ -13,7 +13,13 @@ export class DeviceTokenModel extends Model<InferAttributes<DeviceTokenModel>, I
   declare updatedAt: CreationOptional<Date>;
   static initModel(sequelize: Sequelize) {
     DeviceTokenModel.init(
-      { id: pk, stationId: { ...stationRef, unique: true }, tokenHash: { type: DataTypes.CHAR(64), allowNull: false, unique: true }, createdAt: DataTypes.DATE(3), updatedAt: DataTypes.DATE(3) },
+      {
+        id: pk,
+        stationId: { ...stationRef, unique: true },
+        tokenHash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
       { sequelize, tableName: 'device_tokens' },
     );
   }
@@ -41,7 +47,10 @@ export class HeartbeatModel extends Model<InferAttributes<HeartbeatModel>, Infer
   }
 }
 
-export class DeviceTransmissionModel extends Model<InferAttributes<DeviceTransmissionModel>, InferCreationAttributes<DeviceTransmissionModel>> {
+export class DeviceTransmissionModel extends Model<
+  InferAttributes<DeviceTransmissionModel>,
+  InferCreationAttributes<DeviceTransmissionModel>
+> {
   declare id: CreationOptional<number>;
   declare stationId: number;
   declare startedAt: Date;

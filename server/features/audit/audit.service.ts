@@ -21,7 +21,19 @@ export type AuditRecord = {
   ownerId: number;
   clubId?: number | null;
   action: string;
-  entityType: 'user' | 'station' | 'unit' | 'band' | 'calibration' | 'schedule' | 'club' | 'membership' | 'invitation' | 'proposal' | 'suspension' | 'photo';
+  entityType:
+    | 'user'
+    | 'station'
+    | 'unit'
+    | 'band'
+    | 'calibration'
+    | 'schedule'
+    | 'club'
+    | 'membership'
+    | 'invitation'
+    | 'proposal'
+    | 'suspension'
+    | 'photo';
   entityId?: number | null;
   summary: string;
   before?: unknown;
@@ -68,7 +80,14 @@ const LIMIT = 500;
 
 /** An operator's own log: changes to their things, by anyone. */
 export async function listForOwner(ownerId: number) {
-  const rows = await AuditEntryModel.findAll({ where: { ownerId }, order: [['at', 'DESC'], ['id', 'DESC']], limit: LIMIT });
+  const rows = await AuditEntryModel.findAll({
+    where: { ownerId },
+    order: [
+      ['at', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: LIMIT,
+  });
   return rows.map(toEntry);
 }
 
@@ -76,7 +95,10 @@ export async function listForOwner(ownerId: number) {
 export async function listForClub(clubId: number, memberIds: number[]) {
   const rows = await AuditEntryModel.findAll({
     where: { [Op.or]: [{ clubId }, { ownerId: { [Op.in]: memberIds }, clubId: null }] },
-    order: [['at', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['at', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: LIMIT,
   });
   return rows.map(toEntry);
@@ -91,6 +113,8 @@ const csvCell = (value: unknown) => {
 
 export function toCsv(entries: AuditEntry[]) {
   const header = ['time_utc', 'who', 'action', 'what', 'id', 'summary', 'before', 'after'];
-  const lines = entries.map((e) => [e.atUtc, e.actorName, e.action, e.entityType, e.entityId, e.summary, e.before, e.after].map(csvCell).join(','));
+  const lines = entries.map((e) =>
+    [e.atUtc, e.actorName, e.action, e.entityType, e.entityId, e.summary, e.before, e.after].map(csvCell).join(','),
+  );
   return [header.join(','), ...lines].join('\r\n') + '\r\n';
 }

@@ -58,12 +58,7 @@ export async function createPasswordReset(email: string, now = new Date()) {
   return { token, email: user.email, displayName: user.displayName };
 }
 
-export async function confirmPasswordReset(
-  sequelize: Sequelize,
-  input: ResetConfirmInput,
-  bcryptCost: number,
-  now = new Date(),
-) {
+export async function confirmPasswordReset(sequelize: Sequelize, input: ResetConfirmInput, bcryptCost: number, now = new Date()) {
   const passwordHash = await bcrypt.hash(input.password, bcryptCost);
   await sequelize.transaction(async (transaction) => {
     const reset = await PasswordResetModel.findOne({
@@ -79,10 +74,7 @@ export async function confirmPasswordReset(
     await reset.update({ usedAt: now }, { transaction });
     await UserModel.update({ passwordHash }, { where: { id: reset.userId }, transaction });
     // Any other outstanding links for this account stop working too.
-    await PasswordResetModel.update(
-      { usedAt: now },
-      { where: { userId: reset.userId, usedAt: null }, transaction },
-    );
+    await PasswordResetModel.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: null }, transaction });
   });
 }
 
@@ -92,6 +84,18 @@ export async function updateProfile(user: SessionUser, input: ProfileInput) {
   await inTransaction(async (transaction) => {
     await UserModel.update({ displayName: input.displayName, callsign }, { where: { id: user.id }, transaction });
     const before = { displayName: user.displayName, callsign: user.callsign };
-    await audit.record({ actor: { id: user.id, displayName: input.displayName }, ownerId: user.id, action: 'profile.update', entityType: 'user', entityId: user.id, summary: 'Changed the name or callsign of the account', before, after: { displayName: input.displayName, callsign } }, transaction);
+    await audit.record(
+      {
+        actor: { id: user.id, displayName: input.displayName },
+        ownerId: user.id,
+        action: 'profile.update',
+        entityType: 'user',
+        entityId: user.id,
+        summary: 'Changed the name or callsign of the account',
+        before,
+        after: { displayName: input.displayName, callsign },
+      },
+      transaction,
+    );
   });
 }

@@ -86,7 +86,13 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
 
   router.post('/:clubId/stations/:stationId/suspension', async (req, res) => {
     const { reason } = suspensionInput.parse(req.body);
-    const { mail } = await moderation.suspend(sequelize, currentUser(req), club(req.params), parseId(req.params.stationId, 'Station'), reason);
+    const { mail } = await moderation.suspend(
+      sequelize,
+      currentUser(req),
+      club(req.params),
+      parseId(req.params.stationId, 'Station'),
+      reason,
+    );
     res.status(201).json({ suspended: true, reason });
     sendLater(mailer, logger, mail);
   });

@@ -12,7 +12,19 @@ export async function createClub(sequelize: Sequelize, user: SessionUser, input:
   return sequelize.transaction(async (transaction) => {
     const club = await ClubModel.create(input, { transaction });
     await MembershipModel.create({ clubId: club.id, userId: user.id, role: 'admin' }, { transaction });
-    await audit.record({ actor: user, ownerId: user.id, clubId: club.id, action: 'club.create', entityType: 'club', entityId: club.id, summary: `Created the club ${club.name}`, after: input }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId: club.id,
+        action: 'club.create',
+        entityType: 'club',
+        entityId: club.id,
+        summary: `Created the club ${club.name}`,
+        after: input,
+      },
+      transaction,
+    );
     return club.id;
   });
 }
@@ -28,7 +40,14 @@ export async function detail(user: SessionUser, clubId: number): Promise<ClubDet
     members: rows.map((m) => {
       const u = (m as MembershipModel & { user: UserModel }).user;
       // Members see each other's names; e-mail addresses only the admins.
-      return { userId: m.userId, displayName: u.displayName, callsign: u.callsign, email: membership.role === 'admin' ? u.email : '', role: m.role, joinedAt: m.createdAt.toISOString() };
+      return {
+        userId: m.userId,
+        displayName: u.displayName,
+        callsign: u.callsign,
+        email: membership.role === 'admin' ? u.email : '',
+        role: m.role,
+        joinedAt: m.createdAt.toISOString(),
+      };
     }),
   };
 }
@@ -38,7 +57,20 @@ export async function update(sequelize: Sequelize, user: SessionUser, clubId: nu
   const before = { name: club.name, maxPowerDbm: club.maxPowerDbm };
   await sequelize.transaction(async (transaction) => {
     await club.update(patch, { transaction });
-    await audit.record({ actor: user, ownerId: user.id, clubId, action: 'club.update', entityType: 'club', entityId: clubId, summary: `Changed the club's settings`, before, after: { ...before, ...patch } }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId,
+        action: 'club.update',
+        entityType: 'club',
+        entityId: clubId,
+        summary: `Changed the club's settings`,
+        before,
+        after: { ...before, ...patch },
+      },
+      transaction,
+    );
   });
 }
 
@@ -58,7 +90,19 @@ export async function removeMember(sequelize: Sequelize, user: SessionUser, club
       throw new AppError('conflict', 'The last admin cannot leave: make another member an admin first');
     }
     await target.destroy({ transaction });
-    await audit.record({ actor: user, ownerId: memberId, clubId, action: self ? 'member.leave' : 'member.remove', entityType: 'membership', entityId: memberId, summary: self ? 'Left the club' : 'Removed a member from the club', before: { role: target.role } }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: memberId,
+        clubId,
+        action: self ? 'member.leave' : 'member.remove',
+        entityType: 'membership',
+        entityId: memberId,
+        summary: self ? 'Left the club' : 'Removed a member from the club',
+        before: { role: target.role },
+      },
+      transaction,
+    );
   });
 }
 
@@ -72,6 +116,19 @@ export async function setRole(sequelize: Sequelize, user: SessionUser, clubId: n
     }
     const before = { role: target.role };
     await target.update({ role }, { transaction });
-    await audit.record({ actor: user, ownerId: memberId, clubId, action: 'member.role', entityType: 'membership', entityId: memberId, summary: role === 'admin' ? 'Made a member an admin' : 'Made an admin a member', before, after: { role } }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: memberId,
+        clubId,
+        action: 'member.role',
+        entityType: 'membership',
+        entityId: memberId,
+        summary: role === 'admin' ? 'Made a member an admin' : 'Made an admin a member',
+        before,
+        after: { role },
+      },
+      transaction,
+    );
   });
 }

@@ -26,10 +26,29 @@ export async function invite(sequelize: Sequelize, user: SessionUser, clubId: nu
   const token = randomBytes(32).toString('base64url');
   const row = await sequelize.transaction(async (transaction) => {
     const created = await InvitationModel.create(
-      { clubId, email, tokenHash: sha256(token), invitedById: user.id, expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_DAYS * 86_400_000), acceptedAt: null, acceptedById: null },
+      {
+        clubId,
+        email,
+        tokenHash: sha256(token),
+        invitedById: user.id,
+        expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_DAYS * 86_400_000),
+        acceptedAt: null,
+        acceptedById: null,
+      },
       { transaction },
     );
-    await audit.record({ actor: user, ownerId: user.id, clubId, action: 'invitation.create', entityType: 'invitation', entityId: created.id, summary: `Invited ${email}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId,
+        action: 'invitation.create',
+        entityType: 'invitation',
+        entityId: created.id,
+        summary: `Invited ${email}`,
+      },
+      transaction,
+    );
     return created;
   });
   const link = `${webOrigin}/join?token=${encodeURIComponent(token)}`;
@@ -61,7 +80,18 @@ export async function accept(sequelize: Sequelize, user: SessionUser, token: str
     const existing = await MembershipModel.findOne({ where: { clubId: row.clubId, userId: user.id }, transaction });
     if (!existing) await MembershipModel.create({ clubId: row.clubId, userId: user.id, role: 'member' }, { transaction });
     await row.update({ acceptedAt: now, acceptedById: user.id }, { transaction });
-    await audit.record({ actor: user, ownerId: user.id, clubId: row.clubId, action: 'member.join', entityType: 'membership', entityId: user.id, summary: 'Joined the club through an invitation' }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId: row.clubId,
+        action: 'member.join',
+        entityType: 'membership',
+        entityId: user.id,
+        summary: 'Joined the club through an invitation',
+      },
+      transaction,
+    );
     return { clubId: row.clubId };
   });
 }

@@ -16,7 +16,8 @@ import { memberIdsOf } from './clubs.repo';
 /** The station, if its owner belongs to the club. */
 async function clubStation(clubId: number, stationId: number) {
   const station = await stationsRepo.findById(stationId);
-  if (!station || !(await memberIdsOf(clubId)).includes(station.ownerId)) throw new AppError('not-found', `Station ${stationId} is not a station of this club`);
+  if (!station || !(await memberIdsOf(clubId)).includes(station.ownerId))
+    throw new AppError('not-found', `Station ${stationId} is not a station of this club`);
   const owner = (await UserModel.findByPk(station.ownerId))!;
   return { station, owner };
 }
@@ -28,7 +29,20 @@ export async function suspend(sequelize: Sequelize, user: SessionUser, clubId: n
   await sequelize.transaction(async (transaction) => {
     await stationsRepo.setSuspension(stationId, { reason, clubId }, transaction);
     await notify(owner.id, 'suspension', `${club.name} suspended ${station.name}: ${reason}`, `/stations/${stationId}`, transaction);
-    await audit.record({ actor: user, ownerId: owner.id, clubId, action: 'station.suspend', entityType: 'suspension', entityId: stationId, summary: `Suspended ${station.name} (${station.callsign}): ${reason}`, before: { suspended: false }, after: { suspended: true, reason } }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: owner.id,
+        clubId,
+        action: 'station.suspend',
+        entityType: 'suspension',
+        entityId: stationId,
+        summary: `Suspended ${station.name} (${station.callsign}): ${reason}`,
+        before: { suspended: false },
+        after: { suspended: true, reason },
+      },
+      transaction,
+    );
   });
   const mail: OutgoingMail = {
     to: owner.email,
@@ -44,10 +58,35 @@ export async function lift(sequelize: Sequelize, user: SessionUser, clubId: numb
   if (!station.suspension) throw new AppError('conflict', `${station.name} is not suspended`);
   await sequelize.transaction(async (transaction) => {
     await stationsRepo.setSuspension(stationId, null, transaction);
-    await notify(owner.id, 'suspension-lifted', `${club.name} lifted the suspension of ${station.name}`, `/stations/${stationId}`, transaction);
-    await audit.record({ actor: user, ownerId: owner.id, clubId, action: 'station.lift', entityType: 'suspension', entityId: stationId, summary: `Lifted the suspension of ${station.name}`, before: { suspended: true, reason: station.suspension?.reason }, after: { suspended: false } }, transaction);
+    await notify(
+      owner.id,
+      'suspension-lifted',
+      `${club.name} lifted the suspension of ${station.name}`,
+      `/stations/${stationId}`,
+      transaction,
+    );
+    await audit.record(
+      {
+        actor: user,
+        ownerId: owner.id,
+        clubId,
+        action: 'station.lift',
+        entityType: 'suspension',
+        entityId: stationId,
+        summary: `Lifted the suspension of ${station.name}`,
+        before: { suspended: true, reason: station.suspension?.reason },
+        after: { suspended: false },
+      },
+      transaction,
+    );
   });
-  return { mail: { to: owner.email, subject: `${station.name} may transmit again`, text: `Hello ${owner.displayName},\n\nAn admin of ${club.name} lifted the suspension of ${station.name} (${station.callsign}). Its schedule applies again.\n` } as OutgoingMail };
+  return {
+    mail: {
+      to: owner.email,
+      subject: `${station.name} may transmit again`,
+      text: `Hello ${owner.displayName},\n\nAn admin of ${club.name} lifted the suspension of ${station.name} (${station.callsign}). Its schedule applies again.\n`,
+    } as OutgoingMail,
+  };
 }
 
 async function toProposal(row: OffsetProposalModel): Promise<OffsetProposal> {
@@ -68,17 +107,52 @@ async function toProposal(row: OffsetProposalModel): Promise<OffsetProposal> {
 }
 
 /** An admin proposes an offset; the owner is told by mail and notice, and nothing changes until they accept. */
-export async function propose(sequelize: Sequelize, user: SessionUser, clubId: number, input: { stationId: number; proposedOffsetHz: number; reason: string }) {
+export async function propose(
+  sequelize: Sequelize,
+  user: SessionUser,
+  clubId: number,
+  input: { stationId: number; proposedOffsetHz: number; reason: string },
+) {
   const { club } = await requireAdmin(user, clubId);
   const { station, owner } = await clubStation(clubId, input.stationId);
   const row = await sequelize.transaction(async (transaction) => {
-    await OffsetProposalModel.update({ status: 'withdrawn', decidedAt: new Date() }, { where: { stationId: station.id, status: 'pending' }, transaction });
+    await OffsetProposalModel.update(
+      { status: 'withdrawn', decidedAt: new Date() },
+      { where: { stationId: station.id, status: 'pending' }, transaction },
+    );
     const created = await OffsetProposalModel.create(
-      { clubId, stationId: station.id, proposedById: user.id, currentOffsetHz: station.audioOffsetHz, proposedOffsetHz: input.proposedOffsetHz, reason: input.reason, decidedAt: null },
+      {
+        clubId,
+        stationId: station.id,
+        proposedById: user.id,
+        currentOffsetHz: station.audioOffsetHz,
+        proposedOffsetHz: input.proposedOffsetHz,
+        reason: input.reason,
+        decidedAt: null,
+      },
       { transaction },
     );
-    await notify(owner.id, 'offset-proposal', `${club.name} proposes moving ${station.name} from ${station.audioOffsetHz} Hz to ${input.proposedOffsetHz} Hz audio offset`, '/proposals', transaction);
-    await audit.record({ actor: user, ownerId: owner.id, clubId, action: 'proposal.create', entityType: 'proposal', entityId: created.id, summary: `Proposed audio offset ${input.proposedOffsetHz} Hz for ${station.name}`, before: { audioOffsetHz: station.audioOffsetHz }, after: { audioOffsetHz: input.proposedOffsetHz } }, transaction);
+    await notify(
+      owner.id,
+      'offset-proposal',
+      `${club.name} proposes moving ${station.name} from ${station.audioOffsetHz} Hz to ${input.proposedOffsetHz} Hz audio offset`,
+      '/proposals',
+      transaction,
+    );
+    await audit.record(
+      {
+        actor: user,
+        ownerId: owner.id,
+        clubId,
+        action: 'proposal.create',
+        entityType: 'proposal',
+        entityId: created.id,
+        summary: `Proposed audio offset ${input.proposedOffsetHz} Hz for ${station.name}`,
+        before: { audioOffsetHz: station.audioOffsetHz },
+        after: { audioOffsetHz: input.proposedOffsetHz },
+      },
+      transaction,
+    );
     return created;
   });
   const mail: OutgoingMail = {
@@ -104,9 +178,32 @@ export async function decide(sequelize: Sequelize, user: SessionUser, proposalId
     await row.update({ status: accept ? 'accepted' : 'declined', decidedAt: new Date() }, { transaction });
     if (accept) {
       await stationsRepo.update(station.id, { audioOffsetHz: row.proposedOffsetHz }, transaction);
-      await audit.record({ actor: user, ownerId: user.id, action: 'station.update', entityType: 'station', entityId: station.id, summary: `Accepted the club's audio offset ${row.proposedOffsetHz} Hz for ${station.name}`, before: { audioOffsetHz: station.audioOffsetHz }, after: { audioOffsetHz: row.proposedOffsetHz } }, transaction);
+      await audit.record(
+        {
+          actor: user,
+          ownerId: user.id,
+          action: 'station.update',
+          entityType: 'station',
+          entityId: station.id,
+          summary: `Accepted the club's audio offset ${row.proposedOffsetHz} Hz for ${station.name}`,
+          before: { audioOffsetHz: station.audioOffsetHz },
+          after: { audioOffsetHz: row.proposedOffsetHz },
+        },
+        transaction,
+      );
     }
-    await audit.record({ actor: user, ownerId: user.id, clubId: row.clubId, action: accept ? 'proposal.accept' : 'proposal.decline', entityType: 'proposal', entityId: row.id, summary: `${accept ? 'Accepted' : 'Declined'} the proposed offset for ${station.name}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId: row.clubId,
+        action: accept ? 'proposal.accept' : 'proposal.decline',
+        entityType: 'proposal',
+        entityId: row.id,
+        summary: `${accept ? 'Accepted' : 'Declined'} the proposed offset for ${station.name}`,
+      },
+      transaction,
+    );
     return toProposal(row);
   });
 }

@@ -20,7 +20,10 @@ export function myClubThingsRouter({ sequelize }: { sequelize: Sequelize }) {
   router.get('/offset-proposals', requireSignedIn, async (req, res) => {
     res.json(await moderation.listMine(currentUser(req)));
   });
-  for (const [verb, accept] of [['accept', true], ['decline', false]] as const) {
+  for (const [verb, accept] of [
+    ['accept', true],
+    ['decline', false],
+  ] as const) {
     router.post(`/offset-proposals/:id/${verb}`, requireSignedIn, async (req, res) => {
       res.json(await moderation.decide(sequelize, currentUser(req), parseId(req.params.id, 'Proposal'), accept));
     });

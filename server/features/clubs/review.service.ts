@@ -16,15 +16,22 @@ async function loadClubStations(clubId: number): Promise<Loaded[]> {
   const stations = await findByOwners(await memberIdsOf(clubId));
   const schedules = await schedulesRepo.findByStations(stations.map((s) => s.id));
   const units = new Map<number, Unit | null>();
-  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null))) units.set(id, await unitsRepo.findById(id));
-  return stations.map((station) => ({ station, unit: station.unitId === null ? null : units.get(station.unitId) ?? null, schedule: schedules.get(station.id) ?? null }));
+  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null)))
+    units.set(id, await unitsRepo.findById(id));
+  return stations.map((station) => ({
+    station,
+    unit: station.unitId === null ? null : (units.get(station.unitId) ?? null),
+    schedule: schedules.get(station.id) ?? null,
+  }));
 }
 
 export async function review(user: SessionUser, clubId: number): Promise<ReviewRow[]> {
   const { club } = await requireAdmin(user, clubId);
   return (await loadClubStations(clubId)).map(({ station, unit, schedule }) => {
     const findings = complianceFindings({ station, unit, schedule, maxPowerDbm: club.maxPowerDbm });
-    const bands = [...new Set([...station.bands.filter((b) => b.enabled).map((b) => b.bandId), ...(schedule?.steps.map((s) => s.bandId) ?? [])])];
+    const bands = [
+      ...new Set([...station.bands.filter((b) => b.enabled).map((b) => b.bandId), ...(schedule?.steps.map((s) => s.bandId) ?? [])]),
+    ];
     return {
       stationId: station.id,
       stationName: station.name,
@@ -55,7 +62,9 @@ export async function conflicts(user: SessionUser, clubId: number, now = Date.no
   const fleet = plans.map((p) => fleetStationFromPlan(p.station.id, p.station.audioOffsetHz, p.plan.transmissions));
   const found = findFleetConflicts(fleet);
   const proposal = proposeFleetOffsets(fleet);
-  const names = new Map(plans.map((p) => [p.station.id, { name: p.station.name, owner: p.station.ownerName, callsign: p.station.callsign }]));
+  const names = new Map(
+    plans.map((p) => [p.station.id, { name: p.station.name, owner: p.station.ownerName, callsign: p.station.callsign }]),
+  );
   return {
     fromUtc: new Date(now).toISOString(),
     conflicts: found.map((c) => ({ ...c, aStation: names.get(Number(c.a)), bStation: names.get(Number(c.b)) })),
@@ -90,6 +99,11 @@ export async function occupancy(user: SessionUser, clubId: number, now = Date.no
       return { bandId, hourIndex: Number(hour), hourUtc: hours[Number(hour)], transmissions };
     }),
     // 720 slots a day; a band's duty is the share of slots in which some club station sends on it
-    bands: [...perBand].map(([bandId, transmissions]) => ({ bandId, transmissions, minutesOnAir: Number((transmissions * 110.6 / 60).toFixed(1)), dutyPercent: Number(((transmissions / 720) * 100).toFixed(1)) })),
+    bands: [...perBand].map(([bandId, transmissions]) => ({
+      bandId,
+      transmissions,
+      minutesOnAir: Number(((transmissions * 110.6) / 60).toFixed(1)),
+      dutyPercent: Number(((transmissions / 720) * 100).toFixed(1)),
+    })),
   };
 }

@@ -25,7 +25,10 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
   const [unit, schedule, last] = await Promise.all([
     station.unitId === null ? null : unitsRepo.findById(station.unitId),
     schedulesRepo.findByStation(station.id),
-    HeartbeatModel.findOne({ where: { stationId: station.id, receivedAt: { [Op.lte]: new Date(nowMs) } }, order: [['receivedAt', 'DESC']] }),
+    HeartbeatModel.findOne({
+      where: { stationId: station.id, receivedAt: { [Op.lte]: new Date(nowMs) } },
+      order: [['receivedAt', 'DESC']],
+    }),
   ]);
   const findings: Finding[] = [];
   const silentMs = settings.silentMinutes * 60_000;
@@ -43,7 +46,10 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
   }
   const fresh = last && lastMs !== null && nowMs - lastMs <= silentMs;
   if (fresh && last.clockOffsetMs !== null && Math.abs(last.clockOffsetMs) > settings.clockOffsetMs) {
-    findings.push({ rule: 'clock-offset', message: `The device clock is ${Math.round(last.clockOffsetMs)} ms off (limit ${settings.clockOffsetMs} ms): check its time source.` });
+    findings.push({
+      rule: 'clock-offset',
+      message: `The device clock is ${Math.round(last.clockOffsetMs)} ms off (limit ${settings.clockOffsetMs} ms): check its time source.`,
+    });
   }
   if (fresh && unit && last.temperatureC !== null) {
     const drift = driftFor(station, unit, last.temperatureC);
@@ -52,7 +58,10 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
         const air = bandOnAir(station, unit, band.bandId);
         if ('problem' in air) continue;
         if (air.window.marginHz < drift) {
-          findings.push({ rule: 'drift-out-of-window', message: `At ${last.temperatureC.toFixed(1)} °C the signal may move ${drift.toFixed(1)} Hz, more than the ${air.window.marginHz.toFixed(1)} Hz margin on ${air.band.name}.` });
+          findings.push({
+            rule: 'drift-out-of-window',
+            message: `At ${last.temperatureC.toFixed(1)} °C the signal may move ${drift.toFixed(1)} Hz, more than the ${air.window.marginHz.toFixed(1)} Hz margin on ${air.band.name}.`,
+          });
           break;
         }
       }
@@ -60,8 +69,14 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
   }
   if (station.suspension) {
     const since = new Date(station.suspension.at);
-    const sent = await DeviceTransmissionModel.count({ where: { stationId: station.id, startedAt: { [Op.gte]: since, [Op.lte]: new Date(nowMs) } } });
-    if (sent > 0) findings.push({ rule: 'transmitting-while-suspended', message: `The device reported ${sent} transmission${sent === 1 ? '' : 's'} since the club suspended the station.` });
+    const sent = await DeviceTransmissionModel.count({
+      where: { stationId: station.id, startedAt: { [Op.gte]: since, [Op.lte]: new Date(nowMs) } },
+    });
+    if (sent > 0)
+      findings.push({
+        rule: 'transmitting-while-suspended',
+        message: `The device reported ${sent} transmission${sent === 1 ? '' : 's'} since the club suspended the station.`,
+      });
   }
   return findings;
 }
@@ -74,7 +89,10 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
 export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): Promise<OutgoingMail[] | null> {
   await sequelize.query("INSERT IGNORE INTO job_locks (name, lastRunAt) VALUES ('alerts', NULL)");
   return sequelize.transaction(async (transaction) => {
-    const locked = await sequelize.query("SELECT name FROM job_locks WHERE name = 'alerts' FOR UPDATE SKIP LOCKED", { transaction, type: QueryTypes.SELECT });
+    const locked = await sequelize.query("SELECT name FROM job_locks WHERE name = 'alerts' FOR UPDATE SKIP LOCKED", {
+      transaction,
+      type: QueryTypes.SELECT,
+    });
     if (locked.length === 0) return null;
     const now = new Date(nowMs);
     const devices = await DeviceTokenModel.findAll({ attributes: ['stationId', 'updatedAt'], transaction });
@@ -86,7 +104,20 @@ export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): 
       for (const finding of findings) {
         const existing = open.find((a) => a.rule === finding.rule);
         if (existing) await existing.update({ lastSeenAt: now, message: finding.message }, { transaction });
-        else await AlertModel.create({ stationId, rule: finding.rule, message: finding.message, openedAt: now, lastSeenAt: now, resolvedAt: null, mailedAt: null, openKey: `${stationId}:${finding.rule}` }, { transaction });
+        else
+          await AlertModel.create(
+            {
+              stationId,
+              rule: finding.rule,
+              message: finding.message,
+              openedAt: now,
+              lastSeenAt: now,
+              resolvedAt: null,
+              mailedAt: null,
+              openKey: `${stationId}:${finding.rule}`,
+            },
+            { transaction },
+          );
       }
       for (const alert of open) {
         if (!findings.some((f) => f.rule === alert.rule)) await alert.update({ resolvedAt: now, openKey: null }, { transaction });

@@ -13,7 +13,9 @@ const HOUR_MS = 3_600_000;
 export const planWindowStart = (nowMs: number) => Math.floor(nowMs / HOUR_MS) * HOUR_MS;
 
 export function etagFor(version: string, nowMs: number) {
-  return `"${createHash('sha1').update(`${version}|${planWindowStart(nowMs)}`).digest('base64url')}"`;
+  return `"${createHash('sha1')
+    .update(`${version}|${planWindowStart(nowMs)}`)
+    .digest('base64url')}"`;
 }
 
 /** What a beacon fetches: its configuration document plus every transmission of the next hours, ready to key. */
@@ -38,7 +40,15 @@ export function deviceConfig(station: Station, unit: Unit | null, schedule: Sche
       symbols: (messages[tx.messageIndex]?.symbols ?? []).join(''),
       tonesHz: command.tonesHz.map((f) => Number(f.toFixed(3))),
       commandTonesHz: command.commandTonesHz.map((f) => Number(f.toFixed(3))),
-      registers: synth && synth.ok ? { outputDivider: synth.outputDivider, rDivider: synth.rDivider, output: bytesToHex(synth.outputRegisters.bytes), tones: synth.tones.map((t) => bytesToHex(t.registers.bytes)) } : null,
+      registers:
+        synth && synth.ok
+          ? {
+              outputDivider: synth.outputDivider,
+              rDivider: synth.rDivider,
+              output: bytesToHex(synth.outputRegisters.bytes),
+              tones: synth.tones.map((t) => bytesToHex(t.registers.bytes)),
+            }
+          : null,
     };
   });
   return {

@@ -9,7 +9,14 @@ import { onStationChanged } from '../../lib/change-feed';
 import * as schedulesRepo from '../schedules/schedules.repo';
 import * as stationsRepo from '../stations/stations.repo';
 import * as unitsRepo from '../units/units.repo';
-import { acceptsGzip, etagsFor, ifNoneMatchHits, representationsOf, type ConfigEtags, type ConfigRepresentations } from './config-representation';
+import {
+  acceptsGzip,
+  etagsFor,
+  ifNoneMatchHits,
+  representationsOf,
+  type ConfigEtags,
+  type ConfigRepresentations,
+} from './config-representation';
 import { deviceConfig, etagFor, planWindowStart } from './device-config';
 import { identify, type DeviceIdentity } from './tokens.service';
 
@@ -102,7 +109,20 @@ export function sendConfig(res: ServerResponse, answer: ConfigAnswer) {
     res.writeHead(304, ['ETag', answer.etag, 'Cache-Control', 'private, no-cache', 'Vary', 'Accept-Encoding']);
     return void res.end();
   }
-  const headers = ['ETag', answer.etag, 'Cache-Control', 'private, no-cache', 'Vary', 'Accept-Encoding', 'X-Content-Type-Options', 'nosniff', 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(answer.body.length)];
+  const headers = [
+    'ETag',
+    answer.etag,
+    'Cache-Control',
+    'private, no-cache',
+    'Vary',
+    'Accept-Encoding',
+    'X-Content-Type-Options',
+    'nosniff',
+    'Content-Type',
+    'application/json; charset=utf-8',
+    'Content-Length',
+    String(answer.body.length),
+  ];
   if (answer.encoding === 'gzip') headers.push('Content-Encoding', 'gzip');
   res.writeHead(200, headers);
   res.end(answer.body);
@@ -111,7 +131,11 @@ export function sendConfig(res: ServerResponse, answer: ConfigAnswer) {
 function sendError(res: ServerResponse, error: unknown) {
   const appError = error instanceof AppError ? error : new AppError('internal', 'Something went wrong on the server. It has been logged.');
   const body = JSON.stringify({ error: { code: appError.code, message: appError.message } } satisfies ApiErrorBody);
-  res.writeHead(statusOf[appError.code], { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(body), 'X-Content-Type-Options': 'nosniff' });
+  res.writeHead(statusOf[appError.code], {
+    'Content-Type': 'application/json; charset=utf-8',
+    'Content-Length': Buffer.byteLength(body),
+    'X-Content-Type-Options': 'nosniff',
+  });
   res.end(body);
 }
 
@@ -119,14 +143,21 @@ function sendError(res: ServerResponse, error: unknown) {
  * The hottest request of all, a beacon polling its configuration, answered straight from the
  * node:http layer with the same gateway the Express route uses. Anything else goes to Express.
  */
-export function withDeviceFastPath(gateway: DeviceGateway, app: (req: IncomingMessage, res: ServerResponse) => void, onError: (error: unknown) => void) {
+export function withDeviceFastPath(
+  gateway: DeviceGateway,
+  app: (req: IncomingMessage, res: ServerResponse) => void,
+  onError: (error: unknown) => void,
+) {
   return (req: IncomingMessage, res: ServerResponse) => {
     if (req.method !== 'GET' || req.url !== '/api/device/v1/config') return app(req, res);
     void (async () => {
       try {
         const device = await gateway.authenticate(req.headers.authorization);
         await gateway.countRequest(device);
-        const answer = await gateway.config(device, { ifNoneMatch: req.headers['if-none-match'], acceptEncoding: req.headers['accept-encoding'] });
+        const answer = await gateway.config(device, {
+          ifNoneMatch: req.headers['if-none-match'],
+          acceptEncoding: req.headers['accept-encoding'],
+        });
         sendConfig(res, answer);
       } catch (error) {
         if (!(error instanceof AppError)) onError(error);

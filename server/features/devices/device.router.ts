@@ -18,7 +18,9 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
 export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
   const router = Router();
   // Heartbeats from many devices at once are stored a group per INSERT; each is acknowledged once written.
-  const storeHeartbeat = createGroupWriter((rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) => HeartbeatModel.bulkCreate(rows, { validate: false }));
+  const storeHeartbeat = createGroupWriter((rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) =>
+    HeartbeatModel.bulkCreate(rows, { validate: false }),
+  );
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
     req.device = await gateway.authenticate(req.get('authorization'));
@@ -32,7 +34,8 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => (req as DeviceRequest).device!.tokenHash,
-    handler: (_req, _res, next) => next(new AppError('rate-limited', `Too many requests from this device: at most ${config.DEVICE_RATE_LIMIT} a minute`)),
+    handler: (_req, _res, next) =>
+      next(new AppError('rate-limited', `Too many requests from this device: at most ${config.DEVICE_RATE_LIMIT} a minute`)),
   });
 
   router.use((_req, res, next) => {
@@ -50,7 +53,13 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
 
   router.post('/heartbeat', async (req: DeviceRequest, res) => {
     const report = heartbeatInput.parse(req.body);
-    await storeHeartbeat({ stationId: req.device!.stationId, receivedAt: new Date(), report: JSON.stringify(report), clockOffsetMs: report.clockOffsetMs, temperatureC: report.temperatureC });
+    await storeHeartbeat({
+      stationId: req.device!.stationId,
+      receivedAt: new Date(),
+      report: JSON.stringify(report),
+      clockOffsetMs: report.clockOffsetMs,
+      temperatureC: report.temperatureC,
+    });
     res.status(202).json({ stored: true });
   });
 
@@ -58,7 +67,14 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
     const { transmissions } = transmissionLogInput.parse(req.body);
     const receivedAt = new Date();
     await DeviceTransmissionModel.bulkCreate(
-      transmissions.map((t) => ({ stationId: req.device!.stationId, startedAt: new Date(t.startUtc), bandId: t.bandId, frequencyHz: t.frequencyHz, messageText: t.messageText, receivedAt })),
+      transmissions.map((t) => ({
+        stationId: req.device!.stationId,
+        startedAt: new Date(t.startUtc),
+        bandId: t.bandId,
+        frequencyHz: t.frequencyHz,
+        messageText: t.messageText,
+        receivedAt,
+      })),
     );
     res.status(202).json({ stored: transmissions.length });
   });

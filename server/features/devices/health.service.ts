@@ -54,8 +54,15 @@ async function healthOf(station: Station, nowMs: number): Promise<StationHealth>
   const since = new Date(nowMs - 86_400_000);
   const [beats, sent, alerts, settings, device, unit, schedule] = await Promise.all([
     HeartbeatModel.findAll({ where: { stationId: station.id, receivedAt: { [Op.gte]: since } }, order: [['receivedAt', 'ASC']] }),
-    DeviceTransmissionModel.findAll({ where: { stationId: station.id, startedAt: { [Op.gte]: since } }, order: [['startedAt', 'DESC']], limit: 20 }),
-    AlertModel.findAll({ where: { stationId: station.id, [Op.or]: [{ resolvedAt: null }, { resolvedAt: { [Op.gte]: since } }] }, order: [['openedAt', 'DESC']] }),
+    DeviceTransmissionModel.findAll({
+      where: { stationId: station.id, startedAt: { [Op.gte]: since } },
+      order: [['startedAt', 'DESC']],
+      limit: 20,
+    }),
+    AlertModel.findAll({
+      where: { stationId: station.id, [Op.or]: [{ resolvedAt: null }, { resolvedAt: { [Op.gte]: since } }] },
+      order: [['openedAt', 'DESC']],
+    }),
     settingsOf(station.id),
     hasToken(station.id),
     station.unitId === null ? null : unitsRepo.findById(station.unitId),
@@ -90,7 +97,11 @@ async function healthOf(station: Station, nowMs: number): Promise<StationHealth>
     firmwareVersion: report?.firmwareVersion ?? null,
     driftHz: driftFor(station, unit, last?.temperatureC ?? null),
     series,
-    recent: sent.map((t) => ({ startUtc: t.startedAt.toISOString(), bandId: t.bandId, planned: plannedStarts.has(`${Math.floor(t.startedAt.getTime() / 1000) * 1000}|${t.bandId}`) })),
+    recent: sent.map((t) => ({
+      startUtc: t.startedAt.toISOString(),
+      bandId: t.bandId,
+      planned: plannedStarts.has(`${Math.floor(t.startedAt.getTime() / 1000) * 1000}|${t.bandId}`),
+    })),
     alerts: alerts.map(toAlert),
     settings,
   };

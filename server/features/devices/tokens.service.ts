@@ -19,7 +19,17 @@ export async function rotate(user: SessionUser, stationId: number) {
     if (existing) await existing.update({ tokenHash: hashToken(token) }, { transaction });
     else await DeviceTokenModel.create({ stationId, tokenHash: hashToken(token) }, { transaction });
     stationChangedAfter(transaction, stationId);
-    await audit.record({ actor: user, ownerId: user.id, action: existing ? 'device.rotate' : 'device.create', entityType: 'station', entityId: stationId, summary: `${existing ? 'Rotated' : 'Created'} the device token of ${station.name}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: existing ? 'device.rotate' : 'device.create',
+        entityType: 'station',
+        entityId: stationId,
+        summary: `${existing ? 'Rotated' : 'Created'} the device token of ${station.name}`,
+      },
+      transaction,
+    );
   });
   return token;
 }
@@ -29,7 +39,17 @@ export async function revoke(user: SessionUser, stationId: number) {
   await inTransaction(async (transaction) => {
     await DeviceTokenModel.destroy({ where: { stationId }, transaction });
     stationChangedAfter(transaction, stationId);
-    await audit.record({ actor: user, ownerId: user.id, action: 'device.revoke', entityType: 'station', entityId: stationId, summary: `Revoked the device token of ${station.name}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'device.revoke',
+        entityType: 'station',
+        entityId: stationId,
+        summary: `Revoked the device token of ${station.name}`,
+      },
+      transaction,
+    );
   });
 }
 
@@ -60,5 +80,9 @@ export async function identify(sequelize: Sequelize, token: string): Promise<Dev
   const row = rows[0];
   if (!row) return null;
   const stamp = (d: Date | null) => (d ? new Date(d).getTime() : 0);
-  return { stationId: row.stationId, tokenHash, version: [row.stationId, stamp(row.s), stamp(row.sc), stamp(row.u), stamp(row.b), stamp(row.susp)].join('.') };
+  return {
+    stationId: row.stationId,
+    tokenHash,
+    version: [row.stationId, stamp(row.s), stamp(row.sc), stamp(row.u), stamp(row.b), stamp(row.susp)].join('.'),
+  };
 }

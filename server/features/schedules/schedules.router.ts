@@ -15,7 +15,8 @@ const planQuery = z
     const fromMs = q.from ? Date.parse(q.from) : Date.now();
     const toMs = q.to ? Date.parse(q.to) : fromMs + 86_400_000;
     if (toMs <= fromMs) ctx.addIssue({ code: 'custom', path: ['to'], message: 'to must be later than from' });
-    if (toMs - fromMs > schedules.MAX_PLAN_RANGE_MS) ctx.addIssue({ code: 'custom', path: ['to'], message: 'Ask for at most 8 days at a time' });
+    if (toMs - fromMs > schedules.MAX_PLAN_RANGE_MS)
+      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Ask for at most 8 days at a time' });
     return { fromMs, toMs };
   });
 

@@ -43,7 +43,18 @@ export async function create(sequelize: Sequelize, user: SessionUser, stationId:
       throw new AppError('conflict', `Station ${stationId} already has a schedule: change it instead`);
     }
     const created = await repo.insert(stationId, values, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.create', entityType: 'schedule', entityId: stationId, summary: `Created the schedule ${values.name}`, after: values }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'schedule.create',
+        entityType: 'schedule',
+        entityId: stationId,
+        summary: `Created the schedule ${values.name}`,
+        after: values,
+      },
+      transaction,
+    );
     return created;
   });
 }
@@ -57,10 +68,27 @@ export async function update(sequelize: Sequelize, user: SessionUser, stationId:
   // Pausing never needs the checks; anything else that would transmit must pass them.
   if (!(Object.keys(patch).length === 1 && 'paused' in patch)) await refuseBlocked(stationId, values, user);
   const { id: _i, stationId: _st, createdAt: _cr, updatedAt: _up, ...before } = current;
-  const summary = Object.keys(patch).length === 1 && 'paused' in patch ? (patch.paused ? 'Paused the schedule' : 'Resumed the schedule') : `Changed ${Object.keys(patch).join(', ')} of the schedule`;
+  const summary =
+    Object.keys(patch).length === 1 && 'paused' in patch
+      ? patch.paused
+        ? 'Paused the schedule'
+        : 'Resumed the schedule'
+      : `Changed ${Object.keys(patch).join(', ')} of the schedule`;
   return sequelize.transaction(async (transaction) => {
     const updated = await repo.update(stationId, values, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.update', entityType: 'schedule', entityId: stationId, summary, before, after: values }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'schedule.update',
+        entityType: 'schedule',
+        entityId: stationId,
+        summary,
+        before,
+        after: values,
+      },
+      transaction,
+    );
     return updated;
   });
 }
@@ -70,7 +98,18 @@ export async function remove(user: SessionUser, stationId: number) {
   const before = await getFor(user, stationId);
   await UserModel.sequelize!.transaction(async (transaction) => {
     await repo.remove(stationId, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'schedule.delete', entityType: 'schedule', entityId: stationId, summary: `Deleted the schedule ${before.name}`, before }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'schedule.delete',
+        entityType: 'schedule',
+        entityId: stationId,
+        summary: `Deleted the schedule ${before.name}`,
+        before,
+      },
+      transaction,
+    );
   });
 }
 

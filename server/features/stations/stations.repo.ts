@@ -33,7 +33,9 @@ function toStation(row: Row): Station {
     transmitEnabled: row.transmitEnabled,
     referenceErrorPpm: row.referenceErrorPpm,
     bands: (row.bands ?? []).map(toBand).sort((a, b) => a.bandId.localeCompare(b.bandId)),
-    suspension: row.suspendedAt ? { at: row.suspendedAt.toISOString(), reason: row.suspendedReason ?? '', clubId: row.suspendedByClubId } : null,
+    suspension: row.suspendedAt
+      ? { at: row.suspendedAt.toISOString(), reason: row.suspendedReason ?? '', clubId: row.suspendedByClubId }
+      : null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -45,7 +47,14 @@ const include = [
 ];
 
 async function findAllWhere(where: WhereOptions<StationModel>) {
-  const rows = await StationModel.findAll({ where, include, order: [['name', 'ASC'], ['id', 'ASC']] });
+  const rows = await StationModel.findAll({
+    where,
+    include,
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return rows.map((row) => toStation(row as Row));
 }
 
@@ -70,7 +79,10 @@ export type StationValues = {
 };
 
 export async function insert(ownerId: number, values: StationValues, transaction?: Transaction) {
-  const row = await StationModel.create({ ...values, ownerId, referenceErrorPpm: null, suspendedAt: null, suspendedReason: null, suspendedByClubId: null }, { transaction });
+  const row = await StationModel.create(
+    { ...values, ownerId, referenceErrorPpm: null, suspendedAt: null, suspendedReason: null, suspendedByClubId: null },
+    { transaction },
+  );
   return (await findById(row.id, transaction))!;
 }
 
@@ -91,9 +103,17 @@ export async function upsertBand(
   values: Partial<Pick<StationBandModel, 'enabled' | 'calibrationOffsetHz' | 'calibrationSource' | 'calibratedAt'>>,
   transaction?: Transaction,
 ) {
-  const existing = await StationBandModel.findOne({ where: { stationId, bandId }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+  const existing = await StationBandModel.findOne({
+    where: { stationId, bandId },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
   if (existing) await existing.update(values, { transaction });
-  else await StationBandModel.create({ stationId, bandId, enabled: false, calibrationOffsetHz: null, calibrationSource: null, calibratedAt: null, ...values }, { transaction });
+  else
+    await StationBandModel.create(
+      { stationId, bandId, enabled: false, calibrationOffsetHz: null, calibrationSource: null, calibratedAt: null, ...values },
+      { transaction },
+    );
   // Changing a band touches the station, so anything keyed on its updatedAt sees the change.
   await StationModel.update({ updatedAt: new Date() }, { where: { id: stationId }, transaction, silent: false });
   stationChangedAfter(transaction, stationId);

@@ -43,13 +43,33 @@ async function ownUnit(user: SessionUser, unitId: number | null | undefined): Pr
   return unit;
 }
 
-const settingsOf = (s: Station) => ({ name: s.name, callsign: s.callsign, locator: s.locator, unitId: s.unitId, region: s.region, audioOffsetHz: s.audioOffsetHz, transmitEnabled: s.transmitEnabled, notes: s.notes });
+const settingsOf = (s: Station) => ({
+  name: s.name,
+  callsign: s.callsign,
+  locator: s.locator,
+  unitId: s.unitId,
+  region: s.region,
+  audioOffsetHz: s.audioOffsetHz,
+  transmitEnabled: s.transmitEnabled,
+  notes: s.notes,
+});
 
 export async function create(user: SessionUser, input: Required<StationInput>) {
   await ownUnit(user, input.unitId);
   return inTransaction(async (transaction) => {
     const station = await repo.insert(user.id, input as repo.StationValues, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'station.create', entityType: 'station', entityId: station.id, summary: `Created station ${station.name} (${station.callsign})`, after: settingsOf(station) }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'station.create',
+        entityType: 'station',
+        entityId: station.id,
+        summary: `Created station ${station.name} (${station.callsign})`,
+        after: settingsOf(station),
+      },
+      transaction,
+    );
     return station;
   });
 }
@@ -59,7 +79,19 @@ export async function update(user: SessionUser, id: number, patch: StationPatch)
   if (patch.unitId !== undefined) await ownUnit(user, patch.unitId);
   return inTransaction(async (transaction) => {
     const after = await repo.update(id, patch, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'station.update', entityType: 'station', entityId: id, summary: `Changed ${Object.keys(patch).join(', ')} of ${after.name}`, before: settingsOf(before), after: settingsOf(after) }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'station.update',
+        entityType: 'station',
+        entityId: id,
+        summary: `Changed ${Object.keys(patch).join(', ')} of ${after.name}`,
+        before: settingsOf(before),
+        after: settingsOf(after),
+      },
+      transaction,
+    );
     return after;
   });
 }
@@ -68,7 +100,18 @@ export async function remove(user: SessionUser, id: number) {
   const before = await getOwnedBy(user, id);
   await inTransaction(async (transaction) => {
     await repo.remove(id, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'station.delete', entityType: 'station', entityId: id, summary: `Deleted station ${before.name}`, before: settingsOf(before) }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'station.delete',
+        entityType: 'station',
+        entityId: id,
+        summary: `Deleted station ${before.name}`,
+        before: settingsOf(before),
+      },
+      transaction,
+    );
   });
 }
 
@@ -89,7 +132,9 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
   if (input.enabled) {
     const unit = await unitOf(station);
     if (!unit) {
-      throw new AppError('bad-request', `Assign a unit to this station before enabling ${band.name}`, { enabled: 'Assign a unit first: its filters decide which bands may transmit' });
+      throw new AppError('bad-request', `Assign a unit to this station before enabling ${band.name}`, {
+        enabled: 'Assign a unit first: its filters decide which bands may transmit',
+      });
     }
     const coverage = filterCoverage(unit.filters, band);
     if (!coverage.covered) throw new AppError('bad-request', coverage.reason, { enabled: coverage.reason });
@@ -103,7 +148,19 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
       values.calibratedAt = input.calibrationOffsetHz === null ? null : new Date();
     }
     await repo.upsertBand(id, bandId, values, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'band.update', entityType: 'band', entityId: id, summary: `${input.enabled ? 'Enabled' : 'Disabled'} ${band.name} on ${station.name}`, before: beforeBand, after: { bandId, ...values } }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'band.update',
+        entityType: 'band',
+        entityId: id,
+        summary: `${input.enabled ? 'Enabled' : 'Disabled'} ${band.name} on ${station.name}`,
+        before: beforeBand,
+        after: { bandId, ...values },
+      },
+      transaction,
+    );
   });
   return (await repo.findById(id))!;
 }
@@ -115,17 +172,29 @@ export async function saveCalibration(sequelize: Sequelize, user: SessionUser, i
   const now = new Date();
   await sequelize.transaction(async (transaction) => {
     for (const offset of input.offsets) {
-      await repo.upsertBand(id, offset.bandId, { calibrationOffsetHz: offset.calibrationOffsetHz, calibrationSource: input.source, calibratedAt: now }, transaction);
+      await repo.upsertBand(
+        id,
+        offset.bandId,
+        { calibrationOffsetHz: offset.calibrationOffsetHz, calibrationSource: input.source, calibratedAt: now },
+        transaction,
+      );
     }
     if (input.source === 'measured' && input.referenceErrorPpm !== undefined) {
       await repo.setReferenceError(id, input.referenceErrorPpm, transaction);
     }
-    await audit.record({
-      actor: user, ownerId: user.id, action: 'calibration.save', entityType: 'calibration', entityId: id,
-      summary: `Saved ${input.source} calibration for ${input.offsets.map((o) => o.bandId).join(', ')} on ${station.name}`,
-      before: station.bands.map((b) => ({ bandId: b.bandId, calibrationOffsetHz: b.calibrationOffsetHz })),
-      after: { referenceErrorPpm: input.referenceErrorPpm ?? null, offsets: input.offsets },
-    }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'calibration.save',
+        entityType: 'calibration',
+        entityId: id,
+        summary: `Saved ${input.source} calibration for ${input.offsets.map((o) => o.bandId).join(', ')} on ${station.name}`,
+        before: station.bands.map((b) => ({ bandId: b.bandId, calibrationOffsetHz: b.calibrationOffsetHz })),
+        after: { referenceErrorPpm: input.referenceErrorPpm ?? null, offsets: input.offsets },
+      },
+      transaction,
+    );
   });
   return (await repo.findById(id))!;
 }
@@ -151,7 +220,11 @@ export async function proposeCalibration(user: SessionUser, id: number, input: M
   return {
     referenceErrorPpm: result.referenceErrorPpm,
     errorHz: input.observedHz - input.commandedHz,
-    offsets: result.offsets.map((o) => ({ bandId: o.id as BandId, frequencyHz: o.frequencyHz, calibrationOffsetHz: Number(o.offsetHz.toFixed(2)) })),
+    offsets: result.offsets.map((o) => ({
+      bandId: o.id as BandId,
+      frequencyHz: o.frequencyHz,
+      calibrationOffsetHz: Number(o.offsetHz.toFixed(2)),
+    })),
   };
 }
 

@@ -24,7 +24,9 @@ async function process(buffer: Buffer) {
     throw new AppError('bad-request', 'This file is not a JPEG, PNG or WebP image', { photo: 'Choose a JPEG, PNG or WebP photo' });
   }
   const base = sharp(buffer).rotate().resize({ width: 2000, height: 2000, fit: 'inside', withoutEnlargement: true });
-  const main = await (format === 'png' ? base.png() : format === 'webp' ? base.webp({ quality: 85 }) : base.jpeg({ quality: 85 })).toBuffer();
+  const main = await (
+    format === 'png' ? base.png() : format === 'webp' ? base.webp({ quality: 85 }) : base.jpeg({ quality: 85 })
+  ).toBuffer();
   const thumb = await sharp(buffer).rotate().resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
   return { main, thumb, contentType: `image/${format}`, extension: EXTENSIONS[format] };
 }
@@ -39,7 +41,17 @@ export async function addPhoto(storage: FileStorage, user: SessionUser, unitId: 
   await storage.put(thumbKey, thumb, 'image/webp');
   return inTransaction(async (transaction) => {
     const photo = await repo.insertPhoto({ unitId, storageKey, thumbKey, contentType, bytes: main.length }, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'photo.add', entityType: 'photo', entityId: photo.id, summary: `Added a photo to unit ${unit.name}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'photo.add',
+        entityType: 'photo',
+        entityId: photo.id,
+        summary: `Added a photo to unit ${unit.name}`,
+      },
+      transaction,
+    );
     return photo;
   });
 }
@@ -59,7 +71,17 @@ export async function deletePhoto(storage: FileStorage, user: SessionUser, unitI
   if (!photo) throw new AppError('not-found', `Photo ${photoId} does not exist`);
   await inTransaction(async (transaction) => {
     await photo.destroy({ transaction });
-    await audit.record({ actor: user, ownerId: user.id, action: 'photo.delete', entityType: 'photo', entityId: photoId, summary: `Deleted a photo of unit ${unit.name}` }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'photo.delete',
+        entityType: 'photo',
+        entityId: photoId,
+        summary: `Deleted a photo of unit ${unit.name}`,
+      },
+      transaction,
+    );
   });
   await removeStored(storage, [photo]);
 }

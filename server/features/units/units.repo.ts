@@ -9,7 +9,14 @@ type Row = UnitModel & { owner?: UserModel; photos?: UnitPhotoModel[] };
 
 export function toPhoto(row: UnitPhotoModel): UnitPhoto {
   const base = `/api/units/${row.unitId}/photos/${row.id}`;
-  return { id: row.id, url: base, thumbUrl: `${base}/thumb`, contentType: row.contentType, bytes: row.bytes, createdAt: row.createdAt.toISOString() };
+  return {
+    id: row.id,
+    url: base,
+    thumbUrl: `${base}/thumb`,
+    contentType: row.contentType,
+    bytes: row.bytes,
+    createdAt: row.createdAt.toISOString(),
+  };
 }
 
 function toUnit(row: Row): Unit {
@@ -32,7 +39,14 @@ const include = [
 ];
 
 export async function findByOwner(ownerId: number) {
-  const rows = await UnitModel.findAll({ where: { ownerId }, include, order: [['name', 'ASC'], ['id', 'ASC']] });
+  const rows = await UnitModel.findAll({
+    where: { ownerId },
+    include,
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return rows.map((row) => toUnit(row as Row));
 }
 
@@ -59,7 +73,10 @@ export async function remove(id: number, transaction?: Transaction) {
   stationChangedAfter(transaction, 'all');
 }
 
-export async function insertPhoto(values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number }, transaction?: Transaction) {
+export async function insertPhoto(
+  values: { unitId: number; storageKey: string; thumbKey: string; contentType: string; bytes: number },
+  transaction?: Transaction,
+) {
   return toPhoto(await UnitPhotoModel.create(values, { transaction }));
 }
 

@@ -14,7 +14,11 @@ const upload = multer({
   limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 },
   fileFilter: (_req, file, done) => {
     if ((PHOTO_TYPES as readonly string[]).includes(file.mimetype)) return done(null, true);
-    done(new AppError('unsupported-media-type', `Photos must be JPEG, PNG or WebP; this file is ${file.mimetype}`, { photo: 'Choose a JPEG, PNG or WebP photo' }));
+    done(
+      new AppError('unsupported-media-type', `Photos must be JPEG, PNG or WebP; this file is ${file.mimetype}`, {
+        photo: 'Choose a JPEG, PNG or WebP photo',
+      }),
+    );
   },
 }).single('photo');
 

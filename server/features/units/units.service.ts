@@ -29,7 +29,10 @@ const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c,
 export function create(user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
   return inTransaction(async (transaction) => {
     const unit = await repo.insert(user.id, values, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values }, transaction);
+    await audit.record(
+      { actor: user, ownerId: user.id, action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values },
+      transaction,
+    );
     return unit;
   });
 }
@@ -39,7 +42,19 @@ export async function update(user: SessionUser, id: number, patch: Partial<UnitV
   const values = unitInput.parse({ ...before, ...patch });
   return inTransaction(async (transaction) => {
     const unit = await repo.update(id, values, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'unit.update', entityType: 'unit', entityId: id, summary: `Changed ${Object.keys(patch).join(', ')} of unit ${unit.name}`, before, after: values }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'unit.update',
+        entityType: 'unit',
+        entityId: id,
+        summary: `Changed ${Object.keys(patch).join(', ')} of unit ${unit.name}`,
+        before,
+        after: values,
+      },
+      transaction,
+    );
     return unit;
   });
 }
@@ -55,7 +70,18 @@ export async function remove(user: SessionUser, id: number) {
   const photos = await repo.photosOf(id);
   await inTransaction(async (transaction) => {
     await repo.remove(id, transaction);
-    await audit.record({ actor: user, ownerId: user.id, action: 'unit.delete', entityType: 'unit', entityId: id, summary: `Deleted unit ${unit.name}`, before: specOf(unit) }, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'unit.delete',
+        entityType: 'unit',
+        entityId: id,
+        summary: `Deleted unit ${unit.name}`,
+        before: specOf(unit),
+      },
+      transaction,
+    );
   });
   return photos;
 }

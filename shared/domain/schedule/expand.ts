@@ -88,7 +88,8 @@ export function compilePlan(input: PlanInput): CompiledPlan {
   const warnings: string[] = [];
   const blocked: QuietReason[] = [];
   if (schedule.paused) blocked.push({ code: 'paused', message: 'The schedule is paused: resume it to transmit.' });
-  if (input.suspended) blocked.push({ code: 'suspended', message: 'The station is suspended by a club admin: nothing goes on the air until it is lifted.' });
+  if (input.suspended)
+    blocked.push({ code: 'suspended', message: 'The station is suspended by a club admin: nothing goes on the air until it is lifted.' });
 
   let messages: readonly MessageOnAir[] = input.messages ?? [];
   if (!input.messages) {
@@ -106,13 +107,19 @@ export function compilePlan(input: PlanInput): CompiledPlan {
       return;
     }
     if (step.activeHoursUtc && step.activeHoursUtc.fromHour === step.activeHoursUtc.toHour) {
-      skippedSteps.push({ stepIndex, bandId: step.bandId, reason: `Its active hours (${step.activeHoursUtc.fromHour}:00 to ${step.activeHoursUtc.toHour}:00 UTC) never occur.` });
+      skippedSteps.push({
+        stepIndex,
+        bandId: step.bandId,
+        reason: `Its active hours (${step.activeHoursUtc.fromHour}:00 to ${step.activeHoursUtc.toHour}:00 UTC) never occur.`,
+      });
       return;
     }
     const { band, calibrated, range } = check.stepBand;
     if (!calibrated) warnings.push(`${band.name} has no calibration: the tones go out where the uncorrected generator puts them.`);
     if (station.audioOffsetHz < range.lowHz || station.audioOffsetHz > range.highHz) {
-      warnings.push(`The audio offset ${station.audioOffsetHz} Hz would put a tone outside the window on ${band.name}: the plan folds it back between ${range.lowHz} and ${range.highHz.toFixed(1)} Hz.`);
+      warnings.push(
+        `The audio offset ${station.audioOffsetHz} Hz would put a tone outside the window on ${band.name}: the plan folds it back between ${range.lowHz} and ${range.highHz.toFixed(1)} Hz.`,
+      );
     }
     steps.push({ stepIndex, step, stepBand: check.stepBand });
   });

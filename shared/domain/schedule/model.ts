@@ -21,10 +21,7 @@ export type RotationStep = {
   activeHoursUtc: ActiveHoursUtc | null;
 };
 
-export type Cadence =
-  | { kind: 'every-slot' }
-  | { kind: 'every-nth'; nth: number }
-  | { kind: 'duty'; dutyPercent: number };
+export type Cadence = { kind: 'every-slot' } | { kind: 'every-nth'; nth: number } | { kind: 'duty'; dutyPercent: number };
 
 export type Stagger = { stepHz: number; spanHz: number };
 

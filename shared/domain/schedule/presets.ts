@@ -65,7 +65,8 @@ export const SCHEDULE_PRESETS: readonly SchedulePreset[] = [
   {
     id: 'single-band',
     title: 'Single band, one slot in five',
-    summary: 'Stays on one band and uses about a fifth of the slots, chosen afresh each day; the audio offset drifts a few hertz between transmissions.',
+    summary:
+      'Stays on one band and uses about a fifth of the slots, chosen afresh each day; the audio offset drifts a few hertz between transmissions.',
     bandsNeeded: 1,
     build: (c) => {
       const bandId = SINGLE_BAND_LIKING.find((b) => c.enabledBands.includes(b)) ?? byFrequency(c.enabledBands)[0];
@@ -75,7 +76,8 @@ export const SCHEDULE_PRESETS: readonly SchedulePreset[] = [
   {
     id: 'day-and-night',
     title: 'Day and night pair',
-    summary: 'The highest enabled band from 07:00 to 19:00 local solar time, the lowest through the night; the hours are set in UTC from your locator.',
+    summary:
+      'The highest enabled band from 07:00 to 19:00 local solar time, the lowest through the night; the hours are set in UTC from your locator.',
     bandsNeeded: 2,
     build: (c) => {
       const bands = byFrequency(c.enabledBands);
@@ -97,7 +99,11 @@ export const SCHEDULE_PRESETS: readonly SchedulePreset[] = [
       const bands = byFrequency(c.enabledBands);
       // spread the choice: lowest, middle and highest enabled band
       const picks = [bands[0], bands[Math.floor((bands.length - 1) / 2)], bands[bands.length - 1]];
-      return schedule(c, 'Three-band tour', picks.map((bandId) => ({ bandId, slots: 2, activeHoursUtc: null })));
+      return schedule(
+        c,
+        'Three-band tour',
+        picks.map((bandId) => ({ bandId, slots: 2, activeHoursUtc: null })),
+      );
     },
   },
   {
@@ -105,7 +111,12 @@ export const SCHEDULE_PRESETS: readonly SchedulePreset[] = [
     title: 'Every enabled band in turn',
     summary: 'One transmission on each enabled band, lowest to highest, then round again.',
     bandsNeeded: 2,
-    build: (c) => schedule(c, 'Every band', byFrequency(c.enabledBands).map((bandId) => ({ bandId, slots: 1, activeHoursUtc: null }))),
+    build: (c) =>
+      schedule(
+        c,
+        'Every band',
+        byFrequency(c.enabledBands).map((bandId) => ({ bandId, slots: 1, activeHoursUtc: null })),
+      ),
   },
 ];
 

@@ -38,7 +38,11 @@ const BAND_COUNT = BAND_IDS.length;
 /** Position of each band in BAND_IDS (the bucket and sort order). */
 export const bandIndex = new Map<BandId, number>(BAND_IDS.map((id, i) => [id, i]));
 
-export function fleetStationFromPlan(stationId: number | string, currentOffsetHz: number, transmissions: readonly PlannedTransmission[]): FleetStation {
+export function fleetStationFromPlan(
+  stationId: number | string,
+  currentOffsetHz: number,
+  transmissions: readonly PlannedTransmission[],
+): FleetStation {
   return {
     stationId,
     currentOffsetHz,
@@ -210,7 +214,7 @@ function tallyConflicts(flat: Flat, current: Float64Array, guardHz: number, stat
   };
   for (let lo = 0; lo < stations.length; lo++) {
     const run = packed.subarray(counts[lo], counts[lo + 1]).sort();
-    for (let i = 0; i < run.length; ) {
+    for (let i = 0; i < run.length;) {
       const group = Math.floor(run[i] / SLOT_SPAN);
       let j = i + 1;
       while (j < run.length && Math.floor(run[j] / SLOT_SPAN) === group) j++;
@@ -250,7 +254,15 @@ export type FleetProposal = {
  * every shift that would bring one of its transmissions within the guard of another
  * station's; returns how many of its meetings there are without a shift.
  */
-function scoreShifts(flat: Flat, current: Float64Array, s: number, guardHz: number, firstShift: number, count: number, score: Int32Array): number {
+function scoreShifts(
+  flat: Flat,
+  current: Float64Array,
+  s: number,
+  guardHz: number,
+  firstShift: number,
+  count: number,
+  score: Int32Array,
+): number {
   const { order, bucketStart, station, bucket, stationStart } = flat;
   const perHz = 1 / PROPOSAL_GRID_HZ;
   const reach = guardHz - firstShift; // v + reach = distance from the first grid shift to the top of u's band
@@ -352,7 +364,8 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
     proposals: stations.map((st, s) => ({
       stationId: st.stationId,
       currentOffsetHz: st.currentOffsetHz,
-      proposedOffsetHz: shiftOf[s] === 0 ? st.currentOffsetHz : Math.round((st.currentOffsetHz + shiftOf[s]) / PROPOSAL_GRID_HZ) * PROPOSAL_GRID_HZ,
+      proposedOffsetHz:
+        shiftOf[s] === 0 ? st.currentOffsetHz : Math.round((st.currentOffsetHz + shiftOf[s]) / PROPOSAL_GRID_HZ) * PROPOSAL_GRID_HZ,
     })),
     conflicts,
     remaining,

@@ -18,8 +18,10 @@ const fmt = (hz: number) => (Math.round(hz * 10) / 10).toString();
 export function validateSchedule(input: { schedule: ScheduleRules; station: StationSettings; unit: UnitHardware | null }): ScheduleIssue[] {
   const { schedule, station, unit } = input;
   const issues: ScheduleIssue[] = [];
-  const block = (message: string, stepIndex?: number) => issues.push({ level: 'block', message, ...(stepIndex === undefined ? {} : { stepIndex }) });
-  const warn = (message: string, stepIndex?: number) => issues.push({ level: 'warn', message, ...(stepIndex === undefined ? {} : { stepIndex }) });
+  const block = (message: string, stepIndex?: number) =>
+    issues.push({ level: 'block', message, ...(stepIndex === undefined ? {} : { stepIndex }) });
+  const warn = (message: string, stepIndex?: number) =>
+    issues.push({ level: 'warn', message, ...(stepIndex === undefined ? {} : { stepIndex }) });
 
   if (schedule.steps.length === 0) block('Add at least one band to the rotation.');
   const messages = stationMessages(station, unit);
@@ -37,7 +39,10 @@ export function validateSchedule(input: { schedule: ScheduleRules; station: Stat
     const { band, calibrated, calibrationOffsetHz } = check.stepBand;
     const hours = step.activeHoursUtc;
     if (hours && activeHourCount(hours) === 0) {
-      return block(`The active hours ${hours.fromHour}:00 to ${hours.toHour}:00 UTC never occur: set different hours, or clear them to run all day.`, i);
+      return block(
+        `The active hours ${hours.fromHour}:00 to ${hours.toHour}:00 UTC never occur: set different hours, or clear them to run all day.`,
+        i,
+      );
     }
     usableSteps++;
     // the station's own offset, with the tones as radiated after calibration (correction applied, so they land as planned)
@@ -50,7 +55,10 @@ export function validateSchedule(input: { schedule: ScheduleRules; station: Stat
         i,
       );
     } else if (base - spread < range.lowHz || base + spread > range.highHz) {
-      warn(`The stagger reaches past the edge of the ${band.name} window; those offsets fold back inside (between ${fmt(range.lowHz)} and ${fmt(range.highHz)} Hz). Narrow the span or move the offset towards 1500 Hz to keep the pattern even.`, i);
+      warn(
+        `The stagger reaches past the edge of the ${band.name} window; those offsets fold back inside (between ${fmt(range.lowHz)} and ${fmt(range.highHz)} Hz). Narrow the span or move the offset towards 1500 Hz to keep the pattern even.`,
+        i,
+      );
     }
     const carrierHz = band.dialHz + base;
     if (!calibrated) {
@@ -67,27 +75,38 @@ export function validateSchedule(input: { schedule: ScheduleRules; station: Stat
       const driftHz = thermalDriftHz(carrierHz, unit.tempCoPpmPerC, WARM_UP_DEG_C);
       const room = Math.min(foldInto(base - spread, range) - range.lowHz, range.highHz - foldInto(base + spread, range)) + 2;
       if (driftHz > room) {
-        warn(`On ${band.name} a warm-up of ${WARM_UP_DEG_C} °C moves the signal about ${fmt(driftHz)} Hz, more than the ${fmt(Math.max(0, room))} Hz of room to the window edge: let the unit warm up before its first slot, or use a steadier reference.`, i);
+        warn(
+          `On ${band.name} a warm-up of ${WARM_UP_DEG_C} °C moves the signal about ${fmt(driftHz)} Hz, more than the ${fmt(Math.max(0, room))} Hz of room to the window edge: let the unit warm up before its first slot, or use a steadier reference.`,
+          i,
+        );
       }
     }
     if (pair && step.slots > 1 && step.slots % 2 === 1) {
-      warn(`This station sends its two message types as a pair on the same band, so this step's ${step.slots} slots become ${step.slots + 1} (whole pairs).`, i);
+      warn(
+        `This station sends its two message types as a pair on the same band, so this step's ${step.slots} slots become ${step.slots + 1} (whole pairs).`,
+        i,
+      );
     }
   });
   if (schedule.steps.length > 0 && usableSteps === 0) block('No step of the rotation can transmit: fix the steps marked above.');
 
   const sharePercent = cadencePercent(schedule.cadence);
   if (sharePercent > DUTY_BLOCK_PERCENT) {
-    block(`Transmitting in ${fmt(sharePercent)} % of the slots hogs the band: other stations near your frequency get few clear slots. Use at most ${DUTY_BLOCK_PERCENT} %; about one slot in five (${DUTY_COMMON_PERCENT} %) is common practice.`);
+    block(
+      `Transmitting in ${fmt(sharePercent)} % of the slots hogs the band: other stations near your frequency get few clear slots. Use at most ${DUTY_BLOCK_PERCENT} %; about one slot in five (${DUTY_COMMON_PERCENT} %) is common practice.`,
+    );
   } else if (sharePercent > DUTY_COMMON_PERCENT + 1e-9) {
-    warn(`${fmt(sharePercent)} % of the slots is more than the usual one slot in five (${DUTY_COMMON_PERCENT} %): fine for a short test, heavy for a permanent beacon.`);
+    warn(
+      `${fmt(sharePercent)} % of the slots is more than the usual one slot in five (${DUTY_COMMON_PERCENT} %): fine for a short test, heavy for a permanent beacon.`,
+    );
   }
 
   const start = dayNumber(schedule.startDate);
   const end = schedule.endDate === null ? null : dayNumber(schedule.endDate);
   if (start === null) block('Give the start date as YYYY-MM-DD.');
   if (schedule.endDate !== null && end === null) block('Give the end date as YYYY-MM-DD, or clear it.');
-  if (start !== null && end !== null && end < start) block(`The end date ${schedule.endDate} is before the start date ${schedule.startDate}: move it later, or clear it.`);
+  if (start !== null && end !== null && end < start)
+    block(`The end date ${schedule.endDate} is before the start date ${schedule.startDate}: move it later, or clear it.`);
   if (schedule.paused) warn('The schedule is paused: nothing goes on the air until you resume it.');
   return issues;
 }

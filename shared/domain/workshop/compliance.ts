@@ -11,13 +11,7 @@ import { filterCoverage } from './coverage';
 import { bandOnAir, stationPower, type StationSettings, type UnitHardware } from './on-air';
 
 export type ComplianceCode =
-  | 'no-unit'
-  | 'unfiltered-band'
-  | 'power-over-limit'
-  | 'not-encodable'
-  | 'tones-outside-window'
-  | 'not-calibrated'
-  | 'harmonics-fail';
+  'no-unit' | 'unfiltered-band' | 'power-over-limit' | 'not-encodable' | 'tones-outside-window' | 'not-calibrated' | 'harmonics-fail';
 
 export type ComplianceFinding = { code: ComplianceCode; bandId?: BandId; message: string };
 
@@ -32,7 +26,10 @@ export function complianceFindings(input: {
   const call = validateCallsign(station.callsign);
   const plan = planMessages({ callsign: station.callsign, locator: station.locator, powerDbm: 0 });
   if (!call.ok || !plan.ok) {
-    findings.push({ code: 'not-encodable', message: `The callsign or locator cannot be sent in WSPR: ${(!call.ok ? call : plan.ok ? null : plan)?.reason}` });
+    findings.push({
+      code: 'not-encodable',
+      message: `The callsign or locator cannot be sent in WSPR: ${(!call.ok ? call : plan.ok ? null : plan)?.reason}`,
+    });
   }
   if (!unit) {
     findings.push({ code: 'no-unit', message: 'No beacon hardware is assigned, so filters, power and harmonics cannot be checked.' });
@@ -59,7 +56,11 @@ export function complianceFindings(input: {
     const air = bandOnAir(station, unit, bandId);
     if ('problem' in air) continue;
     if (!air.calibrated) {
-      findings.push({ code: 'not-calibrated', bandId, message: `${found.band.name} is enabled with no calibration: measure it so the tones land in the window.` });
+      findings.push({
+        code: 'not-calibrated',
+        bandId,
+        message: `${found.band.name} is enabled with no calibration: measure it so the tones land in the window.`,
+      });
     }
     if (!air.window.inside) {
       findings.push({
@@ -69,7 +70,11 @@ export function complianceFindings(input: {
       });
     }
     if (air.harmonics.pass === false) {
-      findings.push({ code: 'harmonics-fail', bandId, message: `${found.band.name}: ${air.harmonics.summary} (${air.harmonics.limit.source})` });
+      findings.push({
+        code: 'harmonics-fail',
+        bandId,
+        message: `${found.band.name}: ${air.harmonics.summary} (${air.harmonics.limit.source})`,
+      });
     }
   }
   return findings;

@@ -17,13 +17,22 @@ export type Coverage = { covered: true; filter: InstalledFilter; index: number }
 export function filterCoverage(filters: readonly InstalledFilter[], band: Band): Coverage {
   const fitted = filters.map((filter, index) => ({ filter, index })).filter(({ filter }) => filter.bands.includes(band.id));
   if (fitted.length === 0) {
-    return { covered: false, reason: `No low-pass filter for ${band.name} is installed on this unit. Fit one before enabling ${band.name}.` };
+    return {
+      covered: false,
+      reason: `No low-pass filter for ${band.name} is installed on this unit. Fit one before enabling ${band.name}.`,
+    };
   }
   const usable = fitted.find(({ filter }) => filter.cutoffHz >= band.windowHighHz && filter.cutoffHz < 2 * band.dialHz);
   if (usable) return { covered: true, ...usable };
   const { filter } = fitted[0];
   const mhz = (hz: number) => `${(hz / 1e6).toFixed(3)} MHz`;
   return filter.cutoffHz < band.windowHighHz
-    ? { covered: false, reason: `The ${band.name} filter cuts off at ${mhz(filter.cutoffHz)}, below the transmit window (${mhz(band.windowHighHz)}): it would block the signal.` }
-    : { covered: false, reason: `The ${band.name} filter cuts off at ${mhz(filter.cutoffHz)}, above the second harmonic (${mhz(2 * band.dialHz)}): it would not suppress harmonics.` };
+    ? {
+        covered: false,
+        reason: `The ${band.name} filter cuts off at ${mhz(filter.cutoffHz)}, below the transmit window (${mhz(band.windowHighHz)}): it would block the signal.`,
+      }
+    : {
+        covered: false,
+        reason: `The ${band.name} filter cuts off at ${mhz(filter.cutoffHz)}, above the second harmonic (${mhz(2 * band.dialHz)}): it would not suppress harmonics.`,
+      };
 }

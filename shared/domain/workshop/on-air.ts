@@ -139,7 +139,11 @@ export function bandOnAir(station: StationSettings, unit: UnitHardware, bandId: 
   const coverage = filterCoverage(unit.filters, band);
   const window = checkTonesInWindow(band.dialHz, command.tonesHz);
   const carrierHz = command.carrierHz;
-  const warmUpDriftHz = unit.disciplined ? 0 : unit.tempCoPpmPerC === null ? null : thermalDriftHz(carrierHz, unit.tempCoPpmPerC, WARM_UP_DEG_C);
+  const warmUpDriftHz = unit.disciplined
+    ? 0
+    : unit.tempCoPpmPerC === null
+      ? null
+      : thermalDriftHz(carrierHz, unit.tempCoPpmPerC, WARM_UP_DEG_C);
   const driftedWindow =
     warmUpDriftHz === null
       ? null

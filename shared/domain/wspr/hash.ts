@@ -19,12 +19,24 @@ export function hashLittle(text: string, seed: number): number {
     b = (b + (k(4) | (k(5) << 8) | (k(6) << 16) | (k(7) << 24))) | 0;
     c = (c + (k(8) | (k(9) << 8) | (k(10) << 16) | (k(11) << 24))) | 0;
     // mix(a, b, c)
-    a = (a - c) | 0; a ^= rot(c, 4); c = (c + b) | 0;
-    b = (b - a) | 0; b ^= rot(a, 6); a = (a + c) | 0;
-    c = (c - b) | 0; c ^= rot(b, 8); b = (b + a) | 0;
-    a = (a - c) | 0; a ^= rot(c, 16); c = (c + b) | 0;
-    b = (b - a) | 0; b ^= rot(a, 19); a = (a + c) | 0;
-    c = (c - b) | 0; c ^= rot(b, 4); b = (b + a) | 0;
+    a = (a - c) | 0;
+    a ^= rot(c, 4);
+    c = (c + b) | 0;
+    b = (b - a) | 0;
+    b ^= rot(a, 6);
+    a = (a + c) | 0;
+    c = (c - b) | 0;
+    c ^= rot(b, 8);
+    b = (b + a) | 0;
+    a = (a - c) | 0;
+    a ^= rot(c, 16);
+    c = (c + b) | 0;
+    b = (b - a) | 0;
+    b ^= rot(a, 19);
+    a = (a + c) | 0;
+    c = (c - b) | 0;
+    c ^= rot(b, 4);
+    b = (b + a) | 0;
     length -= 12;
     o += 12;
   }
@@ -43,13 +55,20 @@ export function hashLittle(text: string, seed: number): number {
   if (length >= 2) a = (a + (k(1) << 8)) | 0;
   a = (a + k(0)) | 0;
   // final(a, b, c)
-  c ^= b; c = (c - rot(b, 14)) | 0;
-  a ^= c; a = (a - rot(c, 11)) | 0;
-  b ^= a; b = (b - rot(a, 25)) | 0;
-  c ^= b; c = (c - rot(b, 16)) | 0;
-  a ^= c; a = (a - rot(c, 4)) | 0;
-  b ^= a; b = (b - rot(a, 14)) | 0;
-  c ^= b; c = (c - rot(b, 24)) | 0;
+  c ^= b;
+  c = (c - rot(b, 14)) | 0;
+  a ^= c;
+  a = (a - rot(c, 11)) | 0;
+  b ^= a;
+  b = (b - rot(a, 25)) | 0;
+  c ^= b;
+  c = (c - rot(b, 16)) | 0;
+  a ^= c;
+  a = (a - rot(c, 4)) | 0;
+  b ^= a;
+  b = (b - rot(a, 14)) | 0;
+  c ^= b;
+  c = (c - rot(b, 24)) | 0;
   return c >>> 0;
 }
 

@@ -40,9 +40,14 @@ export type ParsedMessage = { message: WsprMessage; power: PowerRounding };
 
 /** Reads a message text; power that is not an allowed level is rounded and reported in `power`. */
 export function parseMessage(text: string): Result<ParsedMessage> {
-  const tokens = text.trim().split(/\s+/).filter((t) => t !== '');
+  const tokens = text
+    .trim()
+    .split(/\s+/)
+    .filter((t) => t !== '');
   if (tokens.length < 2 || tokens.length > 3) {
-    return refuse(`'${text.trim()}' is not a WSPR message: write "CALLSIGN LOCATOR dBm", "PREFIX/CALLSIGN dBm" or "<CALLSIGN> LOCATOR6 dBm".`);
+    return refuse(
+      `'${text.trim()}' is not a WSPR message: write "CALLSIGN LOCATOR dBm", "PREFIX/CALLSIGN dBm" or "<CALLSIGN> LOCATOR6 dBm".`,
+    );
   }
   const power = validateMessagePower(tokens[tokens.length - 1]);
   if (!power.ok) return power;
@@ -69,12 +74,16 @@ export function parseMessage(text: string): Result<ParsedMessage> {
   const call = validatePlainCallsign(first);
   if (!call.ok) {
     if (first.includes('/')) {
-      return refuse(`A compound callsign travels without a locator: write "${first.toUpperCase()} ${powerDbm}", and the locator in "<${first.toUpperCase()}> LOCATOR6 ${powerDbm}".`);
+      return refuse(
+        `A compound callsign travels without a locator: write "${first.toUpperCase()} ${powerDbm}", and the locator in "<${first.toUpperCase()}> LOCATOR6 ${powerDbm}".`,
+      );
     }
     return call;
   }
   if (tokens[1].trim().length === 6) {
-    return refuse(`A 6-character locator travels in Type 3: write "<${call.callsign}> ${tokens[1].toUpperCase()} ${powerDbm}", or use its first 4 characters here.`);
+    return refuse(
+      `A 6-character locator travels in Type 3: write "<${call.callsign}> ${tokens[1].toUpperCase()} ${powerDbm}", or use its first 4 characters here.`,
+    );
   }
   const loc = validateMessageLocator(tokens[1], 4);
   if (!loc.ok) return loc;

@@ -11,9 +11,7 @@ const CHARS = '0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZ ';
 /** Type 3 carries only a hash: resolve it to the callsign heard earlier, or leave it unresolved. */
 export type HashResolver = (hash: number) => string | undefined;
 
-export type UnpackedMessage =
-  | WsprMessage
-  | { type: 3; callsign: null; hash: number; locator: string; powerDbm: number };
+export type UnpackedMessage = WsprMessage | { type: 3; callsign: null; hash: number; locator: string; powerDbm: number };
 
 /** Six characters (with spaces) from a 28-bit field, or null if the value is not a callsign field. */
 export function unpackSixCharacters(n: number): string | null {

@@ -18,9 +18,7 @@ function fillAndSubmit(email: string, password: string) {
 
 describe('SignInForm', () => {
   it('when the server answers 401, shows the server message and stays signed out', async () => {
-    const { calls } = stubFetch(() =>
-      errorResponse(401, 'unauthenticated', 'That e-mail and password do not match an account.'),
-    );
+    const { calls } = stubFetch(() => errorResponse(401, 'unauthenticated', 'That e-mail and password do not match an account.'));
     const { queryClient } = renderWithProviders(<SignInHarness />);
 
     fillAndSubmit('Operator@Faintline.example ', 'wrong-password');
@@ -53,7 +51,14 @@ describe('SignInForm', () => {
   });
 
   it('when the password is right, puts the user into the session cache', async () => {
-    const user = { id: 7, email: 'operator@faintline.example', displayName: 'Ilse Marrow', callsign: 'Q1IMW', clubs: [], adminOfClubIds: [] };
+    const user = {
+      id: 7,
+      email: 'operator@faintline.example',
+      displayName: 'Ilse Marrow',
+      callsign: 'Q1IMW',
+      clubs: [],
+      adminOfClubIds: [],
+    };
     stubFetch(() => jsonResponse(200, user));
     const { queryClient } = renderWithProviders(<SignInHarness />);
 

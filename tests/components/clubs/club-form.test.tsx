@@ -33,7 +33,9 @@ describe('ClubForm for an existing club', () => {
   });
 
   it('when the server refuses the name, shows its message beside the field and no saved note', async () => {
-    const onSubmit = jest.fn().mockRejectedValue(new ApiError(400, 'bad-request', 'Check the form', { name: 'Give the club a name of at least 3 characters' }));
+    const onSubmit = jest
+      .fn()
+      .mockRejectedValue(new ApiError(400, 'bad-request', 'Check the form', { name: 'Give the club a name of at least 3 characters' }));
     renderWithProviders(<ClubForm initialValues={club} submitLabel="Save club settings" onSubmit={onSubmit} />);
     fireEvent.changeText(screen.getByLabelText('Club name'), 'Saltmarsh');
     fireEvent.press(screen.getByLabelText('Save club settings'));

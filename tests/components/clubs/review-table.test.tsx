@@ -41,9 +41,7 @@ const rows: ReviewRow[] = [
 function renderTable(layout: 'cards' | 'columns' = 'cards') {
   const onSuspend = jest.fn();
   const onLift = jest.fn();
-  renderWithProviders(
-    <ReviewTable rows={rows} layout={layout} stationHref={() => '/'} onSuspend={onSuspend} onLift={onLift} />,
-  );
+  renderWithProviders(<ReviewTable rows={rows} layout={layout} stationHref={() => '/'} onSuspend={onSuspend} onLift={onLift} />);
   return { onSuspend, onLift };
 }
 

@@ -35,7 +35,7 @@ describe('AlertSettingsForm', () => {
     expect(calls[0]).toEqual({ url: '/api/stations/11/alert-settings', method: 'PUT', body: { silentMinutes: 15, clockOffsetMs: 750 } });
   });
 
-  it("when the server refuses a field, shows its message beside that field", async () => {
+  it('when the server refuses a field, shows its message beside that field', async () => {
     stubFetch(() => errorResponse(400, 'bad-request', 'Check the thresholds', { clockOffsetMs: 'At most 10 000 ms' }));
     renderWithProviders(<Harness />);
     fireEvent.press(screen.getByLabelText('Save thresholds'));

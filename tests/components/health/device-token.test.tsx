@@ -69,7 +69,10 @@ describe('/stations/[id]/device', () => {
     await waitFor(() => expect(screen.getByLabelText('Create a device token')).toBeTruthy());
     fireEvent.press(screen.getByLabelText('Create a device token'));
     await waitFor(() => expect(screenText()).toContain('fld_secret_token_1'));
-    const cache = first.queryClient.getQueryCache().getAll().map((q) => JSON.stringify(q.state.data));
+    const cache = first.queryClient
+      .getQueryCache()
+      .getAll()
+      .map((q) => JSON.stringify(q.state.data));
     expect(cache.join(' ')).not.toContain('fld_secret_token_1');
     first.unmount();
 

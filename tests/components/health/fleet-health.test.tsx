@@ -47,7 +47,9 @@ describe('ageInWords', () => {
 
 describe.each(['cards', 'table'] as const)('FleetHealth as %s', (layout) => {
   it('when stations are online, offline and without a device, shows each state with its age', () => {
-    renderWithProviders(<FleetHealth fleet={[online, offline, noDevice]} layout={layout} onOpenStation={() => {}} onOpenDevice={() => {}} />);
+    renderWithProviders(
+      <FleetHealth fleet={[online, offline, noDevice]} layout={layout} onOpenStation={() => {}} onOpenDevice={() => {}} />,
+    );
     const text = screenText();
     expect(text).toMatch(/Attic beacon.*Online.*Heard 12 s ago/);
     expect(text).toMatch(/Shed rig.*Offline.*Heard 2 h 5 min ago/);
@@ -67,7 +69,9 @@ describe.each(['cards', 'table'] as const)('FleetHealth as %s', (layout) => {
   it('when the operator presses a station or "create a token", calls back with its id', () => {
     const onOpenStation = jest.fn();
     const onOpenDevice = jest.fn();
-    renderWithProviders(<FleetHealth fleet={[online, noDevice]} layout={layout} onOpenStation={onOpenStation} onOpenDevice={onOpenDevice} />);
+    renderWithProviders(
+      <FleetHealth fleet={[online, noDevice]} layout={layout} onOpenStation={onOpenStation} onOpenDevice={onOpenDevice} />,
+    );
     fireEvent.press(screen.getByLabelText('Health of Attic beacon'));
     fireEvent.press(screen.getByLabelText('Create a device token for Garden mast'));
     expect(onOpenStation).toHaveBeenCalledWith(11);

@@ -42,9 +42,20 @@ describe('StationHealthView', () => {
   });
 
   it('when an alert is open and another resolved, lists the open one first and the other in the history', () => {
-    const resolved = { ...silentAlert, id: 4, rule: 'clock-offset' as const, message: 'The device clock is 1400 ms off (limit 1000 ms): check its time source.', resolvedAt: '2026-12-02T08:00:00.000Z' };
+    const resolved = {
+      ...silentAlert,
+      id: 4,
+      rule: 'clock-offset' as const,
+      message: 'The device clock is 1400 ms off (limit 1000 ms): check its time source.',
+      resolvedAt: '2026-12-02T08:00:00.000Z',
+    };
     renderWithProviders(
-      <StationHealthView health={healthFixture({ online: false, heartbeatAgeS: 2400, alerts: [silentAlert, resolved] })} nowMs={nowMs} readOnly onSaveSettings={async () => {}} />,
+      <StationHealthView
+        health={healthFixture({ online: false, heartbeatAgeS: 2400, alerts: [silentAlert, resolved] })}
+        nowMs={nowMs}
+        readOnly
+        onSaveSettings={async () => {}}
+      />,
     );
     const text = screenText();
     expect(text).toMatch(/Offline.*Heard 40 min ago/);
@@ -52,7 +63,7 @@ describe('StationHealthView', () => {
     expect(text).toMatch(/Alert history \(24 h\)\s*Clock off · resolved\s*The device clock is 1400 ms off/);
     expect(text).toContain('resolved 2026-12-02 08:00 UTC');
     // a club admin sees the thresholds, not the form
-    expect(text).toContain('Only the station\'s owner can change these thresholds.');
+    expect(text).toContain("Only the station's owner can change these thresholds.");
     expect(screen.queryByLabelText('Save thresholds')).toBeNull();
   });
 

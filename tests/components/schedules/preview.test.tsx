@@ -34,7 +34,9 @@ describe('NextTransmissions', () => {
   });
 
   it('when nothing is coming, says why', () => {
-    renderWithProviders(<NextTransmissions now={() => NOW_MS} transmissions={[]} quietMessage="The schedule is paused: resume it to transmit." />);
+    renderWithProviders(
+      <NextTransmissions now={() => NOW_MS} transmissions={[]} quietMessage="The schedule is paused: resume it to transmit." />,
+    );
     expect(screenText()).toContain('The schedule is paused: resume it to transmit.');
   });
 });

@@ -23,11 +23,18 @@ function renderEditor(values = draft([{ bandId: '20m', slots: 1, activeHoursUtc:
   return { onSubmit };
 }
 
-const saveDisabled = () => screen.getByLabelText('Save schedule').props['aria-disabled'] ?? screen.getByLabelText('Save schedule').props.accessibilityState?.disabled;
+const saveDisabled = () =>
+  screen.getByLabelText('Save schedule').props['aria-disabled'] ??
+  screen.getByLabelText('Save schedule').props.accessibilityState?.disabled;
 
 describe('ScheduleEditor', () => {
   it('when a step holds a band without a fitting filter, shows the reason beside the step and disables Save', async () => {
-    renderEditor(draft([{ bandId: '20m', slots: 1, activeHoursUtc: null }, { bandId: '10m', slots: 1, activeHoursUtc: null }]));
+    renderEditor(
+      draft([
+        { bandId: '20m', slots: 1, activeHoursUtc: null },
+        { bandId: '10m', slots: 1, activeHoursUtc: null },
+      ]),
+    );
 
     await waitFor(() => expect(screenText()).toContain('No low-pass filter for 10 m is installed on this unit'));
     expect(saveDisabled()).toBe(true);

@@ -70,9 +70,7 @@ describe('StationForm', () => {
   });
 
   it("when the server rejects a field, shows the server's message beside that field", async () => {
-    stubFetch(() =>
-      errorResponse(400, 'bad-request', 'Check the marked fields', { callsign: 'That callsign cannot be sent in WSPR' }),
-    );
+    stubFetch(() => errorResponse(400, 'bad-request', 'Check the marked fields', { callsign: 'That callsign cannot be sent in WSPR' }));
     renderWithProviders(<NewStationHarness />);
 
     fill({ name: 'Shed rig', callsign: 'Q2TRY', locator: 'JO22' });

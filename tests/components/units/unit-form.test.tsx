@@ -77,7 +77,12 @@ describe('UnitForm', () => {
 
 describe('filterAndSortUnits', () => {
   const unit = (id: number, name: string, bands: string[][]) =>
-    ({ id, name, serialLabel: '', filters: bands.map((b) => ({ bands: b, type: 'butterworth', order: 5, cutoffHz: 1e6 })) }) as unknown as Unit;
+    ({
+      id,
+      name,
+      serialLabel: '',
+      filters: bands.map((b) => ({ bands: b, type: 'butterworth', order: 5, cutoffHz: 1e6 })),
+    }) as unknown as Unit;
   const units = [unit(1, 'Shed kit', [['20m']]), unit(2, 'Attic board', [['40m'], ['20m']]), unit(3, 'Loft board', [['80m']])];
 
   it.each([

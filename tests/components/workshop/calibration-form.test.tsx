@@ -46,9 +46,7 @@ describe('CalibrationForm', () => {
 
   it('when a measurement is proposed, shows the ppm and every offset, and accepting posts the edited values', async () => {
     const { calls } = stubFetch((call) =>
-      call.url.endsWith('/calibration/proposal')
-        ? jsonResponse(200, proposal)
-        : jsonResponse(200, { id: 12, bands: [] }),
+      call.url.endsWith('/calibration/proposal') ? jsonResponse(200, proposal) : jsonResponse(200, { id: 12, bands: [] }),
     );
     const onSaved = jest.fn();
     renderWithProviders(<Harness onSaved={onSaved} />);
@@ -98,7 +96,7 @@ describe('CalibrationForm', () => {
     expect(calls).toHaveLength(1);
   });
 
-  it("when the server refuses the proposal, shows its message", async () => {
+  it('when the server refuses the proposal, shows its message', async () => {
     stubFetch(() => errorResponse(400, 'bad-request', 'Enable 40 m before measuring on it'));
     renderWithProviders(<Harness />);
 

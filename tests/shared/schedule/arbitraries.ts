@@ -60,7 +60,10 @@ export const stationUnitArb: fc.Arbitrary<{ station: StationSettings; unit: Unit
       minLength: POOL.length,
       maxLength: POOL.length,
     }),
-    calibration: fc.array(fc.option(fc.double({ min: -300, max: 300, noNaN: true }), { nil: null }), { minLength: POOL.length, maxLength: POOL.length }),
+    calibration: fc.array(fc.option(fc.double({ min: -300, max: 300, noNaN: true }), { nil: null }), {
+      minLength: POOL.length,
+      maxLength: POOL.length,
+    }),
   })
   .map(({ identity, audioOffsetHz, states, calibration }) => ({
     station: {

@@ -76,7 +76,13 @@ describe('expandPlan, worked cases', () => {
         { bandId: '40m', slots: 1, activeHoursUtc: null },
       ],
     });
-    const r = expandPlan({ schedule, station: { ...station, locator: 'IO91wm' }, unit, fromMs: DEC_2_2026, toMs: DEC_2_2026 + 4 * SLOT_MS });
+    const r = expandPlan({
+      schedule,
+      station: { ...station, locator: 'IO91wm' },
+      unit,
+      fromMs: DEC_2_2026,
+      toMs: DEC_2_2026 + 4 * SLOT_MS,
+    });
     expect(r.transmissions.map((t) => `${t.bandId} ${t.messageType} ${t.messageText}`)).toEqual([
       '20m 1 Q1IMW IO91 23',
       '20m 3 <Q1IMW> IO91WM 23',
@@ -137,7 +143,9 @@ describe('expandPlan, worked cases', () => {
 
   it('when staggered by 3 Hz over 30 Hz, moves the offset 3 Hz per transmission within 1485–1515 Hz', () => {
     const schedule = rules({ cadence: { kind: 'every-slot' }, stagger: { stepHz: 3, spanHz: 30 } });
-    const offsets = expandPlan({ schedule, station, unit, fromMs: DEC_2_2026, toMs: DEC_2_2026 + 40 * SLOT_MS }).transmissions.map((t) => t.audioOffsetHz);
+    const offsets = expandPlan({ schedule, station, unit, fromMs: DEC_2_2026, toMs: DEC_2_2026 + 40 * SLOT_MS }).transmissions.map(
+      (t) => t.audioOffsetHz,
+    );
     expect(Math.min(...offsets)).toBeGreaterThanOrEqual(1485);
     expect(Math.max(...offsets)).toBeLessThanOrEqual(1515);
     for (let i = 1; i < offsets.length; i++) expect(Math.abs(offsets[i] - offsets[i - 1])).toBeCloseTo(3, 9);

@@ -12,20 +12,51 @@ function run(...args: string[]): Promise<Run> {
     });
   });
 }
-const lines = (r: Run) => r.stdout.trim().split('\n').map((l) => JSON.parse(l));
+const lines = (r: Run) =>
+  r.stdout
+    .trim()
+    .split('\n')
+    .map((l) => JSON.parse(l));
 const station = ['--callsign', 'Q1IMW', '--locator', 'IO91wm', '--power', '23'];
 
 describe('faintline plan', () => {
   it('when asked for help, documents the rotation options', async () => {
     const r = await run('--help');
     expect(r.code).toBe(0);
-    for (const flag of ['--band', '--slots', '--duty', '--every', '--from', '--hours', '--offset', '--stagger-step', '--stagger-span', '--cal']) {
+    for (const flag of [
+      '--band',
+      '--slots',
+      '--duty',
+      '--every',
+      '--from',
+      '--hours',
+      '--offset',
+      '--stagger-step',
+      '--stagger-span',
+      '--cal',
+    ]) {
       expect(r.stdout).toContain(flag);
     }
   });
 
   it('when planning two bands for a day at one slot in five, prints 144 transmissions as Type 1/3 pairs on one band', async () => {
-    const r = await run(...station, '--band', '20m', '--band', '40m', '--slots', '2', '--duty', '20', '--from', '2026-12-02T00:00Z', '--hours', '24', '--stagger-step', '3');
+    const r = await run(
+      ...station,
+      '--band',
+      '20m',
+      '--band',
+      '40m',
+      '--slots',
+      '2',
+      '--duty',
+      '20',
+      '--from',
+      '2026-12-02T00:00Z',
+      '--hours',
+      '24',
+      '--stagger-step',
+      '3',
+    );
     expect(r.code).toBe(0);
     const txs = lines(r);
     expect(txs).toHaveLength(144);

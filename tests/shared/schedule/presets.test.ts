@@ -6,13 +6,16 @@ describe('schedule presets', () => {
   const enabledBands = ['40m', '20m', '30m', '80m'] as const;
   const context = { enabledBands: [...enabledBands], locator: 'JO22', startDate: '2026-12-02' };
 
-  it.each(SCHEDULE_PRESETS.map((p) => [p.id]))('when the %s preset is built, passes the schedule schema and the editor checks without a block', (id) => {
-    const built = presetsFor(context).find((p) => p.preset.id === id)!.schedule;
-    expect(scheduleInput.safeParse(built).success).toBe(true);
-    const station = stationOn([...enabledBands], { locator: 'JO22' });
-    const issues = validateSchedule({ schedule: rules({ ...built }), station, unit: unitWithFilters([...enabledBands]) });
-    expect(issues.filter((i) => i.level === 'block')).toEqual([]);
-  });
+  it.each(SCHEDULE_PRESETS.map((p) => [p.id]))(
+    'when the %s preset is built, passes the schedule schema and the editor checks without a block',
+    (id) => {
+      const built = presetsFor(context).find((p) => p.preset.id === id)!.schedule;
+      expect(scheduleInput.safeParse(built).success).toBe(true);
+      const station = stationOn([...enabledBands], { locator: 'JO22' });
+      const issues = validateSchedule({ schedule: rules({ ...built }), station, unit: unitWithFilters([...enabledBands]) });
+      expect(issues.filter((i) => i.level === 'block')).toEqual([]);
+    },
+  );
 
   it('when the station has one band, offers only the presets that need one band', () => {
     expect(presetsFor({ ...context, enabledBands: ['30m'] }).map((p) => p.preset.id)).toEqual(['single-band']);

@@ -31,7 +31,11 @@ const crowdedFleetArb = (constantOffset: boolean, maxStations: number) =>
       fc.record({
         offsetHz: fc.double({ min: 1480, max: 1520, noNaN: true }),
         txs: fc.uniqueArray(
-          fc.record({ slot: fc.integer({ min: 0, max: 29 }), band: fc.constantFrom(...FLEET_BANDS), wobbleHz: fc.double({ min: -15, max: 15, noNaN: true }) }),
+          fc.record({
+            slot: fc.integer({ min: 0, max: 29 }),
+            band: fc.constantFrom(...FLEET_BANDS),
+            wobbleHz: fc.double({ min: -15, max: 15, noNaN: true }),
+          }),
           { selector: (t) => t.slot, maxLength: 12 },
         ),
       }),
@@ -143,7 +147,12 @@ describe('proposeFleetOffsets', () => {
     const schedule = rules({ cadence: { kind: 'every-nth', nth: 5 } });
     const plan = (id: number, offsetHz: number) => {
       const station = stationOn(['20m'], { audioOffsetHz: offsetHz });
-      return fleetStationFromPlan(id, offsetHz, expandPlan({ schedule: { ...schedule, stationId: id }, station, unit, fromMs: DEC_2_2026, toMs: DEC_2_2026 + DAY_MS }).transmissions);
+      return fleetStationFromPlan(
+        id,
+        offsetHz,
+        expandPlan({ schedule: { ...schedule, stationId: id }, station, unit, fromMs: DEC_2_2026, toMs: DEC_2_2026 + DAY_MS })
+          .transmissions,
+      );
     };
     const fleet = [plan(1, 1500), plan(2, 1501), plan(3, 1499)];
     const r = proposeFleetOffsets(fleet);
@@ -152,7 +161,11 @@ describe('proposeFleetOffsets', () => {
     const replanned = r.proposals.map((p) => plan(p.stationId as number, p.proposedOffsetHz));
     expect(findFleetConflicts(replanned)).toEqual([]);
     // the same fleet built from schedules and settings
-    const inputs = r.proposals.map((p) => ({ schedule: { ...schedule, stationId: p.stationId }, station: stationOn(['20m'], { audioOffsetHz: p.proposedOffsetHz }), unit }));
+    const inputs = r.proposals.map((p) => ({
+      schedule: { ...schedule, stationId: p.stationId },
+      station: stationOn(['20m'], { audioOffsetHz: p.proposedOffsetHz }),
+      unit,
+    }));
     expect(fleetFromSchedules(inputs, DEC_2_2026, DEC_2_2026 + DAY_MS)).toEqual(replanned);
     const { lowHz, highHz } = allowedOffsetRange();
     expect(r.proposals.every((p) => p.proposedOffsetHz >= lowHz && p.proposedOffsetHz <= highHz)).toBe(true);

@@ -24,18 +24,12 @@ export const compoundCallsign: fc.Arbitrary<string> = fc.oneof(
 
 const FIELD = 'ABCDEFGHIJKLMNOPQR'.split('');
 const SUB = 'ABCDEFGHIJKLMNOPQRSTUVWX'.split('');
-export const locator4 = fc
-  .tuple(fc.constantFrom(...FIELD), fc.constantFrom(...FIELD), digit, digit)
-  .map((p) => p.join(''));
-export const locator6 = fc
-  .tuple(locator4, fc.constantFrom(...SUB), fc.constantFrom(...SUB))
-  .map((p) => p.join(''));
+export const locator4 = fc.tuple(fc.constantFrom(...FIELD), fc.constantFrom(...FIELD), digit, digit).map((p) => p.join(''));
+export const locator6 = fc.tuple(locator4, fc.constantFrom(...SUB), fc.constantFrom(...SUB)).map((p) => p.join(''));
 
 export const powerLevel = fc.constantFrom(0, 3, 7, 10, 13, 17, 20, 23, 27, 30, 33, 37, 40, 43, 47, 50, 53, 57, 60);
 
 export const type1Text = fc.tuple(plainCallsign, locator4, powerLevel).map(([c, l, p]) => `${c} ${l} ${p}`);
 export const type2Text = fc.tuple(compoundCallsign, powerLevel).map(([c, p]) => `${c} ${p}`);
-export const type3Text = fc
-  .tuple(fc.oneof(plainCallsign, compoundCallsign), locator6, powerLevel)
-  .map(([c, l, p]) => `<${c}> ${l} ${p}`);
+export const type3Text = fc.tuple(fc.oneof(plainCallsign, compoundCallsign), locator6, powerLevel).map(([c, l, p]) => `<${c}> ${l} ${p}`);
 export const anyMessageText = fc.oneof(type1Text, type2Text, type3Text);

@@ -92,18 +92,18 @@ describe('unpackFields', () => {
     ['Type 2', type2Text],
     ['Type 3', type3Text],
   ])('when packing then unpacking random %s messages, gives each message back', (_type, arbitrary) => {
-    fc.assert(fc.property(arbitrary, (text) => roundTrip(text) === text), RUNS);
+    fc.assert(
+      fc.property(arbitrary, (text) => roundTrip(text) === text),
+      RUNS,
+    );
   });
 
-  it.each(publishedPackedVectors.map((v) => [v.packedHex, v.message]))(
-    'when reading the published bytes %s, gives %s',
-    (hex, message) => {
-      const bytes = hex.split(' ').map((h) => parseInt(h, 16));
-      const callsign = message.match(/^<(.*)>/)?.[1];
-      const r = unpackBytes(bytes, (hash) => (callsign && hash === callsignHash(callsign) ? callsign : undefined));
-      expect(r.ok && r.message.callsign !== null && formatMessage(r.message)).toBe(message);
-    },
-  );
+  it.each(publishedPackedVectors.map((v) => [v.packedHex, v.message]))('when reading the published bytes %s, gives %s', (hex, message) => {
+    const bytes = hex.split(' ').map((h) => parseInt(h, 16));
+    const callsign = message.match(/^<(.*)>/)?.[1];
+    const r = unpackBytes(bytes, (hash) => (callsign && hash === callsignHash(callsign) ? callsign : undefined));
+    expect(r.ok && r.message.callsign !== null && formatMessage(r.message)).toBe(message);
+  });
 
   it('when a Type 3 hash is unknown, returns the hash unresolved', () => {
     const r = unpackFields(packMessage({ type: 3, callsign: 'K1ABC', locator: 'FN42AA', powerDbm: 33 }));

@@ -42,8 +42,8 @@ export default function ClubConflictsRoute() {
       <Stack.Screen options={{ title: `${name} · Collisions` }} />
       <ClubNav clubId={clubId} clubName={name} current="conflicts" isAdmin />
       <Text tone="muted">
-        Two stations collide when they send in the same two-minute slot on the same band with their tones too close
-        together for a receiver to tell them apart. Moving one audio offset within the 1400–1600 Hz window parts them.
+        Two stations collide when they send in the same two-minute slot on the same band with their tones too close together for a receiver
+        to tell them apart. Moving one audio offset within the 1400–1600 Hz window parts them.
       </Text>
       {body}
     </Screen>

@@ -31,7 +31,12 @@ export default function ClubMembersRoute() {
   const [removeError, setRemoveError] = useState<string>();
   const [roleError, setRoleError] = useState<string>();
 
-  if (club.isPending) return <Screen><LoadingState label="Loading the club…" /></Screen>;
+  if (club.isPending)
+    return (
+      <Screen>
+        <LoadingState label="Loading the club…" />
+      </Screen>
+    );
   if (club.isError)
     return (
       <Screen>

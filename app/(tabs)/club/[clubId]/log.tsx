@@ -21,9 +21,11 @@ export default function ClubLogRoute() {
     <Screen>
       <Stack.Screen options={{ title: `${name} · Log` }} />
       <ClubNav clubId={clubId} clubName={name} current="log" isAdmin />
-      <AuditIntro text="Every change in the club and to its members’ stations: who, what, and when (UTC)." csvHref={auditCsvPath.club(clubId)} />
+      <AuditIntro
+        text="Every change in the club and to its members’ stations: who, what, and when (UTC)."
+        csvHref={auditCsvPath.club(clubId)}
+      />
       {body}
     </Screen>
   );
 }
-

@@ -93,8 +93,8 @@ export default function ClubReviewRoute() {
       <Stack.Screen options={{ title: `${name} · Review` }} />
       <ClubNav clubId={clubId} clubName={name} current="review" isAdmin />
       <Text tone="muted">
-        Each member’s station checked against the club’s rules and its own hardware: filters, power, tones and
-        calibration. Only the owner can fix a station; you can stop one until it is fixed.
+        Each member’s station checked against the club’s rules and its own hardware: filters, power, tones and calibration. Only the owner
+        can fix a station; you can stop one until it is fixed.
       </Text>
       {message ? <Notice tone={message.tone} message={message.text} /> : null}
       {body}

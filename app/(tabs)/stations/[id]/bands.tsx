@@ -27,7 +27,8 @@ export default function StationBandsRoute() {
   if (station.isPending || (station.data?.unitId != null && unit.isPending)) body = <LoadingState label="Loading the bands…" />;
   else if (station.isError)
     body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
-  else if (unit.isError) body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
+  else if (unit.isError)
+    body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
   else {
     const readOnly = station.data.ownerId !== me?.id;
     body = (
@@ -36,7 +37,9 @@ export default function StationBandsRoute() {
           title="Bands and calibration"
           station={station.data}
           actions={[
-            ...(readOnly ? [] : [{ label: 'Calibrate', onPress: () => router.push({ pathname: '/stations/[id]/calibrate', params: { id } }) }]),
+            ...(readOnly
+              ? []
+              : [{ label: 'Calibrate', onPress: () => router.push({ pathname: '/stations/[id]/calibrate', params: { id } }) }]),
             { label: 'On-air detail', onPress: () => router.push({ pathname: '/stations/[id]/on-air', params: { id } }), secondary: true },
           ]}
           intro="Switch on the bands this station uses. A band needs a low-pass filter on the unit that covers it. Each enabled band shows where its four tones sit in the 200 Hz receive window."
@@ -56,7 +59,8 @@ export default function StationBandsRoute() {
                 onError: (error) =>
                   setErrors((all) => ({
                     ...all,
-                    [bandId]: error instanceof ApiError ? (error.fields.enabled ?? error.message) : 'The band could not be changed. Try again.',
+                    [bandId]:
+                      error instanceof ApiError ? (error.fields.enabled ?? error.message) : 'The band could not be changed. Try again.',
                   })),
                 onSettled: () => setPending(null),
               },

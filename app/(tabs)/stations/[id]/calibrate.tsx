@@ -31,7 +31,12 @@ export default function StationCalibrateRoute() {
   else if (station.isError)
     body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
   else if (station.data.ownerId !== me?.id)
-    body = <ErrorState title="Read-only" error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can calibrate it.`)} />;
+    body = (
+      <ErrorState
+        title="Read-only"
+        error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can calibrate it.`)}
+      />
+    );
   else {
     // lowest band first, as everywhere else
     const order = bandsFor(station.data.region).map((band) => band.id as string);

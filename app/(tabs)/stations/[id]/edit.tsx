@@ -19,22 +19,16 @@ export default function EditStationRoute() {
   const update = useUpdateStationMutation(stationId);
   const units = useUnitsQuery();
   const back = () =>
-    router.canGoBack()
-      ? router.back()
-      : router.replace({ pathname: '/stations/[id]', params: { id: String(stationId) } });
+    router.canGoBack() ? router.back() : router.replace({ pathname: '/stations/[id]', params: { id: String(stationId) } });
 
   let body;
   if (station.isPending || units.isPending) body = <LoadingState label="Loading the station…" />;
   else if (station.isError)
     body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
-  else if (units.isError)
-    body = <ErrorState title="Your units could not be loaded" error={units.error} onRetry={() => units.refetch()} />;
+  else if (units.isError) body = <ErrorState title="Your units could not be loaded" error={units.error} onRetry={() => units.refetch()} />;
   else if (station.data.ownerId !== me?.id)
     body = (
-      <ErrorState
-        title="Read-only"
-        error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can change it.`)}
-      />
+      <ErrorState title="Read-only" error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can change it.`)} />
     );
   else
     body = (

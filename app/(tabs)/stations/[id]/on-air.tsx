@@ -17,10 +17,12 @@ export default function StationOnAirRoute() {
   const unit = useUnitQuery(station.data?.unitId);
 
   let body;
-  if (station.isPending || (station.data?.unitId != null && unit.isPending)) body = <LoadingState label="Working out what goes on the air…" />;
+  if (station.isPending || (station.data?.unitId != null && unit.isPending))
+    body = <LoadingState label="Working out what goes on the air…" />;
   else if (station.isError)
     body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
-  else if (unit.isError) body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
+  else if (unit.isError)
+    body = <ErrorState title="The station’s unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
   else {
     const order = bandsFor(station.data.region).map((b) => b.id);
     const enabled = station.data.bands
@@ -36,7 +38,11 @@ export default function StationOnAirRoute() {
           title="On-air detail"
           station={station.data}
           actions={[
-            { label: 'Bands and calibration', secondary: true, onPress: () => router.push({ pathname: '/stations/[id]/bands', params: { id } }) },
+            {
+              label: 'Bands and calibration',
+              secondary: true,
+              onPress: () => router.push({ pathname: '/stations/[id]/bands', params: { id } }),
+            },
           ]}
         />
         {!unit.data ? (

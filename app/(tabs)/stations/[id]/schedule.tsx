@@ -2,12 +2,7 @@ import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { useSessionQuery } from '@/components/auth/queries';
-import {
-  useDeleteScheduleMutation,
-  usePatchScheduleMutation,
-  usePlanQuery,
-  useScheduleQuery,
-} from '@/components/schedules/queries';
+import { useDeleteScheduleMutation, usePatchScheduleMutation, usePlanQuery, useScheduleQuery } from '@/components/schedules/queries';
 import { previewFromPlan, previewRange } from '@/components/schedules/preview-model';
 import {
   LazyScheduleEmpty as ScheduleEmpty,
@@ -34,8 +29,7 @@ export default function StationScheduleRoute() {
   const patch = usePatchScheduleMutation(stationId);
   const remove = useDeleteScheduleMutation(stationId);
   const [confirming, setConfirming] = useState(false);
-  const toEditor = (preset?: string) =>
-    router.push({ pathname: '/stations/[id]/schedule/edit', params: preset ? { id, preset } : { id } });
+  const toEditor = (preset?: string) => router.push({ pathname: '/stations/[id]/schedule/edit', params: preset ? { id, preset } : { id } });
 
   let body;
   if (station.isPending || schedule.isPending) body = <LoadingState label="Loading the schedule…" />;
@@ -70,7 +64,11 @@ export default function StationScheduleRoute() {
             <ErrorState title="The plan could not be loaded" error={plan.error} onRetry={() => plan.refetch()} />
           ) : (
             <SchedulePreviewPanel
-              preview={previewFromPlan(plan.data, saved.steps.map((s) => s.bandId), nowMs)}
+              preview={previewFromPlan(
+                plan.data,
+                saved.steps.map((s) => s.bandId),
+                nowMs,
+              )}
               upcoming={plan.data.transmissions}
               quietMessage={plan.data.quiet.map((q) => q.message).join(' ') || undefined}
             />

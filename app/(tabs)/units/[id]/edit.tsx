@@ -14,8 +14,7 @@ export default function EditUnitRoute() {
   const me = useSessionQuery().data;
   const unit = useUnitQuery(unitId);
   const update = useUpdateUnitMutation(unitId);
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace({ pathname: '/units/[id]', params: { id: String(unitId) } });
+  const back = () => (router.canGoBack() ? router.back() : router.replace({ pathname: '/units/[id]', params: { id: String(unitId) } }));
 
   let body;
   if (!Number.isInteger(unitId) || unitId <= 0)

@@ -34,9 +34,20 @@ export default function EditScheduleRoute() {
   else if (unit.isError)
     body = <ErrorState title="The station's unit could not be loaded" error={unit.error} onRetry={() => unit.refetch()} />;
   else if (station.data.ownerId !== me?.id)
-    body = <ErrorState title="Read-only" error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can change its schedule.`)} />;
+    body = (
+      <ErrorState
+        title="Read-only"
+        error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can change its schedule.`)}
+      />
+    );
   else {
-    const { values, presets } = draftDefaults({ station: station.data, schedule: schedule.data, unit: unit.data ?? null, presetId: preset, nowMs });
+    const { values, presets } = draftDefaults({
+      station: station.data,
+      schedule: schedule.data,
+      unit: unit.data ?? null,
+      presetId: preset,
+      nowMs,
+    });
     body = (
       <>
         <Text variant="title" accessibilityRole="header">
