@@ -1,4 +1,5 @@
 import { Sequelize } from 'sequelize';
+import { ListeningPostModel } from './models/listening-post.model';
 import { AuditEntryModel, InvitationModel, NotificationModel, OffsetProposalModel } from './models/club-extras.model';
 import { ClubModel } from './models/club.model';
 import { AlertModel, AlertSettingsModel, DeviceTokenModel, DeviceTransmissionModel, HeartbeatModel } from './models/device.model';
@@ -34,6 +35,7 @@ export function createSequelize(databaseUrl: string): Sequelize {
   OffsetProposalModel.initModel(sequelize);
   NotificationModel.initModel(sequelize);
   AuditEntryModel.initModel(sequelize);
+  ListeningPostModel.initModel(sequelize);
   for (const model of [DeviceTokenModel, HeartbeatModel, DeviceTransmissionModel, AlertSettingsModel, AlertModel])
     model.initModel(sequelize);
 

@@ -1,0 +1,144 @@
+/**
+ * The reception report store: multi-row INSERT IGNORE (the decode key makes a repeat a no-op), then the
+ * aggregates the screens read are brought up to date from exactly the rows this batch added, all in one
+ * transaction. Concurrent batches carrying the same decode wait on its key, so nothing is counted twice.
+ */
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+
+/** One report ready to store: validated, matched to a station (or not), with its path worked out. */
+export type StorableReport = {
+  slotStartMs: number;
+  bandId: string;
+  txCallsign: string;
+  txLocator: string | null;
+  txPowerDbm: number | null;
+  rxCallsign: string;
+  rxLocator: string;
+  snrDb: number;
+  frequencyHz: number;
+  driftHz: number;
+  distanceKm: number | null;
+  bearingDeg: number | null;
+  frequencyErrorHz: number | null;
+  stationId: number | null;
+  ambiguous: boolean;
+};
+
+export type BatchOrigin = { importerId: number; listeningPostId?: number | null; importId?: number | null };
+export type StoreResult = { accepted: number; duplicates: number };
+
+const COLUMNS = [
+  'slotStart',
+  'bandId',
+  'txCallsign',
+  'txLocator',
+  'txPowerDbm',
+  'rxCallsign',
+  'rxLocator',
+  'snrDb',
+  'frequencyHz',
+  'driftHz',
+  'distanceKm',
+  'bearingDeg',
+  'frequencyErrorHz',
+  'stationId',
+  'ambiguous',
+  'importerId',
+  'batchId',
+] as const;
+/** Rows per INSERT statement (MariaDB's packet limit and placeholder count stay far away). */
+const ROWS_PER_STATEMENT = 1000;
+
+const toSqlTime = (ms: number) => new Date(ms).toISOString().slice(0, 19).replace('T', ' ');
+
+function rowValues(r: StorableReport, importerId: number, batchId: number): unknown[] {
+  return [
+    toSqlTime(r.slotStartMs),
+    r.bandId,
+    r.txCallsign,
+    r.txLocator,
+    r.txPowerDbm,
+    r.rxCallsign,
+    r.rxLocator,
+    Math.round(r.snrDb),
+    r.frequencyHz,
+    Math.round(r.driftHz),
+    r.distanceKm,
+    r.bearingDeg,
+    r.frequencyErrorHz,
+    r.stationId,
+    r.ambiguous ? 1 : 0,
+    importerId,
+    batchId,
+  ];
+}
+
+async function insertRows(sequelize: Sequelize, rows: StorableReport[], importerId: number, batchId: number, transaction: Transaction) {
+  let inserted = 0;
+  const rowPlaceholder = `(${COLUMNS.map(() => '?').join(',')})`;
+  for (let start = 0; start < rows.length; start += ROWS_PER_STATEMENT) {
+    const chunk = rows.slice(start, start + ROWS_PER_STATEMENT);
+    const sql = `INSERT IGNORE INTO reception_reports (${COLUMNS.join(',')}) VALUES ${chunk.map(() => rowPlaceholder).join(',')}`;
+    const [, affected] = await sequelize.query(sql, {
+      replacements: chunk.flatMap((r) => rowValues(r, importerId, batchId)),
+      type: QueryTypes.INSERT,
+      transaction,
+    });
+    inserted += Number(affected ?? 0);
+  }
+  return inserted;
+}
+
+/** Adds what this batch stored (and nothing a repeat brought) to the per-slot and per-receiver-day aggregates. */
+async function updateAggregates(sequelize: Sequelize, batchId: number, transaction: Transaction) {
+  await sequelize.query(
+    `INSERT INTO reception_slot_counts (stationId, slotStart, bandId, reports, bestSnrDb)
+       SELECT stationId, slotStart, bandId, COUNT(*), MAX(snrDb) FROM reception_reports
+       WHERE batchId = ? AND stationId IS NOT NULL GROUP BY stationId, slotStart, bandId
+     ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb))`,
+    { replacements: [batchId], transaction },
+  );
+  await sequelize.query(
+    `INSERT INTO reception_receiver_days
+       (stationId, day, bandId, rxCallsign, rxLocator, distanceKm, bearingDeg, reports, bestSnrDb, bestSnrPerWattDb, lastSlotStart)
+       SELECT stationId, DATE(slotStart), bandId, rxCallsign, MAX(rxLocator), MAX(distanceKm), MAX(bearingDeg), COUNT(*), MAX(snrDb),
+              MAX(snrDb - (txPowerDbm - 30)), MAX(slotStart)
+       FROM reception_reports WHERE batchId = ? AND stationId IS NOT NULL GROUP BY stationId, DATE(slotStart), bandId, rxCallsign
+     ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb)),
+       bestSnrPerWattDb = GREATEST(COALESCE(bestSnrPerWattDb, VALUES(bestSnrPerWattDb)), COALESCE(VALUES(bestSnrPerWattDb), bestSnrPerWattDb)),
+       lastSlotStart = GREATEST(lastSlotStart, VALUES(lastSlotStart)), rxLocator = VALUES(rxLocator),
+       distanceKm = VALUES(distanceKm), bearingDeg = VALUES(bearingDeg)`,
+    { replacements: [batchId], transaction },
+  );
+}
+
+/**
+ * Stores a batch of reports with its origin. Returns how many were new and how many were repeats of decodes
+ * already stored. Everything commits together or not at all, so an acknowledged batch is stored whole.
+ */
+export async function storeReports(
+  sequelize: Sequelize,
+  rows: StorableReport[],
+  origin: BatchOrigin,
+  receivedAt: Date,
+): Promise<StoreResult> {
+  if (rows.length === 0) return { accepted: 0, duplicates: 0 };
+  return sequelize.transaction(async (transaction) => {
+    const [batchId] = await sequelize.query(
+      'INSERT INTO reception_batches (importerId, listeningPostId, importId, receivedAt) VALUES (?, ?, ?, ?)',
+      {
+        replacements: [origin.importerId, origin.listeningPostId ?? null, origin.importId ?? null, receivedAt],
+        type: QueryTypes.INSERT,
+        transaction,
+      },
+    );
+    const accepted = await insertRows(sequelize, rows, origin.importerId, Number(batchId), transaction);
+    if (accepted > 0) await updateAggregates(sequelize, Number(batchId), transaction);
+    const duplicates = rows.length - accepted;
+    await sequelize.query('UPDATE reception_batches SET accepted = ?, duplicates = ? WHERE id = ?', {
+      replacements: [accepted, duplicates, batchId],
+      transaction,
+    });
+    return { accepted, duplicates };
+  });
+}
