@@ -1,1 +1,2 @@
 export * from './reception';
+export * from './csv';
