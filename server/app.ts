@@ -11,7 +11,6 @@ import { clubsRouter } from './features/clubs/clubs.router';
 import { myClubThingsRouter } from './features/clubs/my-club-things.router';
 import { createDeviceGateway, withDeviceFastPath, type DeviceGateway } from './features/devices/device-gateway';
 import { deviceRouter } from './features/devices/device.router';
-import { setOfflineAfter } from './features/devices/health.service';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
@@ -58,7 +57,6 @@ const CSP = {
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
 export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
   const app = express();
-  setOfflineAfter(config.DEVICE_OFFLINE_AFTER_S);
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -90,10 +88,10 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
-  api.use('/stations/:id', stationDevicesRouter({ sequelize }));
-  api.use(fleetHealthRouter());
+  api.use('/stations/:id', stationDevicesRouter({ sequelize, offlineAfterS: config.DEVICE_OFFLINE_AFTER_S }));
+  api.use(fleetHealthRouter({ offlineAfterS: config.DEVICE_OFFLINE_AFTER_S }));
   api.use('/stations', stationsRouter({ sequelize }));
-  api.use('/units', unitsRouter({ storage, logger }));
+  api.use('/units', unitsRouter({ sequelize, storage, logger }));
   api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));
   api.use(myClubThingsRouter({ sequelize }));
   api.use(apiNotFound);

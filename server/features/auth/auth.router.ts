@@ -10,7 +10,6 @@ import type { Logger } from '../../lib/logger';
 import type { Mailer } from '../../mail/mailer';
 import { currentUser } from '../../middleware/auth';
 import * as auth from './auth.service';
-import { findSessionUser } from './users.repo';
 
 type Deps = { config: Config; sequelize: Sequelize; mailer: Mailer; logger: Logger };
 
@@ -45,7 +44,7 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
   router.post('/register', async (req, res) => {
     const input = registerInput.parse(req.body);
     const userId = await auth.register(input, config.BCRYPT_COST);
-    const user = await findSessionUser(userId);
+    const user = await auth.sessionUserOf(userId);
     if (!user) throw new AppError('internal', 'The new account could not be read back');
     await logIn(req, user);
     res.status(201).json(user);
@@ -81,8 +80,8 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
 
   router.patch('/me', async (req, res) => {
     const user = currentUser(req);
-    await auth.updateProfile(user, profileInput.parse(req.body));
-    res.json(await findSessionUser(user.id));
+    await auth.updateProfile(sequelize, user, profileInput.parse(req.body));
+    res.json(await auth.sessionUserOf(user.id));
   });
 
   router.post('/password-reset', resetLimiter, async (req, res) => {

@@ -8,10 +8,9 @@ import { sendLater } from '../../mail/send-later';
 import type { Mailer } from '../../mail/mailer';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import * as audit from '../audit/audit.service';
-import { findByOwners } from '../stations/stations.repo';
-import { findSessionUser } from '../auth/users.repo';
-import { requireAdmin } from './access';
-import { memberIdsOf } from './clubs.repo';
+import { sessionUserOf } from '../auth/auth.service';
+import { stationsOfOwners } from '../stations/stations.service';
+import { memberIdsOf, requireAdmin } from './access';
 import * as clubs from './clubs.service';
 import * as invitations from './invitations.service';
 import * as moderation from './moderation.service';
@@ -30,7 +29,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
   router.post('/', async (req, res) => {
     const user = currentUser(req);
     const id = await clubs.createClub(sequelize, user, clubInput.parse(req.body) as { name: string; maxPowerDbm: number });
-    res.status(201).json(await clubs.detail((await findSessionUser(user.id))!, id));
+    res.status(201).json(await clubs.detail((await sessionUserOf(user.id))!, id));
   });
   router.get('/:clubId', async (req, res) => {
     res.json(await clubs.detail(currentUser(req), club(req.params)));
@@ -45,7 +44,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
   router.get('/:clubId/stations', async (req, res) => {
     const clubId = club(req.params);
     await requireAdmin(currentUser(req), clubId);
-    res.json(await findByOwners(await memberIdsOf(clubId)));
+    res.json(await stationsOfOwners(await memberIdsOf(clubId)));
   });
 
   router.delete('/:clubId/members/:userId', async (req, res) => {

@@ -3,21 +3,19 @@ import { DAY_MS, fleetStationFromPlan, findFleetConflicts, proposeFleetOffsets }
 import { complianceFindings } from '@/shared/domain/workshop';
 import type { ReviewRow, Schedule, Station, Unit } from '@/shared/schemas';
 import { planFor } from '../schedules/plan';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import { findByOwners } from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
-import { requireAdmin } from './access';
-import { memberIdsOf } from './clubs.repo';
+import { schedulesOf } from '../schedules/schedules.service';
+import { stationsOfOwners } from '../stations/stations.service';
+import { unitById } from '../units/units.service';
+import { memberIdsOf, requireAdmin } from './access';
 
 type Loaded = { station: Station; unit: Unit | null; schedule: Schedule | null };
 
 /** Every member's station with its unit and schedule, read once. */
 async function loadClubStations(clubId: number): Promise<Loaded[]> {
-  const stations = await findByOwners(await memberIdsOf(clubId));
-  const schedules = await schedulesRepo.findByStations(stations.map((s) => s.id));
+  const stations = await stationsOfOwners(await memberIdsOf(clubId));
+  const schedules = await schedulesOf(stations.map((s) => s.id));
   const units = new Map<number, Unit | null>();
-  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null)))
-    units.set(id, await unitsRepo.findById(id));
+  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null))) units.set(id, await unitById(id));
   return stations.map((station) => ({
     station,
     unit: station.unitId === null ? null : (units.get(station.unitId) ?? null),

@@ -6,9 +6,8 @@ import type { ApiErrorBody } from '@/shared/api/contracts';
 import type { Config } from '../../config';
 import { AppError, statusOf } from '../../lib/app-error';
 import { onStationChanged } from '../../lib/change-feed';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import * as stationsRepo from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
+import { planInputsOf } from '../schedules/schedules.service';
+import { stationById } from '../stations/stations.service';
 import {
   acceptsGzip,
   etagsFor,
@@ -74,12 +73,9 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
     if (ifNoneMatchHits(request.ifNoneMatch, etags.all)) return { status: 304 as const, encoding, etag: etags[encoding], body: EMPTY };
     let cached = configs.get(device.stationId);
     if (cached?.identity.etag !== etags.identity) {
-      const station = await stationsRepo.findById(device.stationId);
+      const station = await stationById(device.stationId);
       if (!station) throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
-      const [unit, schedule] = await Promise.all([
-        station.unitId === null ? null : unitsRepo.findById(station.unitId),
-        schedulesRepo.findByStation(station.id),
-      ]);
+      const { unit, schedule } = await planInputsOf(station);
       // Kept as bytes in both encodings, so a poll sends them without encoding anything again.
       cached = representationsOf(etags, deviceConfig(station, unit, schedule, nowMs));
       configs.set(device.stationId, cached);
