@@ -7,7 +7,7 @@ import { planFor } from '../schedules/plan';
 import { planInputsOf } from '../schedules/schedules.service';
 import { stationById } from '../stations/stations.service';
 import * as repo from './alerts.repo';
-import { driftFor, settingsOf } from './health.service';
+import { driftFor, settingsOf } from './beacon-status.service';
 import * as heartbeats from './heartbeats.repo';
 import * as tokens from './tokens.repo';
 import * as transmissions from './transmissions.repo';

@@ -45,7 +45,7 @@ export function driftFor(station: Station, unit: Unit | null, temperatureC: numb
   return Math.max(...carriers.map((f) => Math.abs(thermalDriftHz(f, unit.tempCoPpmPerC!, temperatureC - REFERENCE_TEMP_C))));
 }
 
-async function healthOf(station: Station, { offlineAfterS, nowMs = Date.now() }: StatusOptions): Promise<StationHealth> {
+async function statusOf(station: Station, { offlineAfterS, nowMs = Date.now() }: StatusOptions): Promise<StationHealth> {
   const since = new Date(nowMs - 86_400_000);
   const [beats, sent, recentAlerts, settings, device, { unit, schedule }] = await Promise.all([
     heartbeats.findSince(station.id, since),
@@ -95,13 +95,13 @@ async function healthOf(station: Station, { offlineAfterS, nowMs = Date.now() }:
 }
 
 export async function forStation(user: SessionUser, stationId: number, options: StatusOptions) {
-  return healthOf(await getStation(user, stationId), options);
+  return statusOf(await getStation(user, stationId), options);
 }
 
 async function forOwners(ownerIds: number[], options: StatusOptions) {
   const stations = await stationsOfOwners(ownerIds);
   const sameMoment = { ...options, nowMs: options.nowMs ?? Date.now() };
-  return Promise.all(stations.map((s) => healthOf(s, sameMoment)));
+  return Promise.all(stations.map((s) => statusOf(s, sameMoment)));
 }
 
 export async function forClub(user: SessionUser, clubId: number, options: StatusOptions) {

@@ -4,10 +4,10 @@ import { alertSettingsInput } from '@/shared/schemas';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import { getOwnedBy } from '../stations/stations.service';
-import * as health from './health.service';
+import * as beacons from './beacon-status.service';
 import * as tokens from './tokens.service';
 
-/** Mounted at /api/stations/:id — device credentials, health and alert thresholds (cookie session). */
+/** Mounted at /api/stations/:id — device credentials, beacon status and alert thresholds (cookie session). */
 export function stationDevicesRouter({ sequelize, offlineAfterS }: { sequelize: Sequelize; offlineAfterS: number }) {
   const router = Router({ mergeParams: true });
   router.use(requireSignedIn);
@@ -21,24 +21,33 @@ export function stationDevicesRouter({ sequelize, offlineAfterS }: { sequelize: 
     res.status(204).end();
   });
   router.get('/health', async (req, res) => {
-    res.json(await health.forStation(currentUser(req), stationId(req.params), { offlineAfterS }));
+    res.json(await beacons.forStation(currentUser(req), stationId(req.params), { offlineAfterS }));
   });
   router.put('/alert-settings', async (req, res) => {
     const settings = alertSettingsInput.parse(req.body);
     await getOwnedBy(currentUser(req), stationId(req.params));
-    await health.saveSettings(stationId(req.params), settings);
+    await beacons.saveSettings(stationId(req.params), settings);
     res.json(settings);
   });
   return router;
 }
 
-export function fleetHealthRouter({ offlineAfterS }: { offlineAfterS: number }) {
+/** Mounted at /api/fleet — the signed-in operator's own beacons. */
+export function fleetRouter({ offlineAfterS }: { offlineAfterS: number }) {
   const router = Router();
-  router.get('/fleet/health', requireSignedIn, async (req, res) => {
-    res.json(await health.forOwner(currentUser(req), { offlineAfterS }));
+  router.use(requireSignedIn);
+  router.get('/health', async (req, res) => {
+    res.json(await beacons.forOwner(currentUser(req), { offlineAfterS }));
   });
-  router.get('/clubs/:clubId/health', requireSignedIn, async (req, res) => {
-    res.json(await health.forClub(currentUser(req), parseId(req.params.clubId, 'Club'), { offlineAfterS }));
+  return router;
+}
+
+/** Mounted at /api/clubs/:clubId/health — every member's beacons, for the club's admins. */
+export function clubBeaconsRouter({ offlineAfterS }: { offlineAfterS: number }) {
+  const router = Router({ mergeParams: true });
+  router.use(requireSignedIn);
+  router.get('/', async (req, res) => {
+    res.json(await beacons.forClub(currentUser(req), parseId((req.params as { clubId?: string }).clubId, 'Club'), { offlineAfterS }));
   });
   return router;
 }
