@@ -1,3 +1,4 @@
+import type { DeviceConfig } from '@/shared/domain/workshop';
 import { deviceTransport, type DeviceTransport } from './transport';
 
 /**
@@ -16,12 +17,9 @@ export type SimOptions = {
   log?: (line: string) => void;
 };
 
-type PlannedTx = { startUtc: string; bandId: string; carrierHz: number; messageText: string };
-type Config = { status: string; plan: { transmissions: PlannedTx[] } };
-
 export class SimulatedDevice {
   private etag: string | null = null;
-  private config: Config | null = null;
+  private config: DeviceConfig | null = null;
   private sent = new Set<string>();
   private clockOffsetMs: number;
   private temperatureC: number;
@@ -76,7 +74,7 @@ export class SimulatedDevice {
     }
     if (answer.document === null) throw new Error(`config answered ${answer.status}`);
     this.etag = answer.etag;
-    this.config = answer.document as Config;
+    this.config = answer.document as DeviceConfig;
   }
 
   private async transmitDue() {

@@ -1,20 +1,7 @@
 import type { Transaction } from 'sequelize';
+import type { AuditEntry } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import * as repo from './audit.repo';
-
-export type AuditEntry = {
-  id: number;
-  atUtc: string;
-  actorName: string;
-  ownerId: number | null;
-  clubId: number | null;
-  action: string;
-  entityType: string;
-  entityId: number | null;
-  summary: string;
-  before: unknown;
-  after: unknown;
-};
 
 export type AuditRecord = {
   actor: Pick<SessionUser, 'id' | 'displayName'>;

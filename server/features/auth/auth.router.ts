@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import passport from 'passport';
 import type { Sequelize } from 'sequelize';
+import type { MessageAnswer } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { profileInput, registerInput, resetConfirmInput, resetRequestInput, signInInput } from '@/shared/schemas';
 import type { Config } from '../../config';
@@ -88,7 +89,11 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
     const { email } = resetRequestInput.parse(req.body);
     const reset = await auth.createPasswordReset(email);
     // The same answer whether or not the account exists; the mail goes out after the write.
-    res.status(202).json({ message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.' });
+    res
+      .status(202)
+      .json({
+        message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.',
+      } satisfies MessageAnswer);
     if (reset) {
       const link = `${config.WEB_ORIGIN}/reset-password?token=${encodeURIComponent(reset.token)}`;
       mailer
@@ -104,7 +109,7 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
   router.post('/password-reset/confirm', async (req, res) => {
     const input = resetConfirmInput.parse(req.body);
     await auth.confirmPasswordReset(sequelize, input, config.BCRYPT_COST);
-    res.json({ message: 'Your password is changed. Sign in with the new one.' });
+    res.json({ message: 'Your password is changed. Sign in with the new one.' } satisfies MessageAnswer);
   });
 
   return router;

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { SuspensionAnswer } from '@/shared/api/answers';
 import type { Sequelize } from 'sequelize';
 import { clubInput, clubPatch, invitationInput, memberRoleInput, offsetProposalInput, suspensionInput } from '@/shared/schemas';
 import type { Config } from '../../config';
@@ -92,7 +93,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
       parseId(req.params.stationId, 'Station'),
       reason,
     );
-    res.status(201).json({ suspended: true, reason });
+    res.status(201).json({ suspended: true, reason } satisfies SuspensionAnswer);
     sendLater(mailer, logger, mail);
   });
   router.delete('/:clubId/stations/:stationId/suspension', async (req, res) => {

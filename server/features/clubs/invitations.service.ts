@@ -1,4 +1,5 @@
 import { createHash, randomBytes } from 'node:crypto';
+import type { AcceptedInvitation } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { Invitation } from '@/shared/schemas';
 import type { TransactionRunner } from '../../db/transaction';
@@ -89,6 +90,6 @@ export async function accept(db: TransactionRunner, user: SessionUser, token: st
       },
       transaction,
     );
-    return { clubId: row.clubId };
+    return { clubId: row.clubId } satisfies AcceptedInvitation;
   });
 }

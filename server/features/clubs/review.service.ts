@@ -1,3 +1,4 @@
+import type { ClubConflicts, ClubOccupancy } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { DAY_MS, fleetStationFromPlan, findFleetConflicts, proposeFleetOffsets } from '@/shared/domain/schedule';
 import { complianceFindings } from '@/shared/domain/workshop';
@@ -54,7 +55,7 @@ async function clubPlans(clubId: number, fromMs: number) {
     .map((l) => ({ ...l, plan: planFor(l.station, l.unit, l.schedule, fromMs, fromMs + DAY_MS) }));
 }
 
-export async function conflicts(user: SessionUser, clubId: number, now = Date.now()) {
+export async function conflicts(user: SessionUser, clubId: number, now = Date.now()): Promise<ClubConflicts> {
   await requireAdmin(user, clubId);
   const plans = await clubPlans(clubId, now);
   const fleet = plans.map((p) => fleetStationFromPlan(p.station.id, p.station.audioOffsetHz, p.plan.transmissions));
@@ -74,7 +75,7 @@ export async function conflicts(user: SessionUser, clubId: number, now = Date.no
 }
 
 /** Transmissions per band per UTC hour over the next 24 hours, and each band's duty. */
-export async function occupancy(user: SessionUser, clubId: number, now = Date.now()) {
+export async function occupancy(user: SessionUser, clubId: number, now = Date.now()): Promise<ClubOccupancy> {
   await requireAdmin(user, clubId);
   const plans = await clubPlans(clubId, now);
   const startHourMs = Math.floor(now / 3_600_000) * 3_600_000;

@@ -3,6 +3,7 @@ import { MemoryStore } from 'express-rate-limit';
 import { LRUCache } from 'lru-cache';
 import type { Sequelize } from 'sequelize';
 import type { ApiErrorBody } from '@/shared/api/contracts';
+import { buildDeviceConfig, planWindowStart } from '@/shared/domain/workshop';
 import type { Config } from '../../config';
 import { AppError, statusOf } from '../../lib/app-error';
 import { onStationChanged } from '../../lib/change-feed';
@@ -16,7 +17,7 @@ import {
   type ConfigEtags,
   type ConfigRepresentations,
 } from './config-representation';
-import { deviceConfig, etagFor, planWindowStart } from './device-config';
+import { etagFor } from './device-config';
 import { identify, type DeviceIdentity } from './tokens.service';
 
 export const RATE_WINDOW_MS = 60_000;
@@ -77,7 +78,7 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
       if (!station) throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
       const { unit, schedule } = await planInputsOf(station);
       // Kept as bytes in both encodings, so a poll sends them without encoding anything again.
-      cached = representationsOf(etags, deviceConfig(station, unit, schedule, nowMs));
+      cached = representationsOf(etags, buildDeviceConfig(station, unit, schedule, nowMs));
       configs.set(device.stationId, cached);
     }
     return { status: 200 as const, encoding, etag: cached[encoding].etag, body: cached[encoding].body };

@@ -1,5 +1,6 @@
 import express, { Router, type NextFunction, type Request, type Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import type { StoredAnswer } from '@/shared/api/answers';
 import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { AppError } from '../../lib/app-error';
@@ -49,13 +50,13 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
   router.post('/heartbeat', async (req: DeviceRequest, res) => {
     const report = heartbeatInput.parse(req.body);
     await reports.heartbeat(req.device!.stationId, report);
-    res.status(202).json({ stored: true });
+    res.status(202).json({ stored: true } satisfies StoredAnswer);
   });
 
   router.post('/transmissions', async (req: DeviceRequest, res) => {
     const { transmissions } = transmissionLogInput.parse(req.body);
     await reports.transmissions(req.device!.stationId, transmissions);
-    res.status(202).json({ stored: transmissions.length });
+    res.status(202).json({ stored: transmissions.length } satisfies StoredAnswer);
   });
 
   router.use((req, res) => {

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { DeviceTokenAnswer } from '@/shared/api/answers';
 import type { Sequelize } from 'sequelize';
 import { alertSettingsInput } from '@/shared/schemas';
 import { parseId } from '../../lib/params';
@@ -14,7 +15,7 @@ export function stationDevicesRouter({ sequelize, offlineAfterS }: { sequelize: 
   const stationId = (params: Record<string, string>) => parseId(params.id, 'Station');
 
   router.post('/device-token', async (req, res) => {
-    res.status(201).json({ token: await tokens.rotate(sequelize, currentUser(req), stationId(req.params)) });
+    res.status(201).json({ token: await tokens.rotate(sequelize, currentUser(req), stationId(req.params)) } satisfies DeviceTokenAnswer);
   });
   router.delete('/device-token', async (req, res) => {
     await tokens.revoke(sequelize, currentUser(req), stationId(req.params));

@@ -1,8 +1,9 @@
 import type { Transaction } from 'sequelize';
+import type { Notice } from '@/shared/api/answers';
 import { AppError } from '../../lib/app-error';
 import * as repo from './notifications.repo';
 
-export type Notice = { id: number; kind: string; message: string; link: string | null; readAt: string | null; createdAt: string };
+export type { Notice };
 
 export async function notify(userId: number, kind: string, message: string, link: string | null, transaction?: Transaction) {
   await repo.insert({ userId, kind, message: message.slice(0, 500), link }, transaction);

@@ -1,3 +1,4 @@
+import type { StationPlan } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { validateSchedule } from '@/shared/domain/schedule';
 import { applySchedulePatch, type ScheduleValues } from '@/shared/schemas/schedule';
@@ -117,7 +118,7 @@ export async function remove(db: TransactionRunner, user: SessionUser, stationId
   });
 }
 
-export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number) {
+export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number): Promise<StationPlan> {
   const station = await getStation(user, stationId);
   const schedule = await repo.findByStation(stationId);
   if (!schedule) throw new AppError('not-found', `Station ${stationId} has no schedule yet`);

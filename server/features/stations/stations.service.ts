@@ -1,3 +1,4 @@
+import type { CalibrationProposal, StationConfig } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { bandFor, type BandId } from '@/shared/domain/bands';
 import { predictOffsets } from '@/shared/domain/calibration';
@@ -202,7 +203,7 @@ export async function saveCalibration(db: TransactionRunner, user: SessionUser, 
 }
 
 /** From one measurement, the reference error and a proposed offset for every enabled band (nothing is saved). */
-export async function proposeCalibration(user: SessionUser, id: number, input: MeasurementInput) {
+export async function proposeCalibration(user: SessionUser, id: number, input: MeasurementInput): Promise<CalibrationProposal> {
   const station = await getOwnedBy(user, id);
   bandOrRefuse(input.bandId, station);
   const targets = station.bands
@@ -230,7 +231,7 @@ export async function proposeCalibration(user: SessionUser, id: number, input: M
   };
 }
 
-export async function configFor(user: SessionUser, id: number, now = new Date()) {
+export async function configFor(user: SessionUser, id: number, now = new Date()): Promise<StationConfig> {
   const station = await getFor(user, id);
   return buildStationConfig({ ...station, suspended: station.suspension !== null }, await unitById(station.unitId), now);
 }
