@@ -5,15 +5,17 @@ import session from 'express-session';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import { auditRouter } from './features/audit/audit.router';
 import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
-import { myClubThingsRouter } from './features/clubs/my-club-things.router';
+import { invitationsRouter } from './features/clubs/invitations.router';
+import { proposalsRouter } from './features/clubs/proposals.router';
 import { createDeviceGateway, withDeviceFastPath, type DeviceGateway } from './features/devices/device-gateway';
 import { deviceRouter } from './features/devices/device.router';
-import { setOfflineAfter } from './features/devices/health.service';
-import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
-import { healthRouter } from './features/health/health.router';
+import { clubBeaconsRouter, fleetRouter, stationDevicesRouter } from './features/devices/station-devices.router';
+import { livenessRouter } from './features/liveness/liveness.router';
+import { notificationsRouter } from './features/notifications/notifications.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -58,7 +60,6 @@ const CSP = {
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
 export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
   const app = express();
-  setOfflineAfter(config.DEVICE_OFFLINE_AFTER_S);
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -68,7 +69,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
-  app.use('/api/health', healthRouter(sequelize));
+  app.use('/api/health', livenessRouter(sequelize));
 
   const SessionStore = connectSessionSequelize(session.Store);
   const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });
@@ -89,13 +90,18 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   );
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
+  const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
   api.use('/stations/:id', schedulesRouter({ sequelize }));
-  api.use('/stations/:id', stationDevicesRouter({ sequelize }));
-  api.use(fleetHealthRouter());
+  api.use('/stations/:id', stationDevicesRouter({ sequelize, offlineAfterS }));
   api.use('/stations', stationsRouter({ sequelize }));
-  api.use('/units', unitsRouter({ storage, logger }));
+  api.use('/units', unitsRouter({ sequelize, storage, logger }));
+  api.use('/fleet', fleetRouter({ offlineAfterS }));
+  api.use('/clubs/:clubId/health', clubBeaconsRouter({ offlineAfterS }));
   api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));
-  api.use(myClubThingsRouter({ sequelize }));
+  api.use('/invitations', invitationsRouter({ sequelize }));
+  api.use('/offset-proposals', proposalsRouter({ sequelize }));
+  api.use('/notifications', notificationsRouter());
+  api.use('/audit', auditRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,20 +1,11 @@
 import { useQuery } from '@tanstack/react-query';
 
+import type { AuditEntry } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 
 import { staleTime } from '../query/query-client';
 
-export type AuditEntry = {
-  id: number;
-  atUtc: string;
-  actorName: string;
-  action: string;
-  entityType: string;
-  entityId: number | null;
-  summary: string;
-  before: unknown;
-  after: unknown;
-};
+export type { AuditEntry };
 
 export const auditKeys = {
   all: ['audit'] as const,

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import type { MessageAnswer } from '@/shared/api/answers';
 import { api, ApiError } from '@/shared/api/client';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { ProfileInput, RegisterInput, ResetConfirmInput, ResetRequestInput, SignInInput } from '@/shared/schemas';
@@ -61,16 +62,14 @@ export function useSignOutMutation() {
   });
 }
 
-type MessageBody = { message: string };
-
 export function useResetRequestMutation() {
   return useMutation({
-    mutationFn: (input: ResetRequestInput) => api<MessageBody>('/auth/password-reset', { method: 'POST', body: input }),
+    mutationFn: (input: ResetRequestInput) => api<MessageAnswer>('/auth/password-reset', { method: 'POST', body: input }),
   });
 }
 
 export function useResetConfirmMutation() {
   return useMutation({
-    mutationFn: (input: ResetConfirmInput) => api<MessageBody>('/auth/password-reset/confirm', { method: 'POST', body: input }),
+    mutationFn: (input: ResetConfirmInput) => api<MessageAnswer>('/auth/password-reset/confirm', { method: 'POST', body: input }),
   });
 }

@@ -1,5 +1,16 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 
+import type {
+  AcceptedInvitation,
+  BandDuty,
+  ClubConflict,
+  ClubConflicts,
+  ClubOccupancy,
+  ConflictProposal,
+  ConflictStation,
+  OccupancyCell,
+  SuspensionAnswer,
+} from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 import type { ClubDetail, ClubInput, Invitation, OffsetProposal, ReviewRow } from '@/shared/schemas';
 
@@ -7,21 +18,7 @@ import { sessionKeys } from '../auth/queries';
 import { staleTime } from '../query/query-client';
 import { stationKeys } from '../stations/queries';
 
-export type ConflictStation = { name: string; owner: string; callsign: string };
-export type ClubConflict = {
-  a: number | string;
-  b: number | string;
-  bandId: string;
-  slotCount: number;
-  firstSlotUtc: string;
-  aStation?: ConflictStation;
-  bStation?: ConflictStation;
-};
-export type ConflictProposal = { stationId: number | string; stationName: string; currentOffsetHz: number; proposedOffsetHz: number };
-export type ClubConflicts = { fromUtc: string; conflicts: ClubConflict[]; proposals: ConflictProposal[]; unresolved: (number | string)[] };
-export type OccupancyCell = { bandId: string; hourIndex: number; hourUtc: string; transmissions: number };
-export type BandDuty = { bandId: string; transmissions: number; minutesOnAir: number; dutyPercent: number };
-export type ClubOccupancy = { fromUtc: string; hoursUtc: string[]; cells: OccupancyCell[]; bands: BandDuty[] };
+export type { BandDuty, ClubConflict, ClubConflicts, ClubOccupancy, ConflictProposal, ConflictStation, OccupancyCell };
 
 export const clubKeys = {
   all: ['clubs'] as const,
@@ -120,7 +117,7 @@ export function useInviteMutation(clubId: number) {
 export function useAcceptInvitationMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (token: string) => api<{ clubId: number }>('/invitations/accept', { method: 'POST', body: { token } }),
+    mutationFn: (token: string) => api<AcceptedInvitation>('/invitations/accept', { method: 'POST', body: { token } }),
     onSuccess: () => refreshSession(queryClient),
   });
 }
@@ -138,7 +135,7 @@ export function useSuspendMutation(clubId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ stationId, reason }: { stationId: number; reason: string }) =>
-      api<{ suspended: true }>(`/clubs/${clubId}/stations/${stationId}/suspension`, { method: 'POST', body: { reason } }),
+      api<SuspensionAnswer>(`/clubs/${clubId}/stations/${stationId}/suspension`, { method: 'POST', body: { reason } }),
     onSuccess: (_data, { stationId }) => afterSuspensionChange(queryClient, clubId, stationId),
   });
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
+import type { DeviceTokenAnswer } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 
 import { healthKeys } from '../health/queries';
@@ -11,7 +12,7 @@ import { healthKeys } from '../health/queries';
 export function useIssueDeviceTokenMutation(stationId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api<{ token: string }>(`/stations/${stationId}/device-token`, { method: 'POST' }),
+    mutationFn: () => api<DeviceTokenAnswer>(`/stations/${stationId}/device-token`, { method: 'POST' }),
     // drop the answer from the mutation cache as soon as nothing watches it
     gcTime: 0,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: healthKeys.all }),

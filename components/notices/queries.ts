@@ -1,10 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import type { Notice } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 
 import { staleTime } from '../query/query-client';
 
-export type AppNotice = { id: number; kind: string; message: string; link: string | null; readAt: string | null; createdAt: string };
+/** A notice as GET /api/notifications answers it. */
+export type AppNotice = Notice;
 
 export const noticeKeys = {
   all: ['notices'] as const,

@@ -1,9 +1,8 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import type { StationPlan } from '@/shared/api/answers';
 import { api, ApiError } from '@/shared/api/client';
-import type { PlanResult } from '@/shared/domain/schedule';
 import type { Schedule, ScheduleInput, SchedulePatch, Unit } from '@/shared/schemas';
-import type { ScheduleIssue } from '@/shared/domain/schedule';
 
 import { staleTime } from '../query/query-client';
 
@@ -15,14 +14,8 @@ export const scheduleKeys = {
   unit: (unitId: number) => [...scheduleKeys.all, 'unit', unitId] as const,
 };
 
-/** What GET /api/stations/:id/plan answers: the shared expansion plus the editor checks. */
-export type ServerPlan = Omit<PlanResult, 'messages'> & {
-  stationId: number;
-  fromUtc: string;
-  toUtc: string;
-  suspended: boolean;
-  issues: ScheduleIssue[];
-};
+/** What GET /api/stations/:id/plan answers. */
+export type ServerPlan = StationPlan;
 
 const validId = (id: number | null | undefined): id is number => typeof id === 'number' && Number.isInteger(id) && id > 0;
 

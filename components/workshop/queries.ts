@@ -1,17 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
+import type { CalibrationProposal } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 import type { BandId } from '@/shared/domain/bands';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput } from '@/shared/schemas';
 
 import { stationKeys } from '../stations/queries';
 
-/** What the server proposes from one guided measurement (nothing is saved yet). */
-export type CalibrationProposal = {
-  referenceErrorPpm: number;
-  errorHz: number;
-  offsets: { bandId: BandId; frequencyHz: number; calibrationOffsetHz: number }[];
-};
+export type { CalibrationProposal };
 
 function useStationWrite<TInput>(stationId: number, request: (input: TInput) => Promise<Station>) {
   const queryClient = useQueryClient();

@@ -1,7 +1,12 @@
 import type { Transaction } from 'sequelize';
-import { UserModel } from './models/user.model';
 
-/** Runs fn in one transaction on the app's connection (a write and its audit entry commit together). */
-export function inTransaction<T>(fn: (transaction: Transaction) => Promise<T>): Promise<T> {
-  return UserModel.sequelize!.transaction(fn);
-}
+/**
+ * The one way a service opens a transaction: it is handed a runner (the app's Sequelize instance,
+ * passed down from createApp) and calls `db.transaction(async (transaction) => …)`. Repos take the
+ * transaction as their last argument; nothing reaches a model's static `sequelize`.
+ */
+export type TransactionRunner = {
+  transaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T>;
+};
+
+export type { Transaction };

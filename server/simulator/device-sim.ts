@@ -1,3 +1,6 @@
+import type { DeviceConfig } from '@/shared/domain/workshop';
+import { deviceTransport, type DeviceTransport } from './transport';
+
 /**
  * A simulated beacon: polls its configuration with ETags, reports heartbeats, "transmits" what the
  * plan says and logs it, lets its clock and temperature wander, and now and then goes silent.
@@ -14,12 +17,9 @@ export type SimOptions = {
   log?: (line: string) => void;
 };
 
-type PlannedTx = { startUtc: string; bandId: string; carrierHz: number; messageText: string };
-type Config = { status: string; plan: { transmissions: PlannedTx[] } };
-
 export class SimulatedDevice {
   private etag: string | null = null;
-  private config: Config | null = null;
+  private config: DeviceConfig | null = null;
   private sent = new Set<string>();
   private clockOffsetMs: number;
   private temperatureC: number;
@@ -28,19 +28,14 @@ export class SimulatedDevice {
   private timer: NodeJS.Timeout | null = null;
   private readonly startedAt = Date.now();
   private readonly random: () => number;
+  private readonly transport: DeviceTransport;
   stats = { polls: 0, notModified: 0, heartbeats: 0, transmissions: 0, errors: 0 };
 
   constructor(private readonly options: SimOptions) {
     this.random = options.random ?? Math.random;
+    this.transport = deviceTransport({ baseUrl: options.baseUrl, token: options.token });
     this.clockOffsetMs = (this.random() - 0.5) * 200;
     this.temperatureC = 18 + this.random() * 6;
-  }
-
-  private async call(path: string, init: RequestInit = {}) {
-    return fetch(`${this.options.baseUrl}/api/device/v1${path}`, {
-      ...init,
-      headers: { Authorization: `Bearer ${this.options.token}`, 'Content-Type': 'application/json', ...(init.headers ?? {}) },
-    });
   }
 
   /** Switches the device off the air (no polls, no heartbeats) until resumed. */
@@ -70,18 +65,16 @@ export class SimulatedDevice {
   }
 
   private async poll() {
-    // Asks for gzip as firmware with an inflater would (about 2 KB instead of 27); fetch inflates it.
-    const res = await this.call('/config', {
-      headers: { 'Accept-Encoding': 'gzip', ...(this.etag ? { 'If-None-Match': this.etag } : {}) },
-    });
+    // gzip: about 2 KB instead of 27.
+    const answer = await this.transport.config(this.etag);
     this.stats.polls += 1;
-    if (res.status === 304) {
+    if (answer.status === 304) {
       this.stats.notModified += 1;
       return;
     }
-    if (!res.ok) throw new Error(`config answered ${res.status}`);
-    this.etag = res.headers.get('etag');
-    this.config = (await res.json()) as Config;
+    if (answer.document === null) throw new Error(`config answered ${answer.status}`);
+    this.etag = answer.etag;
+    this.config = answer.document as DeviceConfig;
   }
 
   private async transmitDue() {
@@ -90,13 +83,10 @@ export class SimulatedDevice {
     const due = this.config.plan.transmissions.filter((t) => Date.parse(t.startUtc) <= now && !this.sent.has(t.startUtc));
     if (due.length === 0) return;
     for (const t of due) this.sent.add(t.startUtc);
-    const res = await this.call('/transmissions', {
-      method: 'POST',
-      body: JSON.stringify({
-        transmissions: due.map((t) => ({ startUtc: t.startUtc, bandId: t.bandId, frequencyHz: t.carrierHz, messageText: t.messageText })),
-      }),
+    const status = await this.transport.transmissions({
+      transmissions: due.map((t) => ({ startUtc: t.startUtc, bandId: t.bandId, frequencyHz: t.carrierHz, messageText: t.messageText })),
     });
-    if (res.ok) this.stats.transmissions += due.length;
+    if (status >= 200 && status < 300) this.stats.transmissions += due.length;
   }
 
   private async heartbeat() {
@@ -105,21 +95,18 @@ export class SimulatedDevice {
     this.temperatureC += (this.random() - 0.5) * 0.6 + Math.sin((Date.now() - this.startedAt) / 600_000) * 0.1;
     const last = [...this.sent].sort().at(-1);
     const lastTx = last ? this.config?.plan.transmissions.find((t) => t.startUtc === last) : undefined;
-    const res = await this.call('/heartbeat', {
-      method: 'POST',
-      body: JSON.stringify({
-        uptimeS: Math.round((Date.now() - this.startedAt) / 1000),
-        firmwareVersion: 'sim-1.0',
-        timeSource: 'network',
-        clockOffsetMs: Number(this.clockOffsetMs.toFixed(1)),
-        temperatureC: Number(this.temperatureC.toFixed(2)),
-        supplyV: Number((5 + (this.random() - 0.5) * 0.1).toFixed(2)),
-        lastTransmission: lastTx ? { startUtc: lastTx.startUtc, bandId: lastTx.bandId } : null,
-        errorCodes: [],
-      }),
+    const status = await this.transport.heartbeat({
+      uptimeS: Math.round((Date.now() - this.startedAt) / 1000),
+      firmwareVersion: 'sim-1.0',
+      timeSource: 'network',
+      clockOffsetMs: Number(this.clockOffsetMs.toFixed(1)),
+      temperatureC: Number(this.temperatureC.toFixed(2)),
+      supplyV: Number((5 + (this.random() - 0.5) * 0.1).toFixed(2)),
+      lastTransmission: lastTx ? { startUtc: lastTx.startUtc, bandId: lastTx.bandId } : null,
+      errorCodes: [],
     });
-    if (res.status === 202) this.stats.heartbeats += 1;
-    else throw new Error(`heartbeat answered ${res.status}`);
+    if (status === 202) this.stats.heartbeats += 1;
+    else throw new Error(`heartbeat answered ${status}`);
   }
 
   start() {

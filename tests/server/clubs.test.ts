@@ -84,7 +84,7 @@ const routes: {
   },
   {
     method: 'post',
-    path: (c, s) => `/api/clubs/${c}/offset-proposals`,
+    path: (c) => `/api/clubs/${c}/offset-proposals`,
     body: { stationId: 0, proposedOffsetHz: 1480 },
     expect: { anonymous: 401, outsider: 404, member: 403, otherAdmin: 404, admin: 201 },
   },

@@ -1,20 +1,7 @@
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
+import type { AuditEntry } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
-import { AuditEntryModel } from '../../db/models/club-extras.model';
-
-export type AuditEntry = {
-  id: number;
-  atUtc: string;
-  actorName: string;
-  ownerId: number | null;
-  clubId: number | null;
-  action: string;
-  entityType: string;
-  entityId: number | null;
-  summary: string;
-  before: unknown;
-  after: unknown;
-};
+import * as repo from './audit.repo';
 
 export type AuditRecord = {
   actor: Pick<SessionUser, 'id' | 'displayName'>;
@@ -42,7 +29,7 @@ export type AuditRecord = {
 
 /** Records who changed what, before and after, when (UTC). Call inside the write's transaction. */
 export async function record(entry: AuditRecord, transaction?: Transaction) {
-  await AuditEntryModel.create(
+  await repo.insert(
     {
       at: new Date(),
       actorId: entry.actor.id,
@@ -56,11 +43,11 @@ export async function record(entry: AuditRecord, transaction?: Transaction) {
       before: entry.before === undefined ? null : JSON.stringify(entry.before),
       after: entry.after === undefined ? null : JSON.stringify(entry.after),
     },
-    { transaction },
+    transaction,
   );
 }
 
-function toEntry(row: AuditEntryModel): AuditEntry {
+function toEntry(row: Awaited<ReturnType<typeof repo.findForOwner>>[number]): AuditEntry {
   return {
     id: Number(row.id),
     atUtc: row.at.toISOString(),
@@ -76,32 +63,14 @@ function toEntry(row: AuditEntryModel): AuditEntry {
   };
 }
 
-const LIMIT = 500;
-
 /** An operator's own log: changes to their things, by anyone. */
 export async function listForOwner(ownerId: number) {
-  const rows = await AuditEntryModel.findAll({
-    where: { ownerId },
-    order: [
-      ['at', 'DESC'],
-      ['id', 'DESC'],
-    ],
-    limit: LIMIT,
-  });
-  return rows.map(toEntry);
+  return (await repo.findForOwner(ownerId)).map(toEntry);
 }
 
 /** A club's log: the club's own actions and changes to its members' things. */
 export async function listForClub(clubId: number, memberIds: number[]) {
-  const rows = await AuditEntryModel.findAll({
-    where: { [Op.or]: [{ clubId }, { ownerId: { [Op.in]: memberIds }, clubId: null }] },
-    order: [
-      ['at', 'DESC'],
-      ['id', 'DESC'],
-    ],
-    limit: LIMIT,
-  });
-  return rows.map(toEntry);
+  return (await repo.findForClub(clubId, memberIds)).map(toEntry);
 }
 
 const csvCell = (value: unknown) => {

@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import passport from 'passport';
 import type { Sequelize } from 'sequelize';
+import type { MessageAnswer } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { profileInput, registerInput, resetConfirmInput, resetRequestInput, signInInput } from '@/shared/schemas';
 import type { Config } from '../../config';
@@ -10,7 +11,6 @@ import type { Logger } from '../../lib/logger';
 import type { Mailer } from '../../mail/mailer';
 import { currentUser } from '../../middleware/auth';
 import * as auth from './auth.service';
-import { findSessionUser } from './users.repo';
 
 type Deps = { config: Config; sequelize: Sequelize; mailer: Mailer; logger: Logger };
 
@@ -45,7 +45,7 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
   router.post('/register', async (req, res) => {
     const input = registerInput.parse(req.body);
     const userId = await auth.register(input, config.BCRYPT_COST);
-    const user = await findSessionUser(userId);
+    const user = await auth.sessionUserOf(userId);
     if (!user) throw new AppError('internal', 'The new account could not be read back');
     await logIn(req, user);
     res.status(201).json(user);
@@ -81,15 +81,19 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
 
   router.patch('/me', async (req, res) => {
     const user = currentUser(req);
-    await auth.updateProfile(user, profileInput.parse(req.body));
-    res.json(await findSessionUser(user.id));
+    await auth.updateProfile(sequelize, user, profileInput.parse(req.body));
+    res.json(await auth.sessionUserOf(user.id));
   });
 
   router.post('/password-reset', resetLimiter, async (req, res) => {
     const { email } = resetRequestInput.parse(req.body);
     const reset = await auth.createPasswordReset(email);
     // The same answer whether or not the account exists; the mail goes out after the write.
-    res.status(202).json({ message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.' });
+    res
+      .status(202)
+      .json({
+        message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.',
+      } satisfies MessageAnswer);
     if (reset) {
       const link = `${config.WEB_ORIGIN}/reset-password?token=${encodeURIComponent(reset.token)}`;
       mailer
@@ -105,7 +109,7 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
   router.post('/password-reset/confirm', async (req, res) => {
     const input = resetConfirmInput.parse(req.body);
     await auth.confirmPasswordReset(sequelize, input, config.BCRYPT_COST);
-    res.json({ message: 'Your password is changed. Sign in with the new one.' });
+    res.json({ message: 'Your password is changed. Sign in with the new one.' } satisfies MessageAnswer);
   });
 
   return router;

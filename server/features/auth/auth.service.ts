@@ -1,14 +1,13 @@
 import bcrypt from 'bcryptjs';
 import { createHash, randomBytes } from 'node:crypto';
-import { Op, UniqueConstraintError, type Sequelize } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { ProfileInput, RegisterInput, ResetConfirmInput } from '@/shared/schemas';
-import { PasswordResetModel } from '../../db/models/password-reset.model';
-import { inTransaction } from '../../db/transaction';
-import { UserModel } from '../../db/models/user.model';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
-import { findByEmail } from './users.repo';
+import * as resets from './password-resets.repo';
+import * as users from './users.repo';
 
 export const RESET_TOKEN_LIFETIME_MIN = 30;
 
@@ -20,13 +19,12 @@ const NO_USER_HASH = bcrypt.hashSync('no user has this password', 4);
 export async function register(input: RegisterInput, bcryptCost: number): Promise<number> {
   const passwordHash = await bcrypt.hash(input.password, bcryptCost);
   try {
-    const user = await UserModel.create({
+    return await users.insert({
       email: input.email,
       displayName: input.displayName,
       callsign: input.callsign ? input.callsign : null,
       passwordHash,
     });
-    return user.id;
   } catch (error) {
     if (error instanceof UniqueConstraintError) {
       throw new AppError('conflict', 'An account with this e-mail already exists', {
@@ -39,50 +37,44 @@ export async function register(input: RegisterInput, bcryptCost: number): Promis
 
 /** The user's id when e-mail and password match, otherwise null. */
 export async function verifyCredentials(email: string, password: string): Promise<number | null> {
-  const user = await findByEmail(email.trim().toLowerCase());
+  const user = await users.findByEmail(email.trim().toLowerCase());
   const matches = await bcrypt.compare(password, user?.passwordHash ?? NO_USER_HASH);
   return user && matches ? user.id : null;
 }
 
 /** Creates a single-use token and returns it (to be mailed), or null for an unknown e-mail. */
 export async function createPasswordReset(email: string, now = new Date()) {
-  const user = await findByEmail(email);
+  const user = await users.findByEmail(email);
   if (!user) return null;
   const token = randomBytes(32).toString('base64url');
-  await PasswordResetModel.create({
+  await resets.insert({
     userId: user.id,
     tokenHash: sha256(token),
     expiresAt: new Date(now.getTime() + RESET_TOKEN_LIFETIME_MIN * 60_000),
-    usedAt: null,
   });
   return { token, email: user.email, displayName: user.displayName };
 }
 
-export async function confirmPasswordReset(sequelize: Sequelize, input: ResetConfirmInput, bcryptCost: number, now = new Date()) {
+export async function confirmPasswordReset(db: TransactionRunner, input: ResetConfirmInput, bcryptCost: number, now = new Date()) {
   const passwordHash = await bcrypt.hash(input.password, bcryptCost);
-  await sequelize.transaction(async (transaction) => {
-    const reset = await PasswordResetModel.findOne({
-      where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: now } },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
+  await db.transaction(async (transaction) => {
+    const reset = await resets.findUsableForUpdate(sha256(input.token), now, transaction);
     if (!reset) {
       throw new AppError('bad-request', 'This reset link is invalid, already used or expired. Ask for a new one.', {
         token: 'This reset link is invalid, already used or expired. Ask for a new one.',
       });
     }
-    await reset.update({ usedAt: now }, { transaction });
-    await UserModel.update({ passwordHash }, { where: { id: reset.userId }, transaction });
-    // Any other outstanding links for this account stop working too.
-    await PasswordResetModel.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: null }, transaction });
+    await users.update(reset.userId, { passwordHash }, transaction);
+    // This link and any other outstanding ones for the account stop working.
+    await resets.useAllOf(reset.userId, now, transaction);
   });
 }
 
 /** Name and personal callsign; recorded in the person's own log. */
-export async function updateProfile(user: SessionUser, input: ProfileInput) {
+export async function updateProfile(db: TransactionRunner, user: SessionUser, input: ProfileInput) {
   const callsign = input.callsign ? input.callsign : null;
-  await inTransaction(async (transaction) => {
-    await UserModel.update({ displayName: input.displayName, callsign }, { where: { id: user.id }, transaction });
+  await db.transaction(async (transaction) => {
+    await users.update(user.id, { displayName: input.displayName, callsign }, transaction);
     const before = { displayName: user.displayName, callsign: user.callsign };
     await audit.record(
       {
@@ -98,4 +90,13 @@ export async function updateProfile(user: SessionUser, input: ProfileInput) {
       transaction,
     );
   });
+}
+
+/** The signed-in user with club memberships, read afresh. */
+export const sessionUserOf = (id: number) => users.findSessionUser(id);
+
+/** Where to mail a person, for other features (owners of stations, members of clubs). */
+export async function contactOf(userId: number, transaction?: Transaction) {
+  const user = await users.findById(userId, transaction);
+  return user && { id: user.id, email: user.email, displayName: user.displayName };
 }

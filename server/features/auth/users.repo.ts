@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import { ClubModel } from '../../db/models/club.model';
 import { MembershipModel } from '../../db/models/membership.model';
@@ -25,4 +26,19 @@ export async function findSessionUser(id: number): Promise<SessionUser | null> {
     clubs,
     adminOfClubIds: clubs.filter((c) => c.role === 'admin').map((c) => c.clubId),
   };
+}
+
+export const findById = (id: number, transaction?: Transaction) => UserModel.findByPk(id, { transaction });
+
+/** Creates an account; a taken e-mail fails with Sequelize's UniqueConstraintError. */
+export async function insert(values: { email: string; displayName: string; callsign: string | null; passwordHash: string }) {
+  return (await UserModel.create(values)).id;
+}
+
+export async function update(
+  id: number,
+  values: { displayName?: string; callsign?: string | null; passwordHash?: string },
+  transaction?: Transaction,
+) {
+  await UserModel.update(values, { where: { id }, transaction });
 }

@@ -1,13 +1,54 @@
-import { Op } from 'sequelize';
-import { MembershipModel } from '../../db/models/membership.model';
+import { Op, type Transaction } from 'sequelize';
+import { ClubModel } from '../../db/models/club.model';
+import { MembershipModel, type MembershipRole } from '../../db/models/membership.model';
 
-export async function membershipOf(userId: number, clubId: number) {
-  return MembershipModel.findOne({ where: { userId, clubId } });
+export type { MembershipRole };
+import { UserModel } from '../../db/models/user.model';
+
+export const findClub = (clubId: number, transaction?: Transaction) => ClubModel.findByPk(clubId, { transaction });
+
+export async function insertClub(values: { name: string; maxPowerDbm: number }, transaction: Transaction) {
+  return ClubModel.create(values, { transaction });
+}
+
+export async function updateClub(clubId: number, patch: { name?: string; maxPowerDbm?: number }, transaction: Transaction) {
+  await ClubModel.update(patch, { where: { id: clubId }, transaction });
+}
+
+export async function membershipOf(userId: number, clubId: number, transaction?: Transaction) {
+  return MembershipModel.findOne({ where: { userId, clubId }, transaction });
+}
+
+/** The membership, locked for the rest of the transaction. */
+export async function membershipForUpdate(userId: number, clubId: number, transaction: Transaction) {
+  return MembershipModel.findOne({ where: { clubId, userId }, transaction, lock: transaction.LOCK.UPDATE });
+}
+
+export async function insertMembership(values: { clubId: number; userId: number; role: MembershipRole }, transaction: Transaction) {
+  await MembershipModel.create(values, { transaction });
+}
+
+export async function setRole(userId: number, clubId: number, role: MembershipRole, transaction: Transaction) {
+  await MembershipModel.update({ role }, { where: { clubId, userId }, transaction });
+}
+
+export async function removeMembership(userId: number, clubId: number, transaction: Transaction) {
+  await MembershipModel.destroy({ where: { clubId, userId }, transaction });
+}
+
+export async function adminCount(clubId: number, transaction: Transaction) {
+  return MembershipModel.count({ where: { clubId, role: 'admin' }, transaction });
 }
 
 export async function memberIdsOf(clubId: number): Promise<number[]> {
   const rows = await MembershipModel.findAll({ where: { clubId }, attributes: ['userId'] });
   return rows.map((row) => row.userId);
+}
+
+/** The club's members with their accounts, in joining order. */
+export async function membersOf(clubId: number) {
+  const rows = await MembershipModel.findAll({ where: { clubId }, include: [{ model: UserModel, as: 'user' }], order: [['id', 'ASC']] });
+  return rows.map((m) => ({ membership: m, user: (m as MembershipModel & { user: UserModel }).user }));
 }
 
 /** True when `adminId` administers a club that `ownerId` belongs to. */

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { SuspensionAnswer } from '@/shared/api/answers';
 import type { Sequelize } from 'sequelize';
 import { clubInput, clubPatch, invitationInput, memberRoleInput, offsetProposalInput, suspensionInput } from '@/shared/schemas';
 import type { Config } from '../../config';
@@ -8,10 +9,9 @@ import { sendLater } from '../../mail/send-later';
 import type { Mailer } from '../../mail/mailer';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import * as audit from '../audit/audit.service';
-import { findByOwners } from '../stations/stations.repo';
-import { findSessionUser } from '../auth/users.repo';
-import { requireAdmin } from './access';
-import { memberIdsOf } from './clubs.repo';
+import { sessionUserOf } from '../auth/auth.service';
+import { stationsOfOwners } from '../stations/stations.service';
+import { memberIdsOf, requireAdmin } from './access';
 import * as clubs from './clubs.service';
 import * as invitations from './invitations.service';
 import * as moderation from './moderation.service';
@@ -30,7 +30,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
   router.post('/', async (req, res) => {
     const user = currentUser(req);
     const id = await clubs.createClub(sequelize, user, clubInput.parse(req.body) as { name: string; maxPowerDbm: number });
-    res.status(201).json(await clubs.detail((await findSessionUser(user.id))!, id));
+    res.status(201).json(await clubs.detail((await sessionUserOf(user.id))!, id));
   });
   router.get('/:clubId', async (req, res) => {
     res.json(await clubs.detail(currentUser(req), club(req.params)));
@@ -45,7 +45,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
   router.get('/:clubId/stations', async (req, res) => {
     const clubId = club(req.params);
     await requireAdmin(currentUser(req), clubId);
-    res.json(await findByOwners(await memberIdsOf(clubId)));
+    res.json(await stationsOfOwners(await memberIdsOf(clubId)));
   });
 
   router.delete('/:clubId/members/:userId', async (req, res) => {
@@ -93,7 +93,7 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
       parseId(req.params.stationId, 'Station'),
       reason,
     );
-    res.status(201).json({ suspended: true, reason });
+    res.status(201).json({ suspended: true, reason } satisfies SuspensionAnswer);
     sendLater(mailer, logger, mail);
   });
   router.delete('/:clubId/stations/:stationId/suspension', async (req, res) => {

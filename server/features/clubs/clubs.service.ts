@@ -1,17 +1,16 @@
-import type { Sequelize, Transaction } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { ClubDetail } from '@/shared/schemas';
-import { ClubModel } from '../../db/models/club.model';
-import { MembershipModel, type MembershipRole } from '../../db/models/membership.model';
-import { UserModel } from '../../db/models/user.model';
+import type { MembershipRole } from './clubs.repo';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import { requireAdmin, requireMember } from './access';
+import * as repo from './clubs.repo';
 
-export async function createClub(sequelize: Sequelize, user: SessionUser, input: { name: string; maxPowerDbm: number }) {
-  return sequelize.transaction(async (transaction) => {
-    const club = await ClubModel.create(input, { transaction });
-    await MembershipModel.create({ clubId: club.id, userId: user.id, role: 'admin' }, { transaction });
+export async function createClub(db: TransactionRunner, user: SessionUser, input: { name: string; maxPowerDbm: number }) {
+  return db.transaction(async (transaction) => {
+    const club = await repo.insertClub(input, transaction);
+    await repo.insertMembership({ clubId: club.id, userId: user.id, role: 'admin' }, transaction);
     await audit.record(
       {
         actor: user,
@@ -31,14 +30,13 @@ export async function createClub(sequelize: Sequelize, user: SessionUser, input:
 
 export async function detail(user: SessionUser, clubId: number): Promise<ClubDetail> {
   const { membership, club } = await requireMember(user, clubId);
-  const rows = await MembershipModel.findAll({ where: { clubId }, include: [{ model: UserModel, as: 'user' }], order: [['id', 'ASC']] });
+  const rows = await repo.membersOf(clubId);
   return {
     id: club.id,
     name: club.name,
     maxPowerDbm: club.maxPowerDbm,
     myRole: membership.role,
-    members: rows.map((m) => {
-      const u = (m as MembershipModel & { user: UserModel }).user;
+    members: rows.map(({ membership: m, user: u }) => {
       // Members see each other's names; e-mail addresses only the admins.
       return {
         userId: m.userId,
@@ -52,11 +50,11 @@ export async function detail(user: SessionUser, clubId: number): Promise<ClubDet
   };
 }
 
-export async function update(sequelize: Sequelize, user: SessionUser, clubId: number, patch: { name?: string; maxPowerDbm?: number }) {
+export async function update(db: TransactionRunner, user: SessionUser, clubId: number, patch: { name?: string; maxPowerDbm?: number }) {
   const { club } = await requireAdmin(user, clubId);
   const before = { name: club.name, maxPowerDbm: club.maxPowerDbm };
-  await sequelize.transaction(async (transaction) => {
-    await club.update(patch, { transaction });
+  await db.transaction(async (transaction) => {
+    await repo.updateClub(clubId, patch, transaction);
     await audit.record(
       {
         actor: user,
@@ -74,22 +72,18 @@ export async function update(sequelize: Sequelize, user: SessionUser, clubId: nu
   });
 }
 
-async function adminCount(clubId: number, transaction: Transaction) {
-  return MembershipModel.count({ where: { clubId, role: 'admin' }, transaction });
-}
-
 /** Removes a member (admins), or the member themself (leaving); the last admin must hand over first. */
-export async function removeMember(sequelize: Sequelize, user: SessionUser, clubId: number, memberId: number) {
+export async function removeMember(db: TransactionRunner, user: SessionUser, clubId: number, memberId: number) {
   const self = memberId === user.id;
   if (self) await requireMember(user, clubId);
   else await requireAdmin(user, clubId);
-  await sequelize.transaction(async (transaction) => {
-    const target = await MembershipModel.findOne({ where: { clubId, userId: memberId }, transaction, lock: transaction.LOCK.UPDATE });
+  await db.transaction(async (transaction) => {
+    const target = await repo.membershipForUpdate(memberId, clubId, transaction);
     if (!target) throw new AppError('not-found', `User ${memberId} is not a member of this club`);
-    if (target.role === 'admin' && (await adminCount(clubId, transaction)) <= 1) {
+    if (target.role === 'admin' && (await repo.adminCount(clubId, transaction)) <= 1) {
       throw new AppError('conflict', 'The last admin cannot leave: make another member an admin first');
     }
-    await target.destroy({ transaction });
+    await repo.removeMembership(memberId, clubId, transaction);
     await audit.record(
       {
         actor: user,
@@ -106,16 +100,16 @@ export async function removeMember(sequelize: Sequelize, user: SessionUser, club
   });
 }
 
-export async function setRole(sequelize: Sequelize, user: SessionUser, clubId: number, memberId: number, role: MembershipRole) {
+export async function setRole(db: TransactionRunner, user: SessionUser, clubId: number, memberId: number, role: MembershipRole) {
   await requireAdmin(user, clubId);
-  await sequelize.transaction(async (transaction) => {
-    const target = await MembershipModel.findOne({ where: { clubId, userId: memberId }, transaction, lock: transaction.LOCK.UPDATE });
+  await db.transaction(async (transaction) => {
+    const target = await repo.membershipForUpdate(memberId, clubId, transaction);
     if (!target) throw new AppError('not-found', `User ${memberId} is not a member of this club`);
-    if (target.role === 'admin' && role === 'member' && (await adminCount(clubId, transaction)) <= 1) {
+    if (target.role === 'admin' && role === 'member' && (await repo.adminCount(clubId, transaction)) <= 1) {
       throw new AppError('conflict', 'The club needs at least one admin: promote someone else first');
     }
     const before = { role: target.role };
-    await target.update({ role }, { transaction });
+    await repo.setRole(memberId, clubId, role, transaction);
     await audit.record(
       {
         actor: user,

@@ -1,18 +1,19 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { Op, type Sequelize } from 'sequelize';
+import type { AcceptedInvitation } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { Invitation } from '@/shared/schemas';
-import { InvitationModel } from '../../db/models/club-extras.model';
-import { MembershipModel } from '../../db/models/membership.model';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import type { OutgoingMail } from '../../mail/mailer';
 import * as audit from '../audit/audit.service';
 import { requireAdmin } from './access';
+import * as clubsRepo from './clubs.repo';
+import * as repo from './invitations.repo';
 
 export const INVITATION_LIFETIME_DAYS = 7;
 const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
 
-const toInvitation = (row: InvitationModel): Invitation => ({
+const toInvitation = (row: repo.InvitationRow): Invitation => ({
   id: row.id,
   email: row.email,
   expiresAt: row.expiresAt.toISOString(),
@@ -21,21 +22,19 @@ const toInvitation = (row: InvitationModel): Invitation => ({
 });
 
 /** Creates an invitation and returns the mail to send once the write has committed. */
-export async function invite(sequelize: Sequelize, user: SessionUser, clubId: number, email: string, webOrigin: string, now = new Date()) {
+export async function invite(db: TransactionRunner, user: SessionUser, clubId: number, email: string, webOrigin: string, now = new Date()) {
   const { club } = await requireAdmin(user, clubId);
   const token = randomBytes(32).toString('base64url');
-  const row = await sequelize.transaction(async (transaction) => {
-    const created = await InvitationModel.create(
+  const row = await db.transaction(async (transaction) => {
+    const created = await repo.insert(
       {
         clubId,
         email,
         tokenHash: sha256(token),
         invitedById: user.id,
         expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_DAYS * 86_400_000),
-        acceptedAt: null,
-        acceptedById: null,
       },
-      { transaction },
+      transaction,
     );
     await audit.record(
       {
@@ -62,14 +61,13 @@ export async function invite(sequelize: Sequelize, user: SessionUser, clubId: nu
 
 export async function listPending(user: SessionUser, clubId: number, now = new Date()) {
   await requireAdmin(user, clubId);
-  const rows = await InvitationModel.findAll({ where: { clubId, acceptedAt: null, expiresAt: { [Op.gt]: now } }, order: [['id', 'DESC']] });
-  return rows.map(toInvitation);
+  return (await repo.findPending(clubId, now)).map(toInvitation);
 }
 
 /** Joins the club the invitation names: once, before it expires, for the address it was sent to. */
-export async function accept(sequelize: Sequelize, user: SessionUser, token: string, now = new Date()) {
-  return sequelize.transaction(async (transaction) => {
-    const row = await InvitationModel.findOne({ where: { tokenHash: sha256(token) }, transaction, lock: transaction.LOCK.UPDATE });
+export async function accept(db: TransactionRunner, user: SessionUser, token: string, now = new Date()) {
+  return db.transaction(async (transaction) => {
+    const row = await repo.findByTokenForUpdate(sha256(token), transaction);
     const invalid = (reason: string) => new AppError('bad-request', reason, { token: reason });
     if (!row) throw invalid('This invitation link is not valid. Ask the club admin for a new one.');
     if (row.acceptedAt) throw invalid('This invitation was already used. Ask the club admin for a new one if you need it.');
@@ -77,9 +75,9 @@ export async function accept(sequelize: Sequelize, user: SessionUser, token: str
     if (row.email !== user.email) {
       throw new AppError('forbidden', `This invitation was sent to ${row.email}; sign in with that address to accept it`);
     }
-    const existing = await MembershipModel.findOne({ where: { clubId: row.clubId, userId: user.id }, transaction });
-    if (!existing) await MembershipModel.create({ clubId: row.clubId, userId: user.id, role: 'member' }, { transaction });
-    await row.update({ acceptedAt: now, acceptedById: user.id }, { transaction });
+    const existing = await clubsRepo.membershipOf(user.id, row.clubId, transaction);
+    if (!existing) await clubsRepo.insertMembership({ clubId: row.clubId, userId: user.id, role: 'member' }, transaction);
+    await repo.markAccepted(row.id, user.id, now, transaction);
     await audit.record(
       {
         actor: user,
@@ -92,6 +90,6 @@ export async function accept(sequelize: Sequelize, user: SessionUser, token: str
       },
       transaction,
     );
-    return { clubId: row.clubId };
+    return { clubId: row.clubId } satisfies AcceptedInvitation;
   });
 }

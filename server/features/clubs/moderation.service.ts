@@ -1,33 +1,31 @@
-import type { Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { OffsetProposal } from '@/shared/schemas';
-import { ClubModel } from '../../db/models/club.model';
-import { OffsetProposalModel } from '../../db/models/club-extras.model';
-import { StationModel } from '../../db/models/station.model';
-import { UserModel } from '../../db/models/user.model';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import type { OutgoingMail } from '../../mail/mailer';
 import * as audit from '../audit/audit.service';
+import { contactOf } from '../auth/auth.service';
 import { notify } from '../notifications/notifications.service';
-import * as stationsRepo from '../stations/stations.repo';
-import { requireAdmin } from './access';
-import { memberIdsOf } from './clubs.repo';
+import * as stations from '../stations/stations.service';
+import { memberIdsOf, requireAdmin } from './access';
+import { findClub } from './clubs.repo';
+import * as repo from './proposals.repo';
 
 /** The station, if its owner belongs to the club. */
 async function clubStation(clubId: number, stationId: number) {
-  const station = await stationsRepo.findById(stationId);
+  const station = await stations.stationById(stationId);
   if (!station || !(await memberIdsOf(clubId)).includes(station.ownerId))
     throw new AppError('not-found', `Station ${stationId} is not a station of this club`);
-  const owner = (await UserModel.findByPk(station.ownerId))!;
+  const owner = (await contactOf(station.ownerId))!;
   return { station, owner };
 }
 
-export async function suspend(sequelize: Sequelize, user: SessionUser, clubId: number, stationId: number, reason: string) {
+export async function suspend(db: TransactionRunner, user: SessionUser, clubId: number, stationId: number, reason: string) {
   const { club } = await requireAdmin(user, clubId);
   const { station, owner } = await clubStation(clubId, stationId);
   if (station.suspension) throw new AppError('conflict', `${station.name} is already suspended`);
-  await sequelize.transaction(async (transaction) => {
-    await stationsRepo.setSuspension(stationId, { reason, clubId }, transaction);
+  await db.transaction(async (transaction) => {
+    await stations.setSuspension(stationId, { reason, clubId }, transaction);
     await notify(owner.id, 'suspension', `${club.name} suspended ${station.name}: ${reason}`, `/stations/${stationId}`, transaction);
     await audit.record(
       {
@@ -52,12 +50,12 @@ export async function suspend(sequelize: Sequelize, user: SessionUser, clubId: n
   return { mail };
 }
 
-export async function lift(sequelize: Sequelize, user: SessionUser, clubId: number, stationId: number) {
+export async function lift(db: TransactionRunner, user: SessionUser, clubId: number, stationId: number) {
   const { club } = await requireAdmin(user, clubId);
   const { station, owner } = await clubStation(clubId, stationId);
   if (!station.suspension) throw new AppError('conflict', `${station.name} is not suspended`);
-  await sequelize.transaction(async (transaction) => {
-    await stationsRepo.setSuspension(stationId, null, transaction);
+  await db.transaction(async (transaction) => {
+    await stations.setSuspension(stationId, null, transaction);
     await notify(
       owner.id,
       'suspension-lifted',
@@ -89,8 +87,8 @@ export async function lift(sequelize: Sequelize, user: SessionUser, clubId: numb
   };
 }
 
-async function toProposal(row: OffsetProposalModel): Promise<OffsetProposal> {
-  const [club, station] = await Promise.all([ClubModel.findByPk(row.clubId), StationModel.findByPk(row.stationId)]);
+async function toProposal(row: repo.ProposalRow): Promise<OffsetProposal> {
+  const [club, station] = await Promise.all([findClub(row.clubId), stations.stationById(row.stationId)]);
   return {
     id: row.id,
     clubId: row.clubId,
@@ -108,19 +106,16 @@ async function toProposal(row: OffsetProposalModel): Promise<OffsetProposal> {
 
 /** An admin proposes an offset; the owner is told by mail and notice, and nothing changes until they accept. */
 export async function propose(
-  sequelize: Sequelize,
+  db: TransactionRunner,
   user: SessionUser,
   clubId: number,
   input: { stationId: number; proposedOffsetHz: number; reason: string },
 ) {
   const { club } = await requireAdmin(user, clubId);
   const { station, owner } = await clubStation(clubId, input.stationId);
-  const row = await sequelize.transaction(async (transaction) => {
-    await OffsetProposalModel.update(
-      { status: 'withdrawn', decidedAt: new Date() },
-      { where: { stationId: station.id, status: 'pending' }, transaction },
-    );
-    const created = await OffsetProposalModel.create(
+  const row = await db.transaction(async (transaction) => {
+    await repo.withdrawPending(station.id, new Date(), transaction);
+    const created = await repo.insert(
       {
         clubId,
         stationId: station.id,
@@ -128,9 +123,8 @@ export async function propose(
         currentOffsetHz: station.audioOffsetHz,
         proposedOffsetHz: input.proposedOffsetHz,
         reason: input.reason,
-        decidedAt: null,
       },
-      { transaction },
+      transaction,
     );
     await notify(
       owner.id,
@@ -164,20 +158,20 @@ export async function propose(
 }
 
 export async function listMine(user: SessionUser) {
-  const stations = await stationsRepo.findByOwner(user.id);
-  const rows = await OffsetProposalModel.findAll({ where: { stationId: stations.map((s) => s.id) }, order: [['id', 'DESC']], limit: 100 });
+  const own = await stations.listFor(user);
+  const rows = await repo.findForStations(own.map((s) => s.id));
   return Promise.all(rows.map(toProposal));
 }
 
-export async function decide(sequelize: Sequelize, user: SessionUser, proposalId: number, accept: boolean) {
-  return sequelize.transaction(async (transaction) => {
-    const row = await OffsetProposalModel.findByPk(proposalId, { transaction, lock: transaction.LOCK.UPDATE });
-    const station = row ? await stationsRepo.findById(row.stationId, transaction) : null;
+export async function decide(db: TransactionRunner, user: SessionUser, proposalId: number, accept: boolean) {
+  return db.transaction(async (transaction) => {
+    const row = await repo.findForUpdate(proposalId, transaction);
+    const station = row ? await stations.stationById(row.stationId, transaction) : null;
     if (!row || !station || station.ownerId !== user.id) throw new AppError('not-found', `Proposal ${proposalId} does not exist`);
     if (row.status !== 'pending') throw new AppError('conflict', `This proposal was already ${row.status}`);
-    await row.update({ status: accept ? 'accepted' : 'declined', decidedAt: new Date() }, { transaction });
+    await repo.decide(row, accept ? 'accepted' : 'declined', new Date(), transaction);
     if (accept) {
-      await stationsRepo.update(station.id, { audioOffsetHz: row.proposedOffsetHz }, transaction);
+      await stations.setAudioOffset(station.id, row.proposedOffsetHz, transaction);
       await audit.record(
         {
           actor: user,

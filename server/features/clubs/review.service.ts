@@ -1,23 +1,22 @@
+import type { ClubConflicts, ClubOccupancy } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { DAY_MS, fleetStationFromPlan, findFleetConflicts, proposeFleetOffsets } from '@/shared/domain/schedule';
 import { complianceFindings } from '@/shared/domain/workshop';
 import type { ReviewRow, Schedule, Station, Unit } from '@/shared/schemas';
 import { planFor } from '../schedules/plan';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import { findByOwners } from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
-import { requireAdmin } from './access';
-import { memberIdsOf } from './clubs.repo';
+import { schedulesOf } from '../schedules/schedules.service';
+import { stationsOfOwners } from '../stations/stations.service';
+import { unitById } from '../units/units.service';
+import { memberIdsOf, requireAdmin } from './access';
 
 type Loaded = { station: Station; unit: Unit | null; schedule: Schedule | null };
 
 /** Every member's station with its unit and schedule, read once. */
 async function loadClubStations(clubId: number): Promise<Loaded[]> {
-  const stations = await findByOwners(await memberIdsOf(clubId));
-  const schedules = await schedulesRepo.findByStations(stations.map((s) => s.id));
+  const stations = await stationsOfOwners(await memberIdsOf(clubId));
+  const schedules = await schedulesOf(stations.map((s) => s.id));
   const units = new Map<number, Unit | null>();
-  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null)))
-    units.set(id, await unitsRepo.findById(id));
+  for (const id of new Set(stations.map((s) => s.unitId).filter((id): id is number => id !== null))) units.set(id, await unitById(id));
   return stations.map((station) => ({
     station,
     unit: station.unitId === null ? null : (units.get(station.unitId) ?? null),
@@ -56,7 +55,7 @@ async function clubPlans(clubId: number, fromMs: number) {
     .map((l) => ({ ...l, plan: planFor(l.station, l.unit, l.schedule, fromMs, fromMs + DAY_MS) }));
 }
 
-export async function conflicts(user: SessionUser, clubId: number, now = Date.now()) {
+export async function conflicts(user: SessionUser, clubId: number, now = Date.now()): Promise<ClubConflicts> {
   await requireAdmin(user, clubId);
   const plans = await clubPlans(clubId, now);
   const fleet = plans.map((p) => fleetStationFromPlan(p.station.id, p.station.audioOffsetHz, p.plan.transmissions));
@@ -76,7 +75,7 @@ export async function conflicts(user: SessionUser, clubId: number, now = Date.no
 }
 
 /** Transmissions per band per UTC hour over the next 24 hours, and each band's duty. */
-export async function occupancy(user: SessionUser, clubId: number, now = Date.now()) {
+export async function occupancy(user: SessionUser, clubId: number, now = Date.now()): Promise<ClubOccupancy> {
   await requireAdmin(user, clubId);
   const plans = await clubPlans(clubId, now);
   const startHourMs = Math.floor(now / 3_600_000) * 3_600_000;

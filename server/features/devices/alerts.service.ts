@@ -1,16 +1,20 @@
-import { Op, QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import { bandOnAir } from '@/shared/domain/workshop';
 import type { AlertRule, Station } from '@/shared/schemas';
-import { AlertModel, DeviceTokenModel, DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
-import { UserModel } from '../../db/models/user.model';
 import type { OutgoingMail } from '../../mail/mailer';
+import { contactOf } from '../auth/auth.service';
 import { planFor } from '../schedules/plan';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import * as stationsRepo from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
-import { driftFor, settingsOf } from './health.service';
+import { planInputsOf } from '../schedules/schedules.service';
+import { stationById } from '../stations/stations.service';
+import * as repo from './alerts.repo';
+import { driftFor, settingsOf } from './beacon-status.service';
+import * as heartbeats from './heartbeats.repo';
+import * as tokens from './tokens.repo';
+import * as transmissions from './transmissions.repo';
 
 type Finding = { rule: AlertRule; message: string };
+
+const JOB = 'alerts';
 
 const ruleTitles: Record<AlertRule, string> = {
   silent: 'silent while scheduled',
@@ -22,14 +26,7 @@ const ruleTitles: Record<AlertRule, string> = {
 /** Which of our rules a station breaks right now. */
 async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: number): Promise<Finding[]> {
   const settings = await settingsOf(station.id);
-  const [unit, schedule, last] = await Promise.all([
-    station.unitId === null ? null : unitsRepo.findById(station.unitId),
-    schedulesRepo.findByStation(station.id),
-    HeartbeatModel.findOne({
-      where: { stationId: station.id, receivedAt: { [Op.lte]: new Date(nowMs) } },
-      order: [['receivedAt', 'DESC']],
-    }),
-  ]);
+  const [{ unit, schedule }, last] = await Promise.all([planInputsOf(station), heartbeats.lastAtOrBefore(station.id, new Date(nowMs))]);
   const findings: Finding[] = [];
   const silentMs = settings.silentMinutes * 60_000;
   const lastMs = last?.receivedAt.getTime() ?? null;
@@ -69,9 +66,7 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
   }
   if (station.suspension) {
     const since = new Date(station.suspension.at);
-    const sent = await DeviceTransmissionModel.count({
-      where: { stationId: station.id, startedAt: { [Op.gte]: since, [Op.lte]: new Date(nowMs) } },
-    });
+    const sent = await transmissions.countBetween(station.id, since, new Date(nowMs));
     if (sent > 0)
       findings.push({
         rule: 'transmitting-while-suspended',
@@ -87,48 +82,29 @@ async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: numbe
  * Returns the mails to send (once per opening), or null when another process holds the lock.
  */
 export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): Promise<OutgoingMail[] | null> {
-  await sequelize.query("INSERT IGNORE INTO job_locks (name, lastRunAt) VALUES ('alerts', NULL)");
+  await repo.ensureJobRow(sequelize, JOB);
   return sequelize.transaction(async (transaction) => {
-    const locked = await sequelize.query("SELECT name FROM job_locks WHERE name = 'alerts' FOR UPDATE SKIP LOCKED", {
-      transaction,
-      type: QueryTypes.SELECT,
-    });
-    if (locked.length === 0) return null;
+    if (!(await repo.claimJob(sequelize, JOB, transaction))) return null;
     const now = new Date(nowMs);
-    const devices = await DeviceTokenModel.findAll({ attributes: ['stationId', 'updatedAt'], transaction });
-    for (const { stationId, updatedAt } of devices) {
-      const station = await stationsRepo.findById(stationId, transaction);
+    for (const { stationId, updatedAt } of await tokens.findAllIssued(transaction)) {
+      const station = await stationById(stationId, transaction);
       if (!station) continue;
       const findings = await findingsFor(station, nowMs, updatedAt.getTime());
-      const open = await AlertModel.findAll({ where: { stationId, resolvedAt: null }, transaction });
+      const open = await repo.findOpen(stationId, transaction);
       for (const finding of findings) {
         const existing = open.find((a) => a.rule === finding.rule);
-        if (existing) await existing.update({ lastSeenAt: now, message: finding.message }, { transaction });
-        else
-          await AlertModel.create(
-            {
-              stationId,
-              rule: finding.rule,
-              message: finding.message,
-              openedAt: now,
-              lastSeenAt: now,
-              resolvedAt: null,
-              mailedAt: null,
-              openKey: `${stationId}:${finding.rule}`,
-            },
-            { transaction },
-          );
+        if (existing) await repo.stillSeen(existing, finding.message, now, transaction);
+        else await repo.open({ stationId, rule: finding.rule, message: finding.message }, now, transaction);
       }
       for (const alert of open) {
-        if (!findings.some((f) => f.rule === alert.rule)) await alert.update({ resolvedAt: now, openKey: null }, { transaction });
+        if (!findings.some((f) => f.rule === alert.rule)) await repo.resolve(alert, now, transaction);
       }
     }
-    const unmailed = await AlertModel.findAll({ where: { mailedAt: null, resolvedAt: null }, transaction });
     const mails: OutgoingMail[] = [];
-    for (const alert of unmailed) {
-      await alert.update({ mailedAt: now }, { transaction });
-      const station = await stationsRepo.findById(alert.stationId, transaction);
-      const owner = station && (await UserModel.findByPk(station.ownerId, { transaction }));
+    for (const alert of await repo.findUnmailed(transaction)) {
+      await repo.markMailed(alert, now, transaction);
+      const station = await stationById(alert.stationId, transaction);
+      const owner = station && (await contactOf(station.ownerId, transaction));
       if (!station || !owner) continue;
       mails.push({
         to: owner.email,
@@ -136,7 +112,7 @@ export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): 
         text: `Hello ${owner.displayName},\n\n${alert.message}\n\nStation: ${station.name} (${station.callsign})\nOpened: ${alert.openedAt.toISOString().replace('T', ' ').slice(0, 19)} UTC\n\nThe alert closes by itself when the cause goes away; you get one mail per opening.\n`,
       });
     }
-    await sequelize.query("UPDATE job_locks SET lastRunAt = ? WHERE name = 'alerts'", { replacements: [now], transaction });
+    await repo.stampJob(sequelize, JOB, now, transaction);
     return mails;
   });
 }

@@ -3,12 +3,12 @@ import { MemoryStore } from 'express-rate-limit';
 import { LRUCache } from 'lru-cache';
 import type { Sequelize } from 'sequelize';
 import type { ApiErrorBody } from '@/shared/api/contracts';
+import { buildDeviceConfig, planWindowStart } from '@/shared/domain/workshop';
 import type { Config } from '../../config';
 import { AppError, statusOf } from '../../lib/app-error';
 import { onStationChanged } from '../../lib/change-feed';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import * as stationsRepo from '../stations/stations.repo';
-import * as unitsRepo from '../units/units.repo';
+import { planInputsOf } from '../schedules/schedules.service';
+import { stationById } from '../stations/stations.service';
 import {
   acceptsGzip,
   etagsFor,
@@ -17,7 +17,7 @@ import {
   type ConfigEtags,
   type ConfigRepresentations,
 } from './config-representation';
-import { deviceConfig, etagFor, planWindowStart } from './device-config';
+import { etagFor } from './device-config';
 import { identify, type DeviceIdentity } from './tokens.service';
 
 export const RATE_WINDOW_MS = 60_000;
@@ -74,14 +74,11 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
     if (ifNoneMatchHits(request.ifNoneMatch, etags.all)) return { status: 304 as const, encoding, etag: etags[encoding], body: EMPTY };
     let cached = configs.get(device.stationId);
     if (cached?.identity.etag !== etags.identity) {
-      const station = await stationsRepo.findById(device.stationId);
+      const station = await stationById(device.stationId);
       if (!station) throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
-      const [unit, schedule] = await Promise.all([
-        station.unitId === null ? null : unitsRepo.findById(station.unitId),
-        schedulesRepo.findByStation(station.id),
-      ]);
+      const { unit, schedule } = await planInputsOf(station);
       // Kept as bytes in both encodings, so a poll sends them without encoding anything again.
-      cached = representationsOf(etags, deviceConfig(station, unit, schedule, nowMs));
+      cached = representationsOf(etags, buildDeviceConfig(station, unit, schedule, nowMs));
       configs.set(device.stationId, cached);
     }
     return { status: 200 as const, encoding, etag: cached[encoding].etag, body: cached[encoding].body };

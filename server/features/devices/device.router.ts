@@ -1,12 +1,11 @@
 import express, { Router, type NextFunction, type Request, type Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import type { InferCreationAttributes } from 'sequelize';
+import type { StoredAnswer } from '@/shared/api/answers';
 import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
-import { DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
 import { AppError } from '../../lib/app-error';
-import { createGroupWriter } from '../../lib/group-writer';
 import { RATE_WINDOW_MS, sendConfig, type DeviceGateway } from './device-gateway';
+import { createReportStore } from './reports.service';
 import type { DeviceIdentity } from './tokens.service';
 
 type DeviceRequest = Request & { device?: DeviceIdentity };
@@ -17,10 +16,7 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
  */
 export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
   const router = Router();
-  // Heartbeats from many devices at once are stored a group per INSERT; each is acknowledged once written.
-  const storeHeartbeat = createGroupWriter((rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) =>
-    HeartbeatModel.bulkCreate(rows, { validate: false }),
-  );
+  const reports = createReportStore();
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
     req.device = await gateway.authenticate(req.get('authorization'));
@@ -53,30 +49,14 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
 
   router.post('/heartbeat', async (req: DeviceRequest, res) => {
     const report = heartbeatInput.parse(req.body);
-    await storeHeartbeat({
-      stationId: req.device!.stationId,
-      receivedAt: new Date(),
-      report: JSON.stringify(report),
-      clockOffsetMs: report.clockOffsetMs,
-      temperatureC: report.temperatureC,
-    });
-    res.status(202).json({ stored: true });
+    await reports.heartbeat(req.device!.stationId, report);
+    res.status(202).json({ stored: true } satisfies StoredAnswer);
   });
 
   router.post('/transmissions', async (req: DeviceRequest, res) => {
     const { transmissions } = transmissionLogInput.parse(req.body);
-    const receivedAt = new Date();
-    await DeviceTransmissionModel.bulkCreate(
-      transmissions.map((t) => ({
-        stationId: req.device!.stationId,
-        startedAt: new Date(t.startUtc),
-        bandId: t.bandId,
-        frequencyHz: t.frequencyHz,
-        messageText: t.messageText,
-        receivedAt,
-      })),
-    );
-    res.status(202).json({ stored: transmissions.length });
+    await reports.transmissions(req.device!.stationId, transmissions);
+    res.status(202).json({ stored: transmissions.length } satisfies StoredAnswer);
   });
 
   router.use((req, res) => {

@@ -1,23 +1,21 @@
-import { stationChangedAfter } from '../../lib/change-feed';
 import { createHash, randomBytes } from 'node:crypto';
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
-import { DeviceTokenModel } from '../../db/models/device.model';
-import { inTransaction } from '../../db/transaction';
+import type { TransactionRunner } from '../../db/transaction';
+import { stationChangedAfter } from '../../lib/change-feed';
 import * as audit from '../audit/audit.service';
 import { getOwnedBy } from '../stations/stations.service';
+import * as repo from './tokens.repo';
 
 export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
 export const newToken = () => `fld_${randomBytes(24).toString('base64url')}`;
 
 /** Creates or replaces the station's device token; the old one stops working at once. */
-export async function rotate(user: SessionUser, stationId: number) {
+export async function rotate(db: TransactionRunner, user: SessionUser, stationId: number) {
   const station = await getOwnedBy(user, stationId);
   const token = newToken();
-  await inTransaction(async (transaction) => {
-    const existing = await DeviceTokenModel.findOne({ where: { stationId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (existing) await existing.update({ tokenHash: hashToken(token) }, { transaction });
-    else await DeviceTokenModel.create({ stationId, tokenHash: hashToken(token) }, { transaction });
+  await db.transaction(async (transaction) => {
+    const existing = await repo.upsertHash(stationId, hashToken(token), transaction);
     stationChangedAfter(transaction, stationId);
     await audit.record(
       {
@@ -34,10 +32,10 @@ export async function rotate(user: SessionUser, stationId: number) {
   return token;
 }
 
-export async function revoke(user: SessionUser, stationId: number) {
+export async function revoke(db: TransactionRunner, user: SessionUser, stationId: number) {
   const station = await getOwnedBy(user, stationId);
-  await inTransaction(async (transaction) => {
-    await DeviceTokenModel.destroy({ where: { stationId }, transaction });
+  await db.transaction(async (transaction) => {
+    await repo.remove(stationId, transaction);
     stationChangedAfter(transaction, stationId);
     await audit.record(
       {
@@ -54,7 +52,7 @@ export async function revoke(user: SessionUser, stationId: number) {
 }
 
 export async function hasToken(stationId: number) {
-  return (await DeviceTokenModel.count({ where: { stationId } })) > 0;
+  return (await repo.countFor(stationId)) > 0;
 }
 
 export type DeviceIdentity = {
@@ -67,17 +65,7 @@ export type DeviceIdentity = {
 /** One query: which station a token belongs to, and the change stamps its configuration depends on. */
 export async function identify(sequelize: Sequelize, token: string): Promise<DeviceIdentity | null> {
   const tokenHash = hashToken(token);
-  const rows = await sequelize.query<{ stationId: number; s: Date; sc: Date | null; u: Date | null; b: Date | null; susp: Date | null }>(
-    `SELECT t.stationId AS stationId, s.updatedAt AS s, sc.updatedAt AS sc, u.updatedAt AS u, s.suspendedAt AS susp,
-            (SELECT MAX(sb.updatedAt) FROM station_bands sb WHERE sb.stationId = s.id) AS b
-       FROM device_tokens t
-       JOIN stations s ON s.id = t.stationId
-       LEFT JOIN schedules sc ON sc.stationId = s.id
-       LEFT JOIN units u ON u.id = s.unitId
-      WHERE t.tokenHash = ?`,
-    { replacements: [tokenHash], type: QueryTypes.SELECT },
-  );
-  const row = rows[0];
+  const row = await repo.findStampsByHash(sequelize, tokenHash);
   if (!row) return null;
   const stamp = (d: Date | null) => (d ? new Date(d).getTime() : 0);
   return {

@@ -1,15 +1,16 @@
-import { Op, type Transaction } from 'sequelize';
-import { NotificationModel } from '../../db/models/club-extras.model';
+import type { Transaction } from 'sequelize';
+import type { Notice } from '@/shared/api/answers';
 import { AppError } from '../../lib/app-error';
+import * as repo from './notifications.repo';
 
-export type Notice = { id: number; kind: string; message: string; link: string | null; readAt: string | null; createdAt: string };
+export type { Notice };
 
 export async function notify(userId: number, kind: string, message: string, link: string | null, transaction?: Transaction) {
-  await NotificationModel.create({ userId, kind, message: message.slice(0, 500), link, readAt: null }, { transaction });
+  await repo.insert({ userId, kind, message: message.slice(0, 500), link }, transaction);
 }
 
 export async function listFor(userId: number): Promise<Notice[]> {
-  const rows = await NotificationModel.findAll({ where: { userId }, order: [['id', 'DESC']], limit: 100 });
+  const rows = await repo.findFor(userId);
   return rows.map((r) => ({
     id: r.id,
     kind: r.kind,
@@ -21,7 +22,6 @@ export async function listFor(userId: number): Promise<Notice[]> {
 }
 
 export async function markRead(userId: number, id: number) {
-  const [count] = await NotificationModel.update({ readAt: new Date() }, { where: { id, userId, readAt: { [Op.is]: null } } });
-  if (count === 0 && !(await NotificationModel.findOne({ where: { id, userId } })))
+  if (!(await repo.markRead(userId, id, new Date())) && !(await repo.exists(userId, id)))
     throw new AppError('not-found', `Notice ${id} does not exist`);
 }

@@ -36,7 +36,7 @@ export function schedulesRouter({ sequelize }: { sequelize: Sequelize }) {
     res.json(await schedules.update(sequelize, currentUser(req), stationId(req.params), schedulePatch.parse(req.body)));
   });
   router.delete('/schedule', async (req, res) => {
-    await schedules.remove(currentUser(req), stationId(req.params));
+    await schedules.remove(sequelize, currentUser(req), stationId(req.params));
     res.status(204).end();
   });
   router.get('/plan', async (req, res) => {

@@ -1,25 +1,30 @@
-import type { Sequelize } from 'sequelize';
+import type { StationPlan } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { validateSchedule } from '@/shared/domain/schedule';
 import { applySchedulePatch, type ScheduleValues } from '@/shared/schemas/schedule';
-import { UserModel } from '../../db/models/user.model';
+import type { Station } from '@/shared/schemas';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import { getFor as getStation, getOwnedBy as getOwnStation } from '../stations/stations.service';
-import * as unitsRepo from '../units/units.repo';
+import { unitById } from '../units/units.service';
 import { planFor } from './plan';
 import * as repo from './schedules.repo';
 
 export const MAX_PLAN_RANGE_MS = 8 * 86_400_000;
 
-async function unitOf(unitId: number | null) {
-  return unitId === null ? null : unitsRepo.findById(unitId);
+// For other features: what a station's plan depends on besides the station itself.
+export const scheduleOf = (stationId: number) => repo.findByStation(stationId);
+export const schedulesOf = (stationIds: number[]) => repo.findByStations(stationIds);
+export async function planInputsOf(station: Station) {
+  const [unit, schedule] = await Promise.all([unitById(station.unitId), repo.findByStation(station.id)]);
+  return { unit, schedule };
 }
 
 /** Blocking problems (an unfiltered band, tones outside the window, duty above 50 %) stop a save. */
 async function refuseBlocked(stationId: number, values: ScheduleValues, user: SessionUser) {
   const station = await getOwnStation(user, stationId);
-  const issues = validateSchedule({ schedule: { ...values, stationId }, station, unit: await unitOf(station.unitId) });
+  const issues = validateSchedule({ schedule: { ...values, stationId }, station, unit: await unitById(station.unitId) });
   const blocking = issues.filter((i) => i.level === 'block');
   if (blocking.length) {
     const fields: Record<string, string> = {};
@@ -36,9 +41,9 @@ export async function getFor(user: SessionUser, stationId: number) {
   return schedule;
 }
 
-export async function create(sequelize: Sequelize, user: SessionUser, stationId: number, values: ScheduleValues) {
+export async function create(db: TransactionRunner, user: SessionUser, stationId: number, values: ScheduleValues) {
   await refuseBlocked(stationId, values, user);
-  return sequelize.transaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     if (await repo.findByStation(stationId, transaction)) {
       throw new AppError('conflict', `Station ${stationId} already has a schedule: change it instead`);
     }
@@ -59,7 +64,7 @@ export async function create(sequelize: Sequelize, user: SessionUser, stationId:
   });
 }
 
-export async function update(sequelize: Sequelize, user: SessionUser, stationId: number, patch: Partial<ScheduleValues>) {
+export async function update(db: TransactionRunner, user: SessionUser, stationId: number, patch: Partial<ScheduleValues>) {
   await getOwnStation(user, stationId);
   const current = await getFor(user, stationId);
   const merged = applySchedulePatch(current, patch);
@@ -74,7 +79,7 @@ export async function update(sequelize: Sequelize, user: SessionUser, stationId:
         ? 'Paused the schedule'
         : 'Resumed the schedule'
       : `Changed ${Object.keys(patch).join(', ')} of the schedule`;
-  return sequelize.transaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     const updated = await repo.update(stationId, values, transaction);
     await audit.record(
       {
@@ -93,10 +98,10 @@ export async function update(sequelize: Sequelize, user: SessionUser, stationId:
   });
 }
 
-export async function remove(user: SessionUser, stationId: number) {
+export async function remove(db: TransactionRunner, user: SessionUser, stationId: number) {
   await getOwnStation(user, stationId);
   const before = await getFor(user, stationId);
-  await UserModel.sequelize!.transaction(async (transaction) => {
+  await db.transaction(async (transaction) => {
     await repo.remove(stationId, transaction);
     await audit.record(
       {
@@ -113,11 +118,11 @@ export async function remove(user: SessionUser, stationId: number) {
   });
 }
 
-export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number) {
+export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number): Promise<StationPlan> {
   const station = await getStation(user, stationId);
   const schedule = await repo.findByStation(stationId);
   if (!schedule) throw new AppError('not-found', `Station ${stationId} has no schedule yet`);
-  const unit = await unitOf(station.unitId);
+  const unit = await unitById(station.unitId);
   const result = planFor(station, unit, schedule, fromMs, toMs);
   return {
     stationId,

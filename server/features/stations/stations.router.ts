@@ -16,17 +16,17 @@ export function stationsRouter({ sequelize }: { sequelize: Sequelize }) {
   });
   router.post('/', async (req, res) => {
     const input = stationInput.parse(req.body) as Required<ReturnType<typeof stationInput.parse>>;
-    res.status(201).json(await stations.create(currentUser(req), input));
+    res.status(201).json(await stations.create(sequelize, currentUser(req), input));
   });
   router.get('/:id', async (req, res) => {
     res.json(await stations.getFor(currentUser(req), id(req.params.id)));
   });
   router.patch('/:id', async (req, res) => {
     const patch = stationPatch.parse(req.body);
-    res.json(await stations.update(currentUser(req), id(req.params.id), patch));
+    res.json(await stations.update(sequelize, currentUser(req), id(req.params.id), patch));
   });
   router.delete('/:id', async (req, res) => {
-    await stations.remove(currentUser(req), id(req.params.id));
+    await stations.remove(sequelize, currentUser(req), id(req.params.id));
     res.status(204).end();
   });
 

@@ -1,19 +1,26 @@
-import type { Sequelize } from 'sequelize';
+import type { CalibrationProposal, StationConfig } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
 import { bandFor, type BandId } from '@/shared/domain/bands';
 import { predictOffsets } from '@/shared/domain/calibration';
 import { buildStationConfig, filterCoverage } from '@/shared/domain/workshop';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput, StationInput, StationPatch, Unit } from '@/shared/schemas';
-import { inTransaction } from '../../db/transaction';
+import type { Transaction, TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
-import { adminSharesClubWith } from '../clubs/clubs.repo';
-import * as unitsRepo from '../units/units.repo';
+import { adminSharesClubWith } from '../clubs/access';
+import { unitById } from '../units/units.service';
 import * as repo from './stations.repo';
 
 const notFound = (id: number) => new AppError('not-found', `Station ${id} does not exist`);
 
 export const listFor = (user: SessionUser) => repo.findByOwner(user.id);
+
+// For other features, which decide themselves who may see what they read.
+export const stationById = (id: number, transaction?: Transaction) => repo.findById(id, transaction);
+export const stationsOfOwners = (ownerIds: number[]) => repo.findByOwners(ownerIds);
+export const setSuspension = repo.setSuspension;
+export const setAudioOffset = (id: number, audioOffsetHz: number, transaction: Transaction) =>
+  repo.update(id, { audioOffsetHz }, transaction);
 
 /** Owners read their stations; a club admin reads the stations of the club's members. */
 export async function getFor(user: SessionUser, id: number): Promise<Station> {
@@ -36,7 +43,7 @@ export async function getOwnedBy(user: SessionUser, id: number) {
 
 async function ownUnit(user: SessionUser, unitId: number | null | undefined): Promise<Unit | null> {
   if (unitId === null || unitId === undefined) return null;
-  const unit = await unitsRepo.findById(unitId);
+  const unit = await unitById(unitId);
   if (!unit || unit.ownerId !== user.id) {
     throw new AppError('bad-request', `Unit ${unitId} is not one of your units`, { unitId: 'Choose one of your own units' });
   }
@@ -54,9 +61,9 @@ const settingsOf = (s: Station) => ({
   notes: s.notes,
 });
 
-export async function create(user: SessionUser, input: Required<StationInput>) {
+export async function create(db: TransactionRunner, user: SessionUser, input: Required<StationInput>) {
   await ownUnit(user, input.unitId);
-  return inTransaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     const station = await repo.insert(user.id, input as repo.StationValues, transaction);
     await audit.record(
       {
@@ -74,10 +81,10 @@ export async function create(user: SessionUser, input: Required<StationInput>) {
   });
 }
 
-export async function update(user: SessionUser, id: number, patch: StationPatch) {
+export async function update(db: TransactionRunner, user: SessionUser, id: number, patch: StationPatch) {
   const before = await getOwnedBy(user, id);
   if (patch.unitId !== undefined) await ownUnit(user, patch.unitId);
-  return inTransaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     const after = await repo.update(id, patch, transaction);
     await audit.record(
       {
@@ -96,9 +103,9 @@ export async function update(user: SessionUser, id: number, patch: StationPatch)
   });
 }
 
-export async function remove(user: SessionUser, id: number) {
+export async function remove(db: TransactionRunner, user: SessionUser, id: number) {
   const before = await getOwnedBy(user, id);
-  await inTransaction(async (transaction) => {
+  await db.transaction(async (transaction) => {
     await repo.remove(id, transaction);
     await audit.record(
       {
@@ -115,10 +122,6 @@ export async function remove(user: SessionUser, id: number) {
   });
 }
 
-async function unitOf(station: Station) {
-  return station.unitId === null ? null : unitsRepo.findById(station.unitId);
-}
-
 function bandOrRefuse(bandId: BandId, station: Station) {
   const found = bandFor(bandId, station.region);
   if (!found.ok) throw new AppError('bad-request', found.reason, { bandId: found.reason });
@@ -126,11 +129,11 @@ function bandOrRefuse(bandId: BandId, station: Station) {
 }
 
 /** Enables or disables a band; a band no installed filter covers cannot be enabled. */
-export async function setBand(sequelize: Sequelize, user: SessionUser, id: number, bandId: BandId, input: StationBandInput) {
+export async function setBand(db: TransactionRunner, user: SessionUser, id: number, bandId: BandId, input: StationBandInput) {
   const station = await getOwnedBy(user, id);
   const band = bandOrRefuse(bandId, station);
   if (input.enabled) {
-    const unit = await unitOf(station);
+    const unit = await unitById(station.unitId);
     if (!unit) {
       throw new AppError('bad-request', `Assign a unit to this station before enabling ${band.name}`, {
         enabled: 'Assign a unit first: its filters decide which bands may transmit',
@@ -140,7 +143,7 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
     if (!coverage.covered) throw new AppError('bad-request', coverage.reason, { enabled: coverage.reason });
   }
   const beforeBand = station.bands.find((b) => b.bandId === bandId) ?? null;
-  await sequelize.transaction(async (transaction) => {
+  await db.transaction(async (transaction) => {
     const values: Parameters<typeof repo.upsertBand>[2] = { enabled: input.enabled };
     if (input.calibrationOffsetHz !== undefined) {
       values.calibrationOffsetHz = input.calibrationOffsetHz;
@@ -166,11 +169,11 @@ export async function setBand(sequelize: Sequelize, user: SessionUser, id: numbe
 }
 
 /** Saves typed offsets, or the accepted proposals of a guided measurement, in one transaction. */
-export async function saveCalibration(sequelize: Sequelize, user: SessionUser, id: number, input: CalibrationInput) {
+export async function saveCalibration(db: TransactionRunner, user: SessionUser, id: number, input: CalibrationInput) {
   const station = await getOwnedBy(user, id);
   for (const offset of input.offsets) bandOrRefuse(offset.bandId, station);
   const now = new Date();
-  await sequelize.transaction(async (transaction) => {
+  await db.transaction(async (transaction) => {
     for (const offset of input.offsets) {
       await repo.upsertBand(
         id,
@@ -200,7 +203,7 @@ export async function saveCalibration(sequelize: Sequelize, user: SessionUser, i
 }
 
 /** From one measurement, the reference error and a proposed offset for every enabled band (nothing is saved). */
-export async function proposeCalibration(user: SessionUser, id: number, input: MeasurementInput) {
+export async function proposeCalibration(user: SessionUser, id: number, input: MeasurementInput): Promise<CalibrationProposal> {
   const station = await getOwnedBy(user, id);
   bandOrRefuse(input.bandId, station);
   const targets = station.bands
@@ -228,7 +231,7 @@ export async function proposeCalibration(user: SessionUser, id: number, input: M
   };
 }
 
-export async function configFor(user: SessionUser, id: number, now = new Date()) {
+export async function configFor(user: SessionUser, id: number, now = new Date()): Promise<StationConfig> {
   const station = await getFor(user, id);
-  return buildStationConfig({ ...station, suspended: station.suspension !== null }, await unitOf(station), now);
+  return buildStationConfig({ ...station, suspended: station.suspension !== null }, await unitById(station.unitId), now);
 }

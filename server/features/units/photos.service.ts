@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { SessionUser } from '@/shared/api/contracts';
-import { inTransaction } from '../../db/transaction';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import type { Logger } from '../../lib/logger';
@@ -31,7 +31,7 @@ async function process(buffer: Buffer) {
   return { main, thumb, contentType: `image/${format}`, extension: EXTENSIONS[format] };
 }
 
-export async function addPhoto(storage: FileStorage, user: SessionUser, unitId: number, buffer: Buffer) {
+export async function addPhoto(db: TransactionRunner, storage: FileStorage, user: SessionUser, unitId: number, buffer: Buffer) {
   const unit = await getOwnedBy(user, unitId);
   const { main, thumb, contentType, extension } = await process(buffer);
   const name = randomUUID();
@@ -39,7 +39,7 @@ export async function addPhoto(storage: FileStorage, user: SessionUser, unitId: 
   const thumbKey = `units/${unitId}/${name}-thumb.webp`;
   await storage.put(storageKey, main, contentType);
   await storage.put(thumbKey, thumb, 'image/webp');
-  return inTransaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     const photo = await repo.insertPhoto({ unitId, storageKey, thumbKey, contentType, bytes: main.length }, transaction);
     await audit.record(
       {
@@ -65,12 +65,12 @@ export async function readPhoto(storage: FileStorage, user: SessionUser, unitId:
   return stored;
 }
 
-export async function deletePhoto(storage: FileStorage, user: SessionUser, unitId: number, photoId: number) {
+export async function deletePhoto(db: TransactionRunner, storage: FileStorage, user: SessionUser, unitId: number, photoId: number) {
   const unit = await getOwnedBy(user, unitId);
   const photo = await repo.findPhoto(unitId, photoId);
   if (!photo) throw new AppError('not-found', `Photo ${photoId} does not exist`);
-  await inTransaction(async (transaction) => {
-    await photo.destroy({ transaction });
+  await db.transaction(async (transaction) => {
+    await repo.removePhoto(photo.id, transaction);
     await audit.record(
       {
         actor: user,

@@ -82,3 +82,6 @@ export async function insertPhoto(
 
 export const findPhoto = (unitId: number, photoId: number) => UnitPhotoModel.findOne({ where: { id: photoId, unitId } });
 export const photosOf = (unitId: number) => UnitPhotoModel.findAll({ where: { unitId } });
+export async function removePhoto(id: number, transaction?: Transaction) {
+  await UnitPhotoModel.destroy({ where: { id }, transaction });
+}

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import multer from 'multer';
+import type { Sequelize } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import type { Logger } from '../../lib/logger';
@@ -24,7 +25,7 @@ const upload = multer({
 
 const MB = PHOTO_MAX_BYTES / 1024 / 1024;
 
-export function unitsRouter({ storage, logger }: { storage: FileStorage; logger: Logger }) {
+export function unitsRouter({ sequelize, storage, logger }: { sequelize: Sequelize; storage: FileStorage; logger: Logger }) {
   const router = Router();
   router.use(requireSignedIn);
   const id = (value: unknown) => parseId(value, 'Unit');
@@ -33,21 +34,21 @@ export function unitsRouter({ storage, logger }: { storage: FileStorage; logger:
     res.json(await units.listFor(currentUser(req)));
   });
   router.post('/', async (req, res) => {
-    res.status(201).json(await units.create(currentUser(req), unitInput.parse(req.body)));
+    res.status(201).json(await units.create(sequelize, currentUser(req), unitInput.parse(req.body)));
   });
   router.get('/:id', async (req, res) => {
     res.json(await units.getFor(currentUser(req), id(req.params.id)));
   });
   router.patch('/:id', async (req, res) => {
-    res.json(await units.update(currentUser(req), id(req.params.id), unitPatch.parse(req.body)));
+    res.json(await units.update(sequelize, currentUser(req), id(req.params.id), unitPatch.parse(req.body)));
   });
   router.delete('/:id', async (req, res) => {
-    const removed = await units.remove(currentUser(req), id(req.params.id));
+    const removed = await units.remove(sequelize, currentUser(req), id(req.params.id));
     res.status(204).end();
     void photos.removeStored(storage, removed, logger);
   });
   router.post('/:id/copy', async (req, res) => {
-    res.status(201).json(await units.copy(currentUser(req), id(req.params.id)));
+    res.status(201).json(await units.copy(sequelize, currentUser(req), id(req.params.id)));
   });
 
   router.post('/:id/photos', (req, res, next) => {
@@ -60,7 +61,7 @@ export function unitsRouter({ storage, logger }: { storage: FileStorage; logger:
         }
         if (error) throw error;
         if (!req.file) throw new AppError('bad-request', 'No photo was sent', { photo: 'Choose a photo to upload' });
-        res.status(201).json(await photos.addPhoto(storage, currentUser(req), id(req.params.id), req.file.buffer));
+        res.status(201).json(await photos.addPhoto(sequelize, storage, currentUser(req), id(req.params.id), req.file.buffer));
       } catch (failure) {
         next(failure);
       }
@@ -74,7 +75,7 @@ export function unitsRouter({ storage, logger }: { storage: FileStorage; logger:
     });
   }
   router.delete('/:id/photos/:photoId', async (req, res) => {
-    await photos.deletePhoto(storage, currentUser(req), id(req.params.id), parseId(req.params.photoId, 'Photo'));
+    await photos.deletePhoto(sequelize, storage, currentUser(req), id(req.params.id), parseId(req.params.photoId, 'Photo'));
     res.status(204).end();
   });
   return router;

@@ -1,14 +1,17 @@
 import type { SessionUser } from '@/shared/api/contracts';
 import { unitInput, type Unit, type UnitValues } from '@/shared/schemas';
-import { inTransaction } from '../../db/transaction';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
-import { adminSharesClubWith } from '../clubs/clubs.repo';
+import { adminSharesClubWith } from '../clubs/access';
 import * as repo from './units.repo';
 
 const notFound = (id: number) => new AppError('not-found', `Unit ${id} does not exist`);
 
 export const listFor = (user: SessionUser) => repo.findByOwner(user.id);
+
+/** For other features (a station's unit), which decide themselves who may see it. */
+export const unitById = (id: number | null) => (id === null ? Promise.resolve(null) : repo.findById(id));
 
 /** Owners read their units; a club admin reads the units of the club's members. */
 export async function getFor(user: SessionUser, id: number): Promise<Unit> {
@@ -26,8 +29,8 @@ export async function getOwnedBy(user: SessionUser, id: number): Promise<Unit> {
 
 const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...values }: Unit) => values;
 
-export function create(user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
-  return inTransaction(async (transaction) => {
+export function create(db: TransactionRunner, user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
+  return db.transaction(async (transaction) => {
     const unit = await repo.insert(user.id, values, transaction);
     await audit.record(
       { actor: user, ownerId: user.id, action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values },
@@ -37,10 +40,10 @@ export function create(user: SessionUser, values: UnitValues, summary = `Registe
   });
 }
 
-export async function update(user: SessionUser, id: number, patch: Partial<UnitValues>) {
+export async function update(db: TransactionRunner, user: SessionUser, id: number, patch: Partial<UnitValues>) {
   const before = specOf(await getOwnedBy(user, id));
   const values = unitInput.parse({ ...before, ...patch });
-  return inTransaction(async (transaction) => {
+  return db.transaction(async (transaction) => {
     const unit = await repo.update(id, values, transaction);
     await audit.record(
       {
@@ -60,15 +63,15 @@ export async function update(user: SessionUser, id: number, patch: Partial<UnitV
 }
 
 /** A new unit with the same hardware (photos stay with the original). */
-export async function copy(user: SessionUser, id: number) {
+export async function copy(db: TransactionRunner, user: SessionUser, id: number) {
   const values = specOf(await getFor(user, id));
-  return create(user, { ...values, name: `${values.name} (copy)`.slice(0, 80), serialLabel: '' }, `Copied unit ${values.name}`);
+  return create(db, user, { ...values, name: `${values.name} (copy)`.slice(0, 80), serialLabel: '' }, `Copied unit ${values.name}`);
 }
 
-export async function remove(user: SessionUser, id: number) {
+export async function remove(db: TransactionRunner, user: SessionUser, id: number) {
   const unit = await getOwnedBy(user, id);
   const photos = await repo.photosOf(id);
-  await inTransaction(async (transaction) => {
+  await db.transaction(async (transaction) => {
     await repo.remove(id, transaction);
     await audit.record(
       {

@@ -304,7 +304,7 @@ export function proposeFleetOffsets(stations: readonly FleetStation[], options: 
   const guardHz = guard - GUARD_TOLERANCE_HZ;
   const range = options.range ?? allowedOffsetRange();
   const flat = flatten(stations);
-  const { order, bucketStart, station, bucket, stationStart, audio } = flat;
+  const { order, bucketStart, station, stationStart, audio } = flat;
   const degree = new Float64Array(stations.length);
   sweep(flat, flat.carrier, guard, (t, u) => {
     degree[station[t]]++;

@@ -2,4 +2,5 @@ export * from './coverage';
 export * from './spurious';
 export * from './on-air';
 export * from './station-config';
+export * from './device-config';
 export * from './compliance';

@@ -20,8 +20,13 @@ export type ConfigUnit = UnitHardware & { id: number; name: string };
 
 const round = (value: number, digits = 3) => Number(value.toFixed(digits));
 
-export function buildStationConfig(station: ConfigStation, unit: ConfigUnit | null, generatedAt: Date) {
-  const messages = stationMessages(station, unit);
+/** `messages`: the station's messages when already encoded (the device configuration encodes them once). */
+export function buildStationConfig(
+  station: ConfigStation,
+  unit: ConfigUnit | null,
+  generatedAt: Date,
+  messages: ReturnType<typeof stationMessages> = stationMessages(station, unit),
+) {
   const power = unit ? stationPower(unit) : null;
   const bands = unit
     ? station.bands.flatMap((setting) => {

@@ -1,33 +1,28 @@
-import { Op } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import { bandFor } from '@/shared/domain/bands';
 import { thermalDriftHz } from '@/shared/domain/calibration';
 import type { Alert, AlertSettings, Station, StationHealth, Unit } from '@/shared/schemas';
-import { AlertModel, AlertSettingsModel, DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
-import { requireAdmin } from '../clubs/access';
-import { memberIdsOf } from '../clubs/clubs.repo';
+import { memberIdsOf, requireAdmin } from '../clubs/access';
 import { planFor } from '../schedules/plan';
-import * as schedulesRepo from '../schedules/schedules.repo';
-import { findByOwners } from '../stations/stations.repo';
-import { getFor as getStation } from '../stations/stations.service';
-import * as unitsRepo from '../units/units.repo';
+import { planInputsOf } from '../schedules/schedules.service';
+import { getFor as getStation, stationsOfOwners } from '../stations/stations.service';
+import * as alerts from './alerts.repo';
+import * as heartbeats from './heartbeats.repo';
 import { hasToken } from './tokens.service';
+import * as transmissions from './transmissions.repo';
 
-/** A device counts as online while its last heartbeat is this recent (DEVICE_OFFLINE_AFTER_S). */
-let onlineWithinMs = 5 * 60_000;
-export function setOfflineAfter(seconds: number) {
-  onlineWithinMs = seconds * 1000;
-}
+/** How a status is read: a device counts as online while its last heartbeat is at most `offlineAfterS` old. */
+export type StatusOptions = { offlineAfterS: number; nowMs?: number };
 /** The temperature a calibration is assumed to be made at (common practice, no source). */
 export const REFERENCE_TEMP_C = 20;
 export const DEFAULT_SETTINGS: AlertSettings = { silentMinutes: 30, clockOffsetMs: 1000 };
 
 export async function settingsOf(stationId: number): Promise<AlertSettings> {
-  const row = await AlertSettingsModel.findByPk(stationId);
+  const row = await alerts.findSettings(stationId);
   return row ? { silentMinutes: row.silentMinutes, clockOffsetMs: row.clockOffsetMs } : DEFAULT_SETTINGS;
 }
 
-export const toAlert = (row: AlertModel): Alert => ({
+export const toAlert = (row: alerts.AlertRow): Alert => ({
   id: row.id,
   stationId: row.stationId,
   rule: row.rule as Alert['rule'],
@@ -50,23 +45,15 @@ export function driftFor(station: Station, unit: Unit | null, temperatureC: numb
   return Math.max(...carriers.map((f) => Math.abs(thermalDriftHz(f, unit.tempCoPpmPerC!, temperatureC - REFERENCE_TEMP_C))));
 }
 
-async function healthOf(station: Station, nowMs: number): Promise<StationHealth> {
+async function statusOf(station: Station, { offlineAfterS, nowMs = Date.now() }: StatusOptions): Promise<StationHealth> {
   const since = new Date(nowMs - 86_400_000);
-  const [beats, sent, alerts, settings, device, unit, schedule] = await Promise.all([
-    HeartbeatModel.findAll({ where: { stationId: station.id, receivedAt: { [Op.gte]: since } }, order: [['receivedAt', 'ASC']] }),
-    DeviceTransmissionModel.findAll({
-      where: { stationId: station.id, startedAt: { [Op.gte]: since } },
-      order: [['startedAt', 'DESC']],
-      limit: 20,
-    }),
-    AlertModel.findAll({
-      where: { stationId: station.id, [Op.or]: [{ resolvedAt: null }, { resolvedAt: { [Op.gte]: since } }] },
-      order: [['openedAt', 'DESC']],
-    }),
+  const [beats, sent, recentAlerts, settings, device, { unit, schedule }] = await Promise.all([
+    heartbeats.findSince(station.id, since),
+    transmissions.findRecent(station.id, since, 20),
+    alerts.findRecent(station.id, since),
     settingsOf(station.id),
     hasToken(station.id),
-    station.unitId === null ? null : unitsRepo.findById(station.unitId),
-    schedulesRepo.findByStation(station.id),
+    planInputsOf(station),
   ]);
   const last = beats.at(-1) ?? null;
   const report = last ? (JSON.parse(last.report) as { supplyV?: number | null; firmwareVersion?: string }) : null;
@@ -88,7 +75,7 @@ async function healthOf(station: Station, nowMs: number): Promise<StationHealth>
     stationName: station.name,
     callsign: station.callsign,
     hasDevice: device,
-    online: age !== null && age <= onlineWithinMs,
+    online: age !== null && age <= offlineAfterS * 1000,
     lastHeartbeatAt: last?.receivedAt.toISOString() ?? null,
     heartbeatAgeS: age === null ? null : Math.round(age / 1000),
     clockOffsetMs: last?.clockOffsetMs ?? null,
@@ -102,26 +89,26 @@ async function healthOf(station: Station, nowMs: number): Promise<StationHealth>
       bandId: t.bandId,
       planned: plannedStarts.has(`${Math.floor(t.startedAt.getTime() / 1000) * 1000}|${t.bandId}`),
     })),
-    alerts: alerts.map(toAlert),
+    alerts: recentAlerts.map(toAlert),
     settings,
   };
 }
 
-export async function forStation(user: SessionUser, stationId: number, nowMs = Date.now()) {
-  return healthOf(await getStation(user, stationId), nowMs);
+export async function forStation(user: SessionUser, stationId: number, options: StatusOptions) {
+  return statusOf(await getStation(user, stationId), options);
 }
 
-export async function forClub(user: SessionUser, clubId: number, nowMs = Date.now()) {
+async function forOwners(ownerIds: number[], options: StatusOptions) {
+  const stations = await stationsOfOwners(ownerIds);
+  const sameMoment = { ...options, nowMs: options.nowMs ?? Date.now() };
+  return Promise.all(stations.map((s) => statusOf(s, sameMoment)));
+}
+
+export async function forClub(user: SessionUser, clubId: number, options: StatusOptions) {
   await requireAdmin(user, clubId);
-  const stations = await findByOwners(await memberIdsOf(clubId));
-  return Promise.all(stations.map((s) => healthOf(s, nowMs)));
+  return forOwners(await memberIdsOf(clubId), options);
 }
 
-export async function forOwner(user: SessionUser, nowMs = Date.now()) {
-  const stations = await findByOwners([user.id]);
-  return Promise.all(stations.map((s) => healthOf(s, nowMs)));
-}
+export const forOwner = (user: SessionUser, options: StatusOptions) => forOwners([user.id], options);
 
-export async function saveSettings(stationId: number, settings: AlertSettings) {
-  await AlertSettingsModel.upsert({ stationId, ...settings });
-}
+export const saveSettings = alerts.saveSettings;

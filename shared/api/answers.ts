@@ -1,0 +1,104 @@
+/**
+ * What each API route answers, one type per answer, imported by the server (which builds it) and
+ * the client (which reads it). Entities that are also inputs live in shared/schemas and are
+ * re-exported here, so this file is the one list of answers.
+ */
+import type { BandId } from '../domain/bands';
+import type { FleetConflict, FleetProposal, PlanResult, ScheduleIssue } from '../domain/schedule';
+import type { DeviceConfig, StationConfig } from '../domain/workshop';
+import type {
+  AlertSettings,
+  ClubDetail,
+  Invitation,
+  OffsetProposal,
+  ReviewRow,
+  Schedule,
+  Station,
+  StationHealth,
+  Unit,
+  UnitPhoto,
+} from '../schemas';
+import type { ClubMembership, Health, SessionUser } from './contracts';
+
+export type {
+  AlertSettings,
+  ClubDetail,
+  ClubMembership,
+  DeviceConfig,
+  Health,
+  Invitation,
+  OffsetProposal,
+  ReviewRow,
+  Schedule,
+  SessionUser,
+  Station,
+  StationConfig,
+  StationHealth,
+  Unit,
+  UnitPhoto,
+};
+
+/** POST /api/auth/password-reset and …/confirm: a sentence to show. */
+export type MessageAnswer = { message: string };
+
+/** GET /api/audit and GET /api/clubs/:clubId/audit (newest first; CSV with ?format=csv). */
+export type AuditEntry = {
+  id: number;
+  atUtc: string;
+  actorName: string;
+  ownerId: number | null;
+  clubId: number | null;
+  action: string;
+  entityType: string;
+  entityId: number | null;
+  summary: string;
+  before: unknown;
+  after: unknown;
+};
+
+/** GET /api/notifications */
+export type Notice = { id: number; kind: string; message: string; link: string | null; readAt: string | null; createdAt: string };
+
+/** POST /api/invitations/accept */
+export type AcceptedInvitation = { clubId: number };
+
+/** POST /api/clubs/:clubId/stations/:stationId/suspension */
+export type SuspensionAnswer = { suspended: true; reason: string };
+
+/** GET /api/clubs/:clubId/conflicts: club stations that meet in the same slots over the next 24 hours. */
+export type ConflictStation = { name: string; owner: string; callsign: string };
+export type ClubConflict = FleetConflict & { aStation?: ConflictStation; bStation?: ConflictStation };
+export type ConflictProposal = FleetProposal['proposals'][number] & { stationName: string };
+export type ClubConflicts = {
+  fromUtc: string;
+  conflicts: ClubConflict[];
+  proposals: ConflictProposal[];
+  unresolved: FleetProposal['unresolved'];
+};
+
+/** GET /api/clubs/:clubId/occupancy: transmissions per band per UTC hour, and each band's duty. */
+export type OccupancyCell = { bandId: string; hourIndex: number; hourUtc: string; transmissions: number };
+export type BandDuty = { bandId: string; transmissions: number; minutesOnAir: number; dutyPercent: number };
+export type ClubOccupancy = { fromUtc: string; hoursUtc: string[]; cells: OccupancyCell[]; bands: BandDuty[] };
+
+/** POST /api/stations/:id/calibration/proposal: what one guided measurement suggests (nothing is saved). */
+export type CalibrationProposal = {
+  referenceErrorPpm: number;
+  errorHz: number;
+  offsets: { bandId: BandId; frequencyHz: number; calibrationOffsetHz: number }[];
+};
+
+/** GET /api/stations/:id/plan: the shared expansion plus the editor checks. */
+export type StationPlan = PlanResult & {
+  stationId: number;
+  fromUtc: string;
+  toUtc: string;
+  suspended: boolean;
+  issues: ScheduleIssue[];
+};
+
+/** POST /api/stations/:id/device-token: shown once, only its hash is kept. */
+export type DeviceTokenAnswer = { token: string };
+
+/** POST /api/device/v1/heartbeat (true) and …/transmissions (how many were stored). */
+export type StoredAnswer = { stored: true | number };
