@@ -23,7 +23,7 @@ import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
-import { FormSection } from '@/components/workshop/form-section';
+import { FormSection } from '@/components/form/form-section';
 import { ApiError } from '@/shared/api/client';
 import { PHOTO_MAX_BYTES, PHOTO_TYPES, type UnitPhoto } from '@/shared/schemas';
 
