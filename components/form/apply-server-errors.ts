@@ -51,3 +51,17 @@ function hasPath(values: Record<string, unknown>, path: string): boolean {
   }
   return true;
 }
+
+/** A form's submit handler that sends the valid values and, when the server refuses, puts its messages in place. */
+export function submitWithServerErrors<TFields extends FieldValues, TValues>(
+  form: UseFormReturn<TFields, unknown, TValues>,
+  send: (values: TValues) => Promise<unknown>,
+) {
+  return form.handleSubmit(async (values) => {
+    try {
+      await send(values);
+    } catch (error) {
+      applyServerErrors(form, error);
+    }
+  });
+}

@@ -1,5 +1,6 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 
+import { FieldMessage } from './field-message';
 import { Text } from './text';
 import { radius, space } from './theme';
 import { useAppTheme } from './theme-provider';
@@ -146,15 +147,7 @@ function Chips<T extends string | number>({
           );
         })}
       </View>
-      {error ? (
-        <Text variant="caption" tone="danger" accessibilityRole="alert">
-          {error}
-        </Text>
-      ) : hint ? (
-        <Text variant="caption" tone="muted">
-          {hint}
-        </Text>
-      ) : null}
+      <FieldMessage error={error} hint={hint} />
     </View>
   );
 }

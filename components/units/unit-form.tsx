@@ -17,7 +17,7 @@ import {
   type UnitValues,
 } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { SafetyCard } from '../overview/safety-card';
 import { Button } from '../ui/button';
@@ -91,13 +91,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
   const filters = useFieldArray({ control, name: 'filters' });
   const disciplined = useWatch({ control, name: 'disciplined' });
   const amplifier = useWatch({ control, name: 'amplifier' });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   const invalidCount = Object.keys(form.formState.errors).filter((key) => key !== 'root').length;
 
