@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 
 import { resetRequestInput, type ResetRequestInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -19,13 +19,7 @@ export function ForgotPasswordForm({ onSubmit, sentMessage }: ForgotPasswordForm
     resolver: zodResolver(resetRequestInput),
     defaultValues: { email: '' },
   });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   return (
     <>

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 
 import { registerInput, type RegisterInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -18,13 +18,7 @@ export function RegisterForm({ onSubmit }: RegisterFormProps) {
     resolver: zodResolver(registerInput),
     defaultValues: { email: '', displayName: '', callsign: '', password: '' },
   });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   return (
     <>

@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 
 import { resetConfirmInput, type ResetConfirmInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -18,13 +18,7 @@ export function ResetPasswordForm({ token, onSubmit }: ResetPasswordFormProps) {
     resolver: zodResolver(resetConfirmInput),
     defaultValues: { token, password: '' },
   });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onSubmit);
   // a token problem is not something the operator can fix in a field: show it at the top
   const message = serverMessage(form.formState.errors) ?? form.formState.errors.token?.message;
   return (

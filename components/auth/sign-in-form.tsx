@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 
 import { signInInput, type SignInInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -15,13 +15,8 @@ export function SignInForm({ onSubmit }: SignInFormProps) {
     resolver: zodResolver(signInInput),
     defaultValues: { email: '', password: '' },
   });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values); // the session cache updates, and the guard shows the signed-in screens
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  // the session cache updates, and the guard shows the signed-in screens
+  const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   return (
     <>

@@ -5,11 +5,6 @@ export function bandLabel(bandId: string): string {
   return bandId.replace(/^(\d+)(c?m)$/, '$1 $2');
 }
 
-/** An audio offset in Hz with one decimal at most. */
-export function formatHz(hz: number): string {
-  return `${Number.isInteger(hz) ? hz : hz.toFixed(1)} Hz`;
-}
-
 export type ReviewStatus = ReviewRow['status'];
 
 export const statusWords: Record<ReviewStatus, { short: string; filter: string }> = {

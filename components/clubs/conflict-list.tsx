@@ -6,7 +6,8 @@ import { EmptyState } from '../ui/query-states';
 import { Text } from '../ui/text';
 import { formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
-import { bandLabel, formatHz } from './club-words';
+import { formatOffsetHz } from '../ui/format';
+import { bandLabel } from './club-words';
 import type { ClubConflicts, ConflictProposal } from './queries';
 
 export type ProposalSendState = { status: 'sending' | 'sent' } | { status: 'failed'; message: string };
@@ -77,7 +78,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
             <Card key={proposal.stationId} style={styles.card}>
               <Text variant="label">{proposal.stationName}</Text>
               <Text variant="mono">
-                {formatHz(proposal.currentOffsetHz)} → {formatHz(proposal.proposedOffsetHz)}
+                {formatOffsetHz(proposal.currentOffsetHz)} → {formatOffsetHz(proposal.proposedOffsetHz)}
               </Text>
               {state?.status === 'sent' ? (
                 <Text variant="label" tone="primary" accessibilityLiveRegion="polite">
@@ -87,7 +88,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
                 <View style={styles.actions}>
                   <Button
                     label="Propose to owner"
-                    accessibilityLabel={`Propose ${formatHz(proposal.proposedOffsetHz)} to the owner of ${proposal.stationName}`}
+                    accessibilityLabel={`Propose ${formatOffsetHz(proposal.proposedOffsetHz)} to the owner of ${proposal.stationName}`}
                     busy={state?.status === 'sending'}
                     onPress={() => onPropose(proposal)}
                     style={styles.button}

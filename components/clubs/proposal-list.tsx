@@ -5,9 +5,8 @@ import type { OffsetProposal } from '@/shared/schemas';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { formatUtcDateTime } from '../ui/format';
+import { formatOffsetHz, formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
-import { formatHz } from './club-words';
 
 export type ProposalListProps = {
   proposals: OffsetProposal[];
@@ -36,7 +35,7 @@ export function ProposalList({ proposals, busy, error, onDecide }: ProposalListP
             From {proposal.clubName} · {formatUtcDateTime(proposal.createdAt)}
           </Text>
           <Text variant="monoLarge">
-            {formatHz(proposal.currentOffsetHz)} → {formatHz(proposal.proposedOffsetHz)}
+            {formatOffsetHz(proposal.currentOffsetHz)} → {formatOffsetHz(proposal.proposedOffsetHz)}
           </Text>
           <Text>{proposal.reason}</Text>
           {error?.id === proposal.id ? (
@@ -47,7 +46,7 @@ export function ProposalList({ proposals, busy, error, onDecide }: ProposalListP
           <View style={styles.actions}>
             <Button
               label="Accept"
-              accessibilityLabel={`Accept ${formatHz(proposal.proposedOffsetHz)} for ${proposal.stationName}`}
+              accessibilityLabel={`Accept ${formatOffsetHz(proposal.proposedOffsetHz)} for ${proposal.stationName}`}
               busy={busy?.id === proposal.id && busy.decision === 'accept'}
               disabled={busy?.id === proposal.id}
               onPress={() => onDecide(proposal, 'accept')}
@@ -72,7 +71,7 @@ export function ProposalList({ proposals, busy, error, onDecide }: ProposalListP
             <Card key={proposal.id} style={styles.card}>
               <Text variant="label">{proposal.stationName}</Text>
               <Text variant="mono" tone="muted">
-                {formatHz(proposal.currentOffsetHz)} → {formatHz(proposal.proposedOffsetHz)}
+                {formatOffsetHz(proposal.currentOffsetHz)} → {formatOffsetHz(proposal.proposedOffsetHz)}
               </Text>
               <Text variant="caption" tone={proposal.status === 'accepted' ? 'primary' : 'muted'}>
                 {outcome[proposal.status as keyof typeof outcome]}

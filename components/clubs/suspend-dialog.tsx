@@ -6,7 +6,7 @@ import type { z } from 'zod';
 
 import { suspensionInput } from '@/shared/schemas';
 
-import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -39,13 +39,7 @@ export function SuspendDialog({ station, onConfirm, onCancel }: SuspendDialogPro
     return () => document.removeEventListener('keydown', onKey);
   }, [station, busy, onCancel]);
   if (!station) return null;
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onConfirm(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onConfirm);
   const rootError = serverMessage(form.formState.errors);
   const title = `Suspend ${station.name}?`;
   return (

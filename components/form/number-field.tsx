@@ -1,59 +1,61 @@
 import { useEffect, useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
-import type { StyleProp, ViewStyle } from 'react-native';
 
-import { TextField } from '../ui/text-field';
+import { TextField, type TextFieldProps } from '../ui/text-field';
+import { parseNumberText } from './number-text';
 
-export type NumberFieldProps<T extends FieldValues> = {
+export type NumberFieldProps<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'error'> & {
   control: Control<T>;
   name: Path<T>;
-  label: string;
-  hint?: string;
-  /** A message from outside the form (the server or the live checks). */
+  /** The field shows value ÷ scale: 1e6 lets the operator type MHz for a value kept in Hz. */
+  scale?: number;
+  /** A message from outside the form (the live checks); the field's own error wins. */
   error?: string;
-  style?: StyleProp<ViewStyle>;
-  /** `numeric` for whole numbers (the keyboard), `decimal` otherwise */
-  inputMode?: 'numeric' | 'decimal';
 };
 
-const parse = (text: string) => (text.trim() === '' ? Number.NaN : Number(text.trim().replace(',', '.')));
-const show = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? String(value) : '');
+const round = (value: number) => Math.round(value * 1000) / 1000;
 
-/** A number input bound to react-hook-form: text in, a number (NaN while not one) out, so the schema stays z.number(). */
-export function NumberField<T extends FieldValues>({
-  control,
-  name,
-  label,
-  hint,
-  error,
-  style,
-  inputMode = 'decimal',
-}: NumberFieldProps<T>) {
+function toText(value: unknown, scale: number): string {
+  return typeof value === 'number' && Number.isFinite(value) ? String(Number((value / scale).toPrecision(12))) : '';
+}
+
+function toValue(text: string, scale: number): number | undefined {
+  const parsed = parseNumberText(text);
+  return parsed === undefined ? undefined : Number.isNaN(parsed) ? Number.NaN : round(parsed * scale);
+}
+
+/**
+ * The one react-hook-form binding for numbers: the operator types text, the form holds a number —
+ * undefined when the field is empty, NaN when the text is not a number — so the shared schemas stay
+ * `z.number()`. Pass `numberFieldErrors` to zodResolver to word those two cases.
+ */
+export function NumberField<T extends FieldValues>({ control, name, scale = 1, error, onBlur, ...rest }: NumberFieldProps<T>) {
   const { field, fieldState } = useController({ control, name });
-  const [text, setText] = useState(() => show(field.value));
-  // follow changes made elsewhere (a preset, a reset) without fighting the operator's typing
+  const [text, setText] = useState(() => toText(field.value, scale));
+  // a reset or setValue from outside: show the new value unless the text already means it
   useEffect(() => {
-    const typed = parse(text);
+    const current = toValue(text, scale);
     const value = field.value as unknown;
-    if (typeof value === 'number' && (value === typed || (Number.isNaN(value) && Number.isNaN(typed)))) return;
-    setText(show(value));
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [field.value]);
+    if (current !== value && !(Number.isNaN(current) && Number.isNaN(value))) setText(toText(value, scale));
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- follows the form's value only; the typed text is read, not watched
+  }, [field.value, scale]);
   return (
     <TextField
       ref={field.ref}
-      label={label}
-      hint={hint}
       value={text}
+      inputMode="decimal"
       mono
-      inputMode={inputMode}
+      autoCorrect={false}
       onChangeText={(next) => {
         setText(next);
-        field.onChange(parse(next));
+        field.onChange(toValue(next, scale));
       }}
-      onBlur={field.onBlur}
+      onBlur={(event) => {
+        field.onBlur();
+        onBlur?.(event);
+      }}
       error={fieldState.error?.message ?? error}
-      style={style}
+      {...rest}
     />
   );
 }

@@ -5,12 +5,13 @@ import { StyleSheet, View } from 'react-native';
 import { alertSettingsInput, type AlertSettings } from '@/shared/schemas';
 
 import { serverMessage } from '../form/apply-server-errors';
+import { NumberField } from '../form/number-field';
+import { numberFieldErrors } from '../form/number-text';
 import { useSaveSubmit } from '../form/use-save-submit';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { NumberField } from '../form/number-field';
 
 export type AlertSettingsFormProps = {
   settings: AlertSettings;
@@ -21,7 +22,7 @@ export type AlertSettingsFormProps = {
 
 /** When the server should raise an alert for this station: how long silent, how far off the clock. */
 export function AlertSettingsForm({ settings, onSubmit, readOnly = false }: AlertSettingsFormProps) {
-  const form = useForm<AlertSettings>({ resolver: zodResolver(alertSettingsInput), defaultValues: settings });
+  const form = useForm<AlertSettings>({ resolver: zodResolver(alertSettingsInput, { error: numberFieldErrors }), defaultValues: settings });
   const { submit, saved } = useSaveSubmit(form, onSubmit);
   if (readOnly) {
     return (

@@ -7,7 +7,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { bandName, byFrequency, formatMinutes, formatPercent } from './format';
+import { bandName, byFrequency, formatMinutes, formatPercent } from './schedule-words';
 
 export type AirtimeSummaryProps = {
   /** A plan over whole UTC days: its transmissions and slot counts. */

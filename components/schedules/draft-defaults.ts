@@ -2,7 +2,7 @@ import { presetsFor } from '@/shared/domain/schedule';
 import type { Schedule, ScheduleValues, Station, Unit } from '@/shared/schemas';
 
 import { bandChoices } from './band-choices';
-import { utcDate } from './format';
+import { utcDate } from '../ui/format';
 
 /** What the editor opens with: the saved schedule, a chosen preset, or one step on the first usable band. */
 export function draftDefaults(input: {

@@ -7,7 +7,8 @@ import { Text } from '../ui/text';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { useTickingClock } from '../ui/use-ticking-clock';
-import { bandName, formatCountdown, formatMHz, formatUtcTime } from './format';
+import { formatCountdown, formatMHz, formatUtcTime } from '../ui/format';
+import { bandName } from './schedule-words';
 
 export type UpcomingTransmission = {
   startMs: number;

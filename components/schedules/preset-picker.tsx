@@ -6,7 +6,7 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { bandName, cadenceLabel, hoursLabel } from './format';
+import { bandName, cadenceLabel, hoursLabel } from './schedule-words';
 
 export type PresetOption = ReturnType<typeof presetsFor>[number];
 

@@ -2,7 +2,7 @@ import type { BandId } from '@/shared/domain';
 import { DAY_MS, expandPlan, type PlanResult, type ScheduleRules } from '@/shared/domain/schedule';
 import type { Station, Unit } from '@/shared/schemas';
 
-import { utcDate } from './format';
+import { utcDate } from '../ui/format';
 import { timelineModel, timelineWindow, type TimelineModel } from './timeline-model';
 
 /** The days a preview covers: today and tomorrow (UTC), whole days, so minutes per day are true totals. */

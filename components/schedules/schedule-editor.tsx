@@ -9,15 +9,16 @@ import { validateSchedule, type ScheduleIssue } from '@/shared/domain/schedule';
 import { scheduleInput, type ScheduleValues, type Station, type Unit } from '@/shared/schemas';
 
 import { FormTextField } from '../form/form-text-field';
+import { NumberField } from '../form/number-field';
+import { numberFieldErrors } from '../form/number-text';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
+import { ChoiceChips } from '../ui/choice-chips';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { space } from '../ui/theme';
 import { bandChoices } from './band-choices';
-import { ChipGroup } from './chip-group';
-import { NumberField } from '../form/number-field';
 import { PresetPicker, type PresetOption } from './preset-picker';
 import { previewDraft, type SchedulePreview } from './preview-model';
 import { StepCard } from './step-card';
@@ -56,7 +57,7 @@ export function ScheduleEditor({
   nowMs,
 }: ScheduleEditorProps) {
   const form = useForm<ScheduleValues>({
-    resolver: zodResolver(scheduleInput) as unknown as Resolver<ScheduleValues>,
+    resolver: zodResolver(scheduleInput, { error: numberFieldErrors }) as unknown as Resolver<ScheduleValues>,
     defaultValues,
     mode: 'onChange',
   });
@@ -253,7 +254,7 @@ function CadenceFields({ form }: { form: FormApi }) {
       <Text variant="heading" accessibilityRole="header">
         How often
       </Text>
-      <ChipGroup<ScheduleValues['cadence']['kind']>
+      <ChoiceChips<ScheduleValues['cadence']['kind']>
         label="Cadence"
         showLabel={false}
         value={value.kind}
@@ -262,12 +263,12 @@ function CadenceFields({ form }: { form: FormApi }) {
           { value: 'every-nth', label: 'Every nth slot' },
           { value: 'duty', label: 'Share of slots' },
         ]}
-        onPress={(option) => {
-          if (option.value === value.kind) return;
+        onChange={(kind) => {
+          if (kind === value.kind) return;
           cadence.field.onChange(
-            option.value === 'every-slot'
+            kind === 'every-slot'
               ? { kind: 'every-slot' }
-              : option.value === 'every-nth'
+              : kind === 'every-nth'
                 ? { kind: 'every-nth', nth: 5 }
                 : { kind: 'duty', dutyPercent: 20 },
           );

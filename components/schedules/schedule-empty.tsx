@@ -8,7 +8,7 @@ import { EmptyState } from '../ui/query-states';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
-import { utcDate } from './format';
+import { utcDate } from '../ui/format';
 import { PresetPicker } from './preset-picker';
 
 export type ScheduleEmptyProps = {

@@ -7,7 +7,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { bandName, cadenceLabel, hoursLabel } from './format';
+import { bandName, cadenceLabel, hoursLabel } from './schedule-words';
 
 export type ScheduleSummaryProps = {
   schedule: Schedule;

@@ -5,7 +5,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatUtcTime } from './format';
+import { formatUtcTime } from '../ui/format';
 import type { TimelineModel } from './timeline-model';
 
 // victory is large and only these screens draw it: keep it out of the entry bundle

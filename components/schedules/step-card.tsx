@@ -14,9 +14,9 @@ import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import type { BandChoice } from './band-choices';
-import { ChipGroup } from './chip-group';
-import { bandName, hoursLabel } from './format';
+import { bandName, hoursLabel } from './schedule-words';
 import { NumberField } from '../form/number-field';
+import { ChoiceChips } from '../ui/choice-chips';
 
 export type StepCardProps = {
   control: Control<ScheduleValues>;
@@ -98,7 +98,7 @@ export function StepCard({
         </View>
       </View>
 
-      <ChipGroup<BandId>
+      <ChoiceChips<BandId>
         label={`Band for step ${n}`}
         showLabel={false}
         value={bandId}
@@ -108,8 +108,8 @@ export function StepCard({
           unavailable: !c.usable,
           accessibilityLabel: c.usable ? `Step ${n}: ${c.name}` : `Step ${n}: ${c.name} (not available)`,
         }))}
-        onPress={(option) => {
-          const choice = choices.find((c) => c.bandId === option.value)!;
+        onChange={(picked) => {
+          const choice = choices.find((c) => c.bandId === picked)!;
           if (choice.usable) {
             setExplained(null);
             band.field.onChange(choice.bandId);
@@ -140,14 +140,14 @@ export function StepCard({
         />
       </View>
 
-      <ChipGroup<'all' | 'hours'>
+      <ChoiceChips<'all' | 'hours'>
         label={`Hours for step ${n}`}
         value={activeHours ? 'hours' : 'all'}
         options={[
           { value: 'all', label: 'All day', accessibilityLabel: `Step ${n} runs all day` },
           { value: 'hours', label: 'Only certain hours (UTC)', accessibilityLabel: `Step ${n} runs only at certain hours` },
         ]}
-        onPress={(option) => hours.field.onChange(option.value === 'all' ? null : (activeHours ?? NIGHT))}
+        onChange={(picked) => hours.field.onChange(picked === 'all' ? null : (activeHours ?? NIGHT))}
       />
       {activeHours ? (
         <View style={styles.fields}>

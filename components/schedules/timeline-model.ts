@@ -1,6 +1,6 @@
 import type { BandId } from '@/shared/domain';
 
-import { bandName, byFrequency } from './format';
+import { bandName, byFrequency } from './schedule-words';
 
 const HOUR_MS = 3_600_000;
 

@@ -12,11 +12,11 @@ import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { ChoiceChips } from '../workshop/choice-chips';
-import { FormNumberField } from '../workshop/form-number-field';
-import { numberFieldErrors } from '../workshop/format';
+import { ChoiceChips } from '../ui/choice-chips';
+import { NumberField } from '../form/number-field';
+import { numberFieldErrors } from '../form/number-text';
 import { LocatorHelper } from '../workshop/locator-helper';
-import { Toggle } from '../workshop/toggle';
+import { Switch } from '../ui/switch';
 
 type StationFields = z.input<typeof stationInput>;
 /** What the form hands over: its own four fields, trimmed and upper-cased by the shared schema. */
@@ -118,13 +118,13 @@ function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit
         error={region.fieldState.error?.message}
         hint="Sets the band plan and the harmonic limit used for this station."
       />
-      <FormNumberField
+      <NumberField
         control={form.control}
         name="audioOffsetHz"
         label="Audio offset (Hz)"
         hint="Where in the 1400–1600 Hz window above the dial frequency the signal sits; 1500 is the middle."
       />
-      <Toggle
+      <Switch
         label="Transmit enabled"
         value={!!transmit.field.value}
         onChange={(value) => transmit.field.onChange(value)}

@@ -1,6 +1,7 @@
 import { forwardRef, useState } from 'react';
 import { StyleSheet, TextInput, View, type StyleProp, type TextInputProps, type ViewStyle } from 'react-native';
 
+import { FieldMessage } from './field-message';
 import { Text } from './text';
 import { fonts, radius, space } from './theme';
 import { useAppTheme } from './theme-provider';
@@ -51,15 +52,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
         ]}
         {...rest}
       />
-      {error ? (
-        <Text variant="caption" tone="danger" accessibilityRole="alert">
-          {error}
-        </Text>
-      ) : hint ? (
-        <Text variant="caption" tone="muted">
-          {hint}
-        </Text>
-      ) : null}
+      <FieldMessage error={error} hint={hint} />
     </View>
   );
 });

@@ -5,8 +5,8 @@ import { timeSourceLabels, type Unit } from '@/shared/schemas';
 
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { FormSection } from '../workshop/form-section';
-import { formatValue } from '../workshop/format';
+import { FormSection } from '../form/form-section';
+import { formatValue } from '../ui/format';
 import { PowerChain } from '../workshop/power-chain';
 import { antennaKindLabels, filterTypeLabels } from './unit-form';
 import { bandName, generatorSummary } from './unit-summary';

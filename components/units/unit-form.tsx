@@ -17,7 +17,7 @@ import {
   type UnitValues,
 } from '@/shared/schemas';
 
-import { serverMessage } from '../form/apply-server-errors';
+import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { SafetyCard } from '../overview/safety-card';
 import { Button } from '../ui/button';
@@ -25,13 +25,12 @@ import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { ChoiceChips, MultiChoiceChips } from '../workshop/choice-chips';
-import { FormNumberField } from '../workshop/form-number-field';
-import { FormSection } from '../workshop/form-section';
-import { numberFieldErrors } from '../workshop/format';
+import { ChoiceChips, MultiChoiceChips } from '../ui/choice-chips';
+import { NumberField } from '../form/number-field';
+import { FormSection } from '../form/form-section';
+import { numberFieldErrors } from '../form/number-text';
 import { PowerChain } from '../workshop/power-chain';
-import { applyNestedServerErrors } from '../workshop/server-errors';
-import { Toggle } from '../workshop/toggle';
+import { Switch } from '../ui/switch';
 
 type UnitFields = z.input<typeof unitInput>;
 
@@ -92,13 +91,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
   const filters = useFieldArray({ control, name: 'filters' });
   const disciplined = useWatch({ control, name: 'disciplined' });
   const amplifier = useWatch({ control, name: 'amplifier' });
-  const submit = form.handleSubmit(async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      applyNestedServerErrors(form, error);
-    }
-  });
+  const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   const invalidCount = Object.keys(form.formState.errors).filter((key) => key !== 'root').length;
 
@@ -136,7 +129,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
           options={GENERATOR_KINDS.map((value) => ({ value, label: generatorKindLabels[value] }))}
         />
         <View style={styles.pair}>
-          <FormNumberField
+          <NumberField
             control={control}
             name="referenceHz"
             scale={1e6}
@@ -144,7 +137,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
             hint="The crystal or oscillator, e.g. 25 or 27."
             style={styles.pairItem}
           />
-          <FormNumberField
+          <NumberField
             control={control}
             name="tolerancePpm"
             label="Tolerance (± ppm)"
@@ -160,7 +153,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
           onChange={(on) => on && form.setValue('tempCoPpmPerC', null)}
         />
         {disciplined ? null : (
-          <FormNumberField
+          <NumberField
             control={control}
             name="tempCoPpmPerC"
             label="Temperature coefficient (ppm/°C)"
@@ -171,25 +164,19 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
 
       <FormSection title="Output level" description="Power out of the generator and anything that lowers it before the amplifier.">
         <View style={styles.pair}>
-          <FormNumberField
+          <NumberField
             control={control}
             name="generatorLevelDbm"
             label="Generator output (dBm)"
             hint="e.g. 10 dBm = 10 mW."
             style={styles.pairItem}
           />
-          <FormNumberField
-            control={control}
-            name="attenuatorDb"
-            label="Attenuator (dB)"
-            hint="0 if none is fitted."
-            style={styles.pairItem}
-          />
+          <NumberField control={control} name="attenuatorDb" label="Attenuator (dB)" hint="0 if none is fitted." style={styles.pairItem} />
         </View>
       </FormSection>
 
       <FormSection title="Amplifier" description="Optional: a small stage after the generator.">
-        <Toggle
+        <Switch
           label="An amplifier is fitted"
           value={amplifier != null}
           onChange={(on) => form.setValue('amplifier', on ? { ...newAmplifier } : null, { shouldDirty: true })}
@@ -197,12 +184,12 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
         {amplifier != null ? (
           <>
             <View style={styles.pair}>
-              <FormNumberField control={control} name="amplifier.gainDb" label="Gain (dB)" style={styles.pairItem} />
-              <FormNumberField control={control} name="amplifier.saturatedDbm" label="Saturated output (dBm)" style={styles.pairItem} />
+              <NumberField control={control} name="amplifier.gainDb" label="Gain (dB)" style={styles.pairItem} />
+              <NumberField control={control} name="amplifier.saturatedDbm" label="Saturated output (dBm)" style={styles.pairItem} />
             </View>
             <View style={styles.pair}>
-              <FormNumberField control={control} name="amplifier.supplyV" label="Supply (V)" style={styles.pairItem} />
-              <FormNumberField control={control} name="amplifier.supplyA" label="Supply current (A)" style={styles.pairItem} />
+              <NumberField control={control} name="amplifier.supplyV" label="Supply (V)" style={styles.pairItem} />
+              <NumberField control={control} name="amplifier.supplyA" label="Supply current (A)" style={styles.pairItem} />
             </View>
             <Text variant="caption" tone="muted">
               Fuse the DC supply close to the battery or power unit, with wire rated for the current.
@@ -230,7 +217,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
           options={ANTENNA_KINDS.map((value) => ({ value, label: antennaKindLabels[value] }))}
         />
         <ControlledBands control={control} name="antenna.bands" label="Antenna bands" chipPrefix="Antenna" />
-        <FormNumberField control={control} name="antenna.gainDbi" label="Antenna gain (dBi)" hint="A dipole is about 2.15 dBi." />
+        <NumberField control={control} name="antenna.gainDbi" label="Antenna gain (dBi)" hint="A dipole is about 2.15 dBi." />
         <Text variant="caption" tone="muted">
           Keep people clear of the antenna while it radiates. Outdoor antennas attract lightning: ground them and disconnect before a storm.
         </Text>
@@ -269,14 +256,14 @@ function FilterRow({ control, index, onRemove }: { control: Control<UnitFields>;
         chipLabel={(option) => `Filter ${number} type ${option.label}`}
       />
       <View style={styles.pair}>
-        <FormNumberField
+        <NumberField
           control={control}
           name={`filters.${index}.order`}
           label={`Filter ${number} order`}
           hint="Number of poles, e.g. 5."
           style={styles.pairItem}
         />
-        <FormNumberField
+        <NumberField
           control={control}
           name={`filters.${index}.cutoffHz`}
           scale={1e6}
@@ -328,7 +315,7 @@ function ControlledBands({ control, name, label, chipPrefix }: Named & { chipPre
 function ControlledToggle({ control, name, label, hint, onChange }: Named & { hint?: string; onChange?: (value: boolean) => void }) {
   const { field } = useController({ control, name: name as 'disciplined' });
   return (
-    <Toggle
+    <Switch
       label={label}
       hint={hint}
       value={!!field.value}

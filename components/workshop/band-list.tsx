@@ -10,8 +10,8 @@ import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatMHz, formatSigned } from './format';
-import { Toggle } from './toggle';
+import { formatMHz, formatSigned } from '../ui/format';
+import { Switch } from '../ui/switch';
 import { WindowGauge } from './window-gauge';
 
 export type BandListProps = {
@@ -57,7 +57,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
                 dial {formatMHz(band.dialHz)}
               </Text>
             </View>
-            <Toggle
+            <Switch
               label={enabled ? `${band.name} is enabled` : `${band.name} is off`}
               accessibilityLabel={`Enable ${band.name}`}
               value={enabled}
@@ -114,7 +114,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
           {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
           {closed.map(({ band, blocked }) => (
             <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>
-              <Toggle
+              <Switch
                 label={`${band.name} · ${formatMHz(band.dialHz)}`}
                 accessibilityLabel={`Enable ${band.name}`}
                 value={false}

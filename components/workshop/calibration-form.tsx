@@ -7,18 +7,18 @@ import { z } from 'zod';
 import { bandFor, type BandId, type LicenceRegion } from '@/shared/domain';
 import { calibrationInput, measurementInput, type CalibrationInput, type MeasurementInput } from '@/shared/schemas';
 
-import { serverMessage } from '../form/apply-server-errors';
+import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { ChoiceChips } from './choice-chips';
-import { FormNumberField } from './form-number-field';
-import { formatHz, formatSigned, parseNumberText } from './format';
+import { ChoiceChips } from '../ui/choice-chips';
+import { NumberField } from '../form/number-field';
+import { parseNumberText } from '../form/number-text';
+import { formatHz, formatSigned } from '../ui/format';
 import type { CalibrationProposal } from './queries';
-import { applyNestedServerErrors } from './server-errors';
 
 /** The shared measurement schema, with the words for a frequency left empty. */
 const measurementFields = measurementInput.extend({
@@ -78,7 +78,7 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
       setOffsetTexts(Object.fromEntries(result.offsets.map((o) => [o.bandId, o.calibrationOffsetHz.toFixed(2)])));
     } catch (error) {
       setProposal(null);
-      applyNestedServerErrors(form, error);
+      applyServerErrors(form, error);
     }
   });
 
@@ -132,13 +132,13 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
           setProposal(null);
         }}
       />
-      <FormNumberField
+      <NumberField
         control={form.control}
         name="commandedHz"
         label="Commanded frequency (Hz)"
         hint={`What the beacon was told to send. Uncalibrated, that is the dial frequency plus the audio offset of ${audioOffsetHz} Hz.`}
       />
-      <FormNumberField
+      <NumberField
         control={form.control}
         name="observedHz"
         label="Heard frequency (Hz)"

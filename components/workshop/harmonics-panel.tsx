@@ -5,7 +5,7 @@ import type { HarmonicsVerdict } from '@/shared/domain/workshop';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatValue } from './format';
+import { formatValue } from '../ui/format';
 
 export type HarmonicsPanelProps = { harmonics: HarmonicsVerdict; bandName: string };
 
@@ -95,10 +95,11 @@ const styles = StyleSheet.create({
   headCell: { textTransform: 'uppercase', letterSpacing: 0.4, fontSize: 11 },
   cell: { fontSize: 13, lineHeight: 18 },
   c0: { width: 30 },
-  c1: { flex: 1.5, minWidth: 0 },
-  c2: { flex: 1.2, minWidth: 0, textAlign: 'right' },
-  c3: { flex: 1.1, minWidth: 0, textAlign: 'right' },
-  c4: { flex: 1.2, minWidth: 0, textAlign: 'right' },
+  // wide enough for "−105.8" in 13 px mono, so a level never breaks inside the number
+  c1: { flex: 1.5, minWidth: 50 },
+  c2: { flex: 1.2, minWidth: 50, textAlign: 'right' },
+  c3: { flex: 1.1, minWidth: 50, textAlign: 'right' },
+  c4: { flex: 1.2, minWidth: 50, textAlign: 'right' },
   c5: { width: 56, textAlign: 'right' },
 });
 const cells = [styles.c0, styles.c1, styles.c2, styles.c3, styles.c4, styles.c5];

@@ -8,7 +8,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { parseNumberText } from './format';
+import { parseNumberText } from '../form/number-text';
 
 export type LocatorHelperProps = { onLocator: (locator: string) => void };
 

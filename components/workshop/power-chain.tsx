@@ -5,7 +5,7 @@ import type { PowerChainResult } from '@/shared/domain/power';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatPowerMw, formatSigned, formatValue } from './format';
+import { formatPowerMw, formatSigned, formatValue } from '../ui/format';
 
 export type PowerChainProps = { power: PowerChainResult };
 

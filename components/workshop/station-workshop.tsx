@@ -9,7 +9,7 @@ import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { DownloadLink } from './download-link';
-import { FormSection } from './form-section';
+import { FormSection } from '../form/form-section';
 import { MessagePlan } from './message-plan';
 import { PowerChain } from './power-chain';
 

@@ -6,7 +6,7 @@ import type { SynthPlan } from '@/shared/domain';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatHz, formatSigned } from './format';
+import { formatHz, formatSigned } from '../ui/format';
 
 export type SynthTableProps = { synth: SynthPlan };
 

@@ -9,7 +9,7 @@ import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { space } from '../ui/theme';
-import { parseNumberText } from './format';
+import { parseNumberText } from '../form/number-text';
 
 export type TypedOffsetsFormProps = {
   region: LicenceRegion;

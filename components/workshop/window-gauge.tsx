@@ -7,7 +7,7 @@ import { TONE_SPACING_HZ, WINDOW_HIGH_OFFSET_HZ, WINDOW_LOW_OFFSET_HZ, type Wind
 import { Text } from '../ui/text';
 import { fonts, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { formatValue } from './format';
+import { formatValue } from '../ui/format';
 
 export type WindowGaugeProps = {
   bandName: string;

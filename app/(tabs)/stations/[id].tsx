@@ -1,96 +1,73 @@
-import { useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
+import { useRouter } from 'expo-router';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { StationDeviceLinks } from '@/components/devices/station-device-links';
+import { QueryBoundary } from '@/components/query/query-boundary';
+import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
+import { useRouteId } from '@/components/query/use-route-id';
 import { useDeleteStationMutation, useStationQuery } from '@/components/stations/queries';
 import { StationDetails } from '@/components/stations/station-details';
 import { StationHeader } from '@/components/stations/station-header';
 import { useUnitQuery } from '@/components/units/queries';
 import { LazyStationWorkshop as StationWorkshop } from '@/components/workshop/lazy-parts';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
-import { ApiError } from '@/shared/api/client';
 
 export default function StationDetailRoute() {
   const router = useRouter();
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const stationId = Number(id);
+  const { id: stationId, raw: id, valid } = useRouteId();
   const me = useSessionQuery().data;
   const station = useStationQuery(stationId);
-  const remove = useDeleteStationMutation(stationId);
   const unit = useUnitQuery(station.data?.unitId);
-  const [confirming, setConfirming] = useState(false);
+  const remove = useConfirmedMutation(useDeleteStationMutation(stationId));
+  const open = (pathname: '/stations/[id]/edit' | '/stations/[id]/bands' | '/stations/[id]/calibrate' | '/stations/[id]/on-air') =>
+    router.push({ pathname, params: { id } });
 
-  let body;
-  if (!Number.isInteger(stationId) || stationId <= 0)
-    body = <ErrorState title="Station not found" error={new Error('This address does not name a station.')} />;
-  else if (station.isPending) body = <LoadingState label="Loading the station…" />;
-  else if (station.isError) {
-    const missing = station.error instanceof ApiError && station.error.status === 404;
-    body = (
-      <ErrorState
-        title={missing ? 'Station not found' : 'The station could not be loaded'}
-        error={station.error}
-        onRetry={missing ? undefined : () => station.refetch()}
-      />
-    );
-  } else {
-    // a club admin may open a member's station, but only its owner may change it
-    const readOnly = station.data.ownerId !== me?.id;
-    body = (
-      <>
-        <StationHeader
-          station={station.data}
-          onEdit={readOnly ? undefined : () => router.push({ pathname: '/stations/[id]/edit', params: { id: String(stationId) } })}
-          onDelete={readOnly ? undefined : () => setConfirming(true)}
-        />
-        <StationDeviceLinks stationId={stationId} readOnly={readOnly} />
-        <StationWorkshop
-          station={station.data}
-          unit={unit.data ?? null}
-          unitLoading={unit.isPending && station.data.unitId !== null}
-          unitError={unit.isError ? unit.error.message : undefined}
-          readOnly={readOnly}
-          onOpenBands={() => router.push({ pathname: '/stations/[id]/bands', params: { id: String(stationId) } })}
-          onOpenCalibration={() => router.push({ pathname: '/stations/[id]/calibrate', params: { id: String(stationId) } })}
-          onOpenOnAir={() => router.push({ pathname: '/stations/[id]/on-air', params: { id: String(stationId) } })}
-        />
-        <StationDetails station={station.data} readOnly={readOnly} />
-      </>
-    );
-  }
-
-  const closeDialog = () => {
-    remove.reset();
-    setConfirming(false);
-  };
   return (
     <Screen
       overlay={
         <ConfirmDialog
-          visible={confirming}
+          {...remove.dialog}
           title="Delete this station?"
           message={`“${station.data?.name ?? 'This station'}” and its notes will be removed for good.`}
           confirmLabel="Delete station"
           destructive
-          busy={remove.isPending}
-          error={remove.error?.message}
-          onCancel={closeDialog}
           onConfirm={() =>
-            remove.mutate(undefined, {
-              onSuccess: () => {
-                setConfirming(false);
-                if (router.canGoBack()) router.back();
-                else router.replace('/stations');
-              },
+            remove.confirm(undefined, () => {
+              if (router.canGoBack()) router.back();
+              else router.replace('/stations');
             })
           }
         />
       }
     >
-      {body}
+      <QueryBoundary query={station} noun="station" validId={valid}>
+        {(data) => {
+          // a club admin may open a member's station, but only its owner may change it
+          const readOnly = data.ownerId !== me?.id;
+          return (
+            <>
+              <StationHeader
+                station={data}
+                onEdit={readOnly ? undefined : () => open('/stations/[id]/edit')}
+                onDelete={readOnly ? undefined : () => remove.ask()}
+              />
+              <StationDeviceLinks stationId={stationId} readOnly={readOnly} />
+              <StationWorkshop
+                station={data}
+                unit={unit.data ?? null}
+                unitLoading={unit.isPending && data.unitId !== null}
+                unitError={unit.isError ? unit.error.message : undefined}
+                readOnly={readOnly}
+                onOpenBands={() => open('/stations/[id]/bands')}
+                onOpenCalibration={() => open('/stations/[id]/calibrate')}
+                onOpenOnAir={() => open('/stations/[id]/on-air')}
+              />
+              <StationDetails station={data} readOnly={readOnly} />
+            </>
+          );
+        }}
+      </QueryBoundary>
     </Screen>
   );
 }

@@ -1,66 +1,30 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { Stack } from 'expo-router';
 import { useState } from 'react';
 
 import { ClubNav } from '@/components/clubs/club-nav';
 import { useClubQuery, useLiftSuspensionMutation, useReviewQuery, useSuspendMutation } from '@/components/clubs/queries';
 import { ReviewTable } from '@/components/clubs/review-table';
 import { SuspendDialog } from '@/components/clubs/suspend-dialog';
+import { QueryBoundary } from '@/components/query/query-boundary';
+import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
+import { useRouteId } from '@/components/query/use-route-id';
 import { useBreakpoints } from '@/components/ui/breakpoints';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Notice } from '@/components/ui/notice';
-import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
+import { EmptyState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import type { ReviewRow } from '@/shared/schemas';
 
 export default function ClubReviewRoute() {
-  const clubId = Number(useLocalSearchParams<{ clubId: string }>().clubId);
+  const { id: clubId } = useRouteId('clubId');
   const { isWide } = useBreakpoints();
   const club = useClubQuery(clubId);
   const review = useReviewQuery(clubId);
   const suspend = useSuspendMutation(clubId);
-  const lift = useLiftSuspensionMutation(clubId);
+  const lift = useConfirmedMutation(useLiftSuspensionMutation(clubId), null as ReviewRow | null);
   const [suspending, setSuspending] = useState<ReviewRow | null>(null);
-  const [lifting, setLifting] = useState<ReviewRow | null>(null);
-  const [liftError, setLiftError] = useState<string>();
   const [message, setMessage] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
-
-  const closeLift = () => {
-    setLifting(null);
-    setLiftError(undefined);
-  };
-  const confirmLift = async () => {
-    if (!lifting) return;
-    try {
-      await lift.mutateAsync({ stationId: lifting.stationId });
-      setMessage({ tone: 'success', text: `${lifting.stationName} may send again. ${lifting.ownerName} has been told.` });
-      closeLift();
-    } catch (error) {
-      setLiftError(error instanceof Error ? error.message : 'The stop could not be lifted.');
-    }
-  };
-  let body;
-  if (review.isPending) body = <LoadingState label="Checking every member’s stations…" />;
-  else if (review.isError)
-    body = <ErrorState title="The review could not be loaded" error={review.error} onRetry={() => review.refetch()} />;
-  else if (review.data.length === 0)
-    body = <EmptyState title="No stations to review" message="None of the members has registered a station yet." />;
-  else
-    body = (
-      <ReviewTable
-        rows={review.data}
-        layout={isWide ? 'columns' : 'cards'}
-        stationHref={(row) => ({ pathname: '/club/station/[id]', params: { id: String(row.stationId) } })}
-        onSuspend={(row) => {
-          setMessage(null);
-          setSuspending(row);
-        }}
-        onLift={(row) => {
-          setMessage(null);
-          setLifting(row);
-        }}
-      />
-    );
   const name = club.data?.name ?? 'Club';
   return (
     <Screen
@@ -68,14 +32,16 @@ export default function ClubReviewRoute() {
       overlay={
         <>
           <ConfirmDialog
-            visible={!!lifting}
-            title={`Let ${lifting?.stationName} send again?`}
-            message={`Its plan and device configuration go back on the air from the next slot, and ${lifting?.ownerName} is told. Lift the stop only once the reason for it is fixed.`}
+            {...lift.dialog}
+            title={`Let ${lift.asking?.stationName} send again?`}
+            message={`Its plan and device configuration go back on the air from the next slot, and ${lift.asking?.ownerName} is told. Lift the stop only once the reason for it is fixed.`}
             confirmLabel="Lift the stop"
-            busy={lift.isPending}
-            error={liftError}
-            onConfirm={confirmLift}
-            onCancel={closeLift}
+            onConfirm={() =>
+              lift.asking &&
+              lift.confirm({ stationId: lift.asking.stationId }, (_, row) =>
+                setMessage({ tone: 'success', text: `${row.stationName} may send again. ${row.ownerName} has been told.` }),
+              )
+            }
           />
           <SuspendDialog
             station={suspending ? { name: suspending.stationName, ownerName: suspending.ownerName } : null}
@@ -97,7 +63,27 @@ export default function ClubReviewRoute() {
         can fix a station; you can stop one until it is fixed.
       </Text>
       {message ? <Notice tone={message.tone} message={message.text} /> : null}
-      {body}
+      <QueryBoundary query={review} noun="review" loadingLabel="Checking every member’s stations…">
+        {(rows) =>
+          rows.length === 0 ? (
+            <EmptyState title="No stations to review" message="None of the members has registered a station yet." />
+          ) : (
+            <ReviewTable
+              rows={rows}
+              layout={isWide ? 'columns' : 'cards'}
+              stationHref={(row) => ({ pathname: '/club/station/[id]', params: { id: String(row.stationId) } })}
+              onSuspend={(row) => {
+                setMessage(null);
+                setSuspending(row);
+              }}
+              onLift={(row) => {
+                setMessage(null);
+                lift.ask(row);
+              }}
+            />
+          )
+        }
+      </QueryBoundary>
     </Screen>
   );
 }

@@ -1,11 +1,12 @@
-import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { useSessionQuery } from '@/components/auth/queries';
+import { QueryBoundary } from '@/components/query/query-boundary';
+import { useRouteId } from '@/components/query/use-route-id';
 import { useStationQuery } from '@/components/stations/queries';
 import { useUnitQuery } from '@/components/units/queries';
 import { Card } from '@/components/ui/card';
-import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { LazyCalibrationForm as CalibrationForm, LazyTypedOffsetsForm as TypedOffsetsForm } from '@/components/workshop/lazy-parts';
@@ -16,8 +17,7 @@ import { filterCoverage } from '@/shared/domain/workshop/coverage';
 
 export default function StationCalibrateRoute() {
   const router = useRouter();
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const stationId = Number(id);
+  const { id: stationId, raw: id, valid } = useRouteId();
   const me = useSessionQuery().data;
   const station = useStationQuery(stationId);
   const unit = useUnitQuery(station.data?.unitId);
@@ -26,66 +26,67 @@ export default function StationCalibrateRoute() {
   const [mode, setMode] = useState<'measure' | 'typed'>('measure');
   const toBands = () => router.replace({ pathname: '/stations/[id]/bands', params: { id } });
 
-  let body;
-  if (station.isPending || (station.data?.unitId != null && unit.isPending)) body = <LoadingState label="Loading the station…" />;
-  else if (station.isError)
-    body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
-  else if (station.data.ownerId !== me?.id)
-    body = (
-      <ErrorState
-        title="Read-only"
-        error={new Error(`This station belongs to ${station.data.ownerName}; only its owner can calibrate it.`)}
-      />
-    );
-  else {
-    // lowest band first, as everywhere else
-    const order = bandsFor(station.data.region).map((band) => band.id as string);
-    const enabled = station.data.bands.filter((b) => b.enabled).sort((a, b) => order.indexOf(a.bandId) - order.indexOf(b.bandId));
-    // bands worth measuring: enabled ones whose filter covers them
-    const measurable = enabled
-      .map((b) => b.bandId as BandId)
-      .filter((bandId) => {
-        const found = bandFor(bandId, station.data.region);
-        return found.ok && unit.data ? filterCoverage(unit.data.filters, found.band).covered : false;
-      });
-    body = (
-      <>
-        <WorkshopHeader
-          title="Calibrate"
-          station={station.data}
-          intro={
-            station.data.referenceErrorPpm === null
-              ? 'No measurement yet. Measure once on one band; the same crystal error carries over to every band.'
-              : `Last measured reference error: ${station.data.referenceErrorPpm.toFixed(3)} ppm.`
-          }
-        />
-        <SegmentedChoice
-          label="How to calibrate"
-          value={mode}
-          onChange={setMode}
-          options={[
-            { value: 'measure', label: 'Guided measurement' },
-            { value: 'typed', label: 'Type offsets' },
-          ]}
-        />
-        <Card>
-          {mode === 'measure' ? (
-            <CalibrationForm
-              region={station.data.region}
-              audioOffsetHz={station.data.audioOffsetHz}
-              bandIds={measurable}
-              onPropose={(measurement) => propose.mutateAsync(measurement)}
-              onAccept={async (input) => {
-                await save.mutateAsync(input);
-                toBands();
-              }}
-            />
-          ) : (
-            <TypedOffsetsForm region={station.data.region} bands={enabled} onSave={(input) => save.mutateAsync(input)} />
-          )}
-        </Card>
-      </>
-    );
-  }
-  return <Screen maxWidth={720}>{body}</Screen>;
+  return (
+    <Screen maxWidth={720}>
+      <QueryBoundary
+        query={station}
+        noun="station"
+        validId={valid}
+        loadingLabel="Loading the station…"
+        alongside={[{ query: unit, errorTitle: 'The station’s unit could not be loaded' }]}
+        refuse={(data) => (data.ownerId === me?.id ? null : `This station belongs to ${data.ownerName}; only its owner can calibrate it.`)}
+      >
+        {(data) => {
+          // lowest band first, as everywhere else
+          const order = bandsFor(data.region).map((band) => band.id as string);
+          const enabled = data.bands.filter((b) => b.enabled).sort((a, b) => order.indexOf(a.bandId) - order.indexOf(b.bandId));
+          // bands worth measuring: enabled ones whose filter covers them
+          const measurable = enabled
+            .map((b) => b.bandId as BandId)
+            .filter((bandId) => {
+              const found = bandFor(bandId, data.region);
+              return found.ok && unit.data ? filterCoverage(unit.data.filters, found.band).covered : false;
+            });
+          return (
+            <>
+              <WorkshopHeader
+                title="Calibrate"
+                station={data}
+                intro={
+                  data.referenceErrorPpm === null
+                    ? 'No measurement yet. Measure once on one band; the same crystal error carries over to every band.'
+                    : `Last measured reference error: ${data.referenceErrorPpm.toFixed(3)} ppm.`
+                }
+              />
+              <SegmentedChoice
+                label="How to calibrate"
+                value={mode}
+                onChange={setMode}
+                options={[
+                  { value: 'measure', label: 'Guided measurement' },
+                  { value: 'typed', label: 'Type offsets' },
+                ]}
+              />
+              <Card>
+                {mode === 'measure' ? (
+                  <CalibrationForm
+                    region={data.region}
+                    audioOffsetHz={data.audioOffsetHz}
+                    bandIds={measurable}
+                    onPropose={(measurement) => propose.mutateAsync(measurement)}
+                    onAccept={async (input) => {
+                      await save.mutateAsync(input);
+                      toBands();
+                    }}
+                  />
+                ) : (
+                  <TypedOffsetsForm region={data.region} bands={enabled} onSave={(input) => save.mutateAsync(input)} />
+                )}
+              </Card>
+            </>
+          );
+        }}
+      </QueryBoundary>
+    </Screen>
+  );
 }

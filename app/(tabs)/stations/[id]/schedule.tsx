@@ -1,105 +1,73 @@
-import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
+import { Stack, useRouter } from 'expo-router';
 
 import { useSessionQuery } from '@/components/auth/queries';
-import { useDeleteScheduleMutation, usePatchScheduleMutation, usePlanQuery, useScheduleQuery } from '@/components/schedules/queries';
-import { previewFromPlan, previewRange } from '@/components/schedules/preview-model';
-import {
-  LazyScheduleEmpty as ScheduleEmpty,
-  LazySchedulePreviewPanel as SchedulePreviewPanel,
-  LazyScheduleSummary as ScheduleSummary,
-} from '@/components/schedules/lazy-parts';
-import { useTickingClock } from '@/components/ui/use-ticking-clock';
+import { QueryBoundary } from '@/components/query/query-boundary';
+import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
+import { useRouteId } from '@/components/query/use-route-id';
+import { useDeleteScheduleMutation, usePatchScheduleMutation, useScheduleQuery } from '@/components/schedules/queries';
+import { LazyScheduleEmpty as ScheduleEmpty, LazyScheduleSummary as ScheduleSummary } from '@/components/schedules/lazy-parts';
+import { SavedSchedulePlan } from '@/components/schedules/saved-schedule-plan';
 import { useStationQuery } from '@/components/stations/queries';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { useTickingClock } from '@/components/ui/use-ticking-clock';
 
 export default function StationScheduleRoute() {
   const router = useRouter();
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const stationId = Number(id);
+  const { id: stationId, raw: id, valid } = useRouteId();
   const me = useSessionQuery().data;
   const station = useStationQuery(stationId);
   const schedule = useScheduleQuery(stationId);
   const nowMs = useTickingClock(60_000);
-  const range = previewRange(nowMs);
-  const plan = usePlanQuery(stationId, range, !!schedule.data);
   const patch = usePatchScheduleMutation(stationId);
-  const remove = useDeleteScheduleMutation(stationId);
-  const [confirming, setConfirming] = useState(false);
+  const remove = useConfirmedMutation(useDeleteScheduleMutation(stationId));
   const toEditor = (preset?: string) => router.push({ pathname: '/stations/[id]/schedule/edit', params: preset ? { id, preset } : { id } });
 
-  let body;
-  if (station.isPending || schedule.isPending) body = <LoadingState label="Loading the schedule…" />;
-  else if (station.isError)
-    body = <ErrorState title="The station could not be loaded" error={station.error} onRetry={() => station.refetch()} />;
-  else if (schedule.isError)
-    body = <ErrorState title="The schedule could not be loaded" error={schedule.error} onRetry={() => schedule.refetch()} />;
-  else {
-    const readOnly = station.data.ownerId !== me?.id;
-    if (!schedule.data) {
-      body = <ScheduleEmpty station={station.data} readOnly={readOnly} nowMs={nowMs} onBuild={toEditor} />;
-    } else {
-      const saved = schedule.data;
-      body = (
-        <>
-          <Text variant="mono" tone="primary">
-            {station.data.name} · {station.data.callsign}
-          </Text>
-          <ScheduleSummary
-            schedule={saved}
-            station={station.data}
-            busy={patch.isPending}
-            error={patch.error?.message}
-            onEdit={readOnly ? undefined : () => toEditor()}
-            onPause={readOnly ? undefined : () => patch.mutate({ paused: true })}
-            onResume={readOnly ? undefined : () => patch.mutate({ paused: false })}
-            onDelete={readOnly ? undefined : () => setConfirming(true)}
-          />
-          {plan.isPending ? (
-            <LoadingState label="Loading the plan…" />
-          ) : plan.isError ? (
-            <ErrorState title="The plan could not be loaded" error={plan.error} onRetry={() => plan.refetch()} />
-          ) : (
-            <SchedulePreviewPanel
-              preview={previewFromPlan(
-                plan.data,
-                saved.steps.map((s) => s.bandId),
-                nowMs,
-              )}
-              upcoming={plan.data.transmissions}
-              quietMessage={plan.data.quiet.map((q) => q.message).join(' ') || undefined}
-            />
-          )}
-        </>
-      );
-    }
-  }
-
-  const closeDialog = () => {
-    remove.reset();
-    setConfirming(false);
-  };
   return (
     <Screen
       overlay={
         <ConfirmDialog
-          visible={confirming}
+          {...remove.dialog}
           title="Delete this schedule?"
           message={`“${schedule.data?.name ?? 'The schedule'}” will be removed and the station stops transmitting by plan. The station, its bands and calibration stay.`}
           confirmLabel="Delete schedule"
           destructive
-          busy={remove.isPending}
-          error={remove.error?.message}
-          onCancel={closeDialog}
-          onConfirm={() => remove.mutate(undefined, { onSuccess: () => setConfirming(false) })}
+          onConfirm={() => remove.confirm(undefined)}
         />
       }
     >
       <Stack.Screen options={{ title: 'Schedule' }} />
-      {body}
+      <QueryBoundary
+        query={station}
+        noun="station"
+        validId={valid}
+        loadingLabel="Loading the schedule…"
+        alongside={[{ query: schedule, errorTitle: 'The schedule could not be loaded' }]}
+      >
+        {(data) => {
+          const readOnly = data.ownerId !== me?.id;
+          if (!schedule.data) return <ScheduleEmpty station={data} readOnly={readOnly} nowMs={nowMs} onBuild={toEditor} />;
+          return (
+            <>
+              <Text variant="mono" tone="primary">
+                {data.name} · {data.callsign}
+              </Text>
+              <ScheduleSummary
+                schedule={schedule.data}
+                station={data}
+                busy={patch.isPending}
+                error={patch.error?.message}
+                onEdit={readOnly ? undefined : () => toEditor()}
+                onPause={readOnly ? undefined : () => patch.mutate({ paused: true })}
+                onResume={readOnly ? undefined : () => patch.mutate({ paused: false })}
+                onDelete={readOnly ? undefined : () => remove.ask()}
+              />
+              <SavedSchedulePlan stationId={stationId} schedule={schedule.data} nowMs={nowMs} />
+            </>
+          );
+        }}
+      </QueryBoundary>
     </Screen>
   );
 }

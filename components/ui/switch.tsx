@@ -1,10 +1,11 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 
-import { Text } from '../ui/text';
-import { radius, space } from '../ui/theme';
-import { useAppTheme } from '../ui/theme-provider';
+import { Text } from './text';
+import { radius, space } from './theme';
+import { useAppTheme } from './theme-provider';
+import { onActivateKeys, pressIgnoringKeys, webProps } from './web-keys';
 
-export type ToggleProps = {
+export type SwitchProps = {
   label: string;
   value: boolean;
   onChange: (value: boolean) => void;
@@ -16,17 +17,27 @@ export type ToggleProps = {
   accessibilityLabel?: string;
 };
 
-/** An on/off switch with its label on the left; the whole row is the control. */
-export function Toggle({ label, value, onChange, hint, disabled = false, busy = false, accessibilityLabel }: ToggleProps) {
+/**
+ * An on/off switch with its label on the left; the whole row (at least 44 px tall) is the control.
+ * It is a `switch` with `aria-checked` for assistive technology; a click, Space or Enter flips it.
+ */
+export function Switch({ label, value, onChange, hint, disabled = false, busy = false, accessibilityLabel }: SwitchProps) {
   const { colors } = useAppTheme();
   const inactive = disabled || busy;
+  const flip = () => {
+    if (!inactive) onChange(!value);
+  };
   return (
     <Pressable
-      accessibilityRole="switch"
+      role="switch"
+      aria-checked={value}
+      aria-disabled={inactive || undefined}
+      aria-busy={busy || undefined}
       accessibilityLabel={accessibilityLabel ?? label}
       accessibilityState={{ checked: value, disabled: inactive, busy }}
       disabled={inactive}
-      onPress={() => onChange(!value)}
+      onPress={pressIgnoringKeys(flip)}
+      {...webProps({ onKeyDown: onActivateKeys(flip) })}
       style={styles.row}
     >
       <View style={styles.words}>
@@ -45,7 +56,7 @@ export function Toggle({ label, value, onChange, hint, disabled = false, busy = 
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 44 },
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 44, borderRadius: radius.md },
   words: { flex: 1, gap: 2 },
   track: { width: 48, height: 28, borderRadius: radius.pill, padding: 3, justifyContent: 'center' },
   knob: { width: 22, height: 22, borderRadius: 11 },

@@ -1,34 +1,8 @@
 import { bandFor, BAND_IDS, type BandId } from '@/shared/domain';
 import type { ActiveHoursUtc, Cadence } from '@/shared/domain/schedule';
 
+/** Words for schedules: band names, cadences, hours, shares; numbers and times come from ui/format. */
 const pad = (value: number) => String(value).padStart(2, '0');
-
-/** `14:06 UTC` */
-export function formatUtcTime(ms: number): string {
-  const d = new Date(ms);
-  return `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())} UTC`;
-}
-
-/** `2026-12-02` */
-export function utcDate(ms: number): string {
-  return new Date(ms).toISOString().slice(0, 10);
-}
-
-/** Time left as `mm:ss`, or `h:mm:ss` from an hour up; never negative. */
-export function formatCountdown(ms: number): string {
-  const total = Math.max(0, Math.ceil(ms / 1000));
-  const h = Math.floor(total / 3600);
-  const m = Math.floor((total % 3600) / 60);
-  const s = total % 60;
-  return h > 0 ? `${h}:${pad(m)}:${pad(s)}` : `${pad(m)}:${pad(s)}`;
-}
-
-/** `7.040 100 MHz` style: a frequency in MHz with grouped digits, for JetBrains Mono. */
-export function formatMHz(hz: number): string {
-  const mhz = (Math.round(hz) / 1e6).toFixed(6);
-  const [whole, frac] = mhz.split('.');
-  return `${whole}.${frac.slice(0, 3)} ${frac.slice(3)} MHz`;
-}
 
 export function bandName(bandId: BandId): string {
   const found = bandFor(bandId);
