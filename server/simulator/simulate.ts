@@ -28,19 +28,17 @@ if (!(count > 0) || !(Number(opts.speed) > 0)) {
 if (Number(opts.devices) > tokens.length)
   console.error(`Only ${tokens.length} device tokens are known; simulating ${count}. Pass more with --tokens.`);
 
-const devices = tokens
-  .slice(0, count)
-  .map(
-    (t) =>
-      new SimulatedDevice({
-        baseUrl: opts.url,
-        token: t.token,
-        name: t.name,
-        speed: Number(opts.speed),
-        silenceChance: Number(opts.silence),
-        log: (line) => console.log(line),
-      }),
-  );
+const devices = tokens.slice(0, count).map(
+  (t) =>
+    new SimulatedDevice({
+      baseUrl: opts.url,
+      token: t.token,
+      name: t.name,
+      speed: Number(opts.speed),
+      silenceChance: Number(opts.silence),
+      log: (line) => console.log(line),
+    }),
+);
 console.log(`Simulating ${count} device(s) against ${opts.url}, reporting every ${(60 / Number(opts.speed)).toFixed(1)} s. Ctrl-C stops.`);
 for (const device of devices) device.start();
 
