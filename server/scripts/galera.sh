@@ -61,12 +61,14 @@ start_node() { # start_node N CLUSTER_ADDRESS
     --wsrep-provider-options="gmcast.listen_addr=tcp://127.0.0.1:$((REPL0 + n));ist.recv_addr=127.0.0.1:$((REPL0 + 10 + n));gcache.size=256M" \
     --wsrep-sst-receive-address="127.0.0.1:$((REPL0 + 20 + n))" --wsrep-sst-method=mariabackup --wsrep-sst-auth="sst:$SST_PASS" \
     --wsrep-slave-threads=2 "${extra[@]}" </dev/null >/dev/null 2>&1 9>&- &
+  echo $! >"$d/started.pid"
 }
 
 wait_synced() { # wait_synced N SECONDS
   local n=$1 limit=$2 i
   for ((i = 0; i < limit * 2; i++)); do
     [ "$(state "$n")" = Synced ] && return 0
+    kill -0 "$(cat "$(dir "$n")/started.pid" 2>/dev/null)" 2>/dev/null || { say "node $n stopped while starting; see $(dir "$n")/error.log"; return 1; }
     sleep 0.5
   done
   say "node $n did not reach Synced in ${limit}s; see $(dir "$n")/error.log"
@@ -82,6 +84,61 @@ init_dir() {
   chmod 700 "$d"
 }
 
+# The first time: node 1 is initialised and prepared alone, then copied to nodes 2 and 3, so all three start from
+# the same state and join without a full state transfer.
+first_creation() {
+  rm -rf "$(dir 1)" "$(dir 2)" "$(dir 3)"
+  init_dir 1
+  start_node 1 "gcomm://"
+  wait_synced 1 120
+  prepare_node1
+  stop_node 1
+  for n in 2 3; do
+    cp -a "$(dir 1)" "$(dir "$n")"
+    sed -i 's/^safe_to_bootstrap: 1/safe_to_bootstrap: 0/' "$(dir "$n")/grastate.dat"
+    rm -f "$(dir "$n")"/*.pid "$(dir "$n")"/error.log
+  done
+}
+
+prepare_node1() {
+  client 1 -e "CREATE USER IF NOT EXISTS 'sst'@'localhost' IDENTIFIED BY '$SST_PASS';
+    GRANT RELOAD, PROCESS, LOCK TABLES, BINLOG MONITOR, REPLICA MONITOR ON *.* TO 'sst'@'localhost';
+    CREATE DATABASE IF NOT EXISTS faintline CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+    CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASS';
+    GRANT ALL PRIVILEGES ON faintline.* TO '$DB_USER'@'127.0.0.1';
+    GRANT ALL PRIVILEGES ON \`faintline\\_%\`.* TO '$DB_USER'@'127.0.0.1';
+    DROP USER IF EXISTS 'root'@'127.0.0.1', 'root'@'::1';"
+}
+
+# When a joiner dies half way, the nodes left may have lost their majority (two of two became one of two):
+# tell a surviving node to form the primary component again.
+restore_primary() {
+  for m in "${NODES[@]}"; do
+    [ "$m" = "$1" ] && continue
+    ping_node "$m" || continue
+    [ "$(client "$m" -N -e "SHOW STATUS LIKE 'wsrep_cluster_status'" | awk '{print $2}')" = Primary ] && return 0
+    client "$m" -e "SET GLOBAL wsrep_provider_options='pc.bootstrap=YES'" && return 0
+  done
+}
+
+# A node joins and catches up; if its state transfer fails (say, one cut off half way), it starts over from an
+# empty data directory, which this development cluster can always afford.
+join() {
+  local n=$1
+  say "node $n joining on 127.0.0.1:$((PORT0 + n)) (state transfer from the cluster)…"
+  rm -rf "$(dir "$n")/.sst"
+  start_node "$n" "$(cluster_address)"
+  wait_synced "$n" 240 && return 0
+  say "node $n: state transfer failed; starting it over from an empty data directory"
+  stop_node "$n"
+  pkill -9 -f "datadir=$(dir "$n") " 2>/dev/null || true
+  restore_primary "$n"
+  rm -rf "$(dir "$n")"
+  init_dir "$n"
+  start_node "$n" "$(cluster_address)"
+  wait_synced "$n" 240
+}
+
 cluster_address() { echo "gcomm://127.0.0.1:$((REPL0 + 1)),127.0.0.1:$((REPL0 + 2)),127.0.0.1:$((REPL0 + 3))"; }
 
 start() {
@@ -89,28 +146,16 @@ start() {
   mkdir -p "$BASE"
   exec 9>"$BASE/.lock"
   flock 9
-  for n in "${NODES[@]}"; do init_dir "$n"; done
+  if [ ! -d "$(dir 1)/mysql" ]; then first_creation; fi
   if ! ping_node 1; then
     # Node 1 bootstraps the cluster. After a clean stop it was the last to go; after a crash, this dev cluster trusts it anyway.
     sed -i 's/^safe_to_bootstrap: 0/safe_to_bootstrap: 1/' "$(dir 1)/grastate.dat" 2>/dev/null || true
     say "bootstrapping node 1 on 127.0.0.1:$((PORT0 + 1))"
     start_node 1 "gcomm://"
     wait_synced 1 60
-    client 1 -e "CREATE USER IF NOT EXISTS 'sst'@'localhost' IDENTIFIED BY '$SST_PASS';
-      GRANT RELOAD, PROCESS, LOCK TABLES, BINLOG MONITOR, REPLICA MONITOR ON *.* TO 'sst'@'localhost';
-      CREATE DATABASE IF NOT EXISTS faintline CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
-      CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASS';
-      GRANT ALL PRIVILEGES ON faintline.* TO '$DB_USER'@'127.0.0.1';
-      GRANT ALL PRIVILEGES ON \`faintline\\_%\`.* TO '$DB_USER'@'127.0.0.1';
-      DROP USER IF EXISTS 'root'@'127.0.0.1', 'root'@'::1';"
   fi
-  for n in 2 3; do
-    if ! ping_node "$n"; then
-      say "node $n joining on 127.0.0.1:$((PORT0 + n)) (state transfer from the cluster)…"
-      start_node "$n" "$(cluster_address)"
-    fi
-  done
-  for n in 2 3; do wait_synced "$n" 180; done
+  # One joiner at a time: each state transfer reads the donor whole.
+  for n in 2 3; do ping_node "$n" || join "$n"; done
   say "3 nodes synced: 127.0.0.1:$((PORT0 + 1)), :$((PORT0 + 2)), :$((PORT0 + 3))"
 }
 
@@ -135,8 +180,7 @@ kill_node() {
 }
 
 restart_node() {
-  start_node "$1" "$(cluster_address)"
-  wait_synced "$1" 180
+  join "$1"
   say "node $1 back and synced"
 }
 
