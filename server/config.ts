@@ -31,6 +31,8 @@ const configSchema = z.object({
   DEVICE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
   DEVICE_OFFLINE_AFTER_S: z.coerce.number().int().min(1).default(300),
   DEVICE_CACHE_MS: z.coerce.number().int().min(0).default(2000),
+  /** How often each process reads the other processes' station changes (0 turns the feed off: one process only). */
+  CHANGE_FEED_POLL_MS: z.coerce.number().int().min(0).default(250),
   DEVICE_CONFIG_CACHE_MB: z.coerce.number().min(1).default(64),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),

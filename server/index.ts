@@ -7,6 +7,7 @@ import { loadConfig } from './config';
 import { migrateToLatest } from './db/migrator';
 import { demoSignIns, seedDemoIfEmpty } from './db/seed/demo';
 import { createSequelize } from './db/sequelize';
+import { followChangesAcrossProcesses } from './lib/change-feed-follower';
 import { createLogger } from './lib/logger';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { createMailer } from './mail/mailer';
@@ -25,6 +26,9 @@ async function main() {
   const seeded = process.env.FAINTLINE_SEED_DEMO === '0' ? false : await seedDemoIfEmpty(sequelize, config.BCRYPT_COST);
   const mailer = createMailer(config);
   const app = createApp({ config, sequelize, mailer, logger, fakeSmtp });
+  // Several processes share one database: each follows the others' station changes (device caches drop them).
+  const changeFeed =
+    config.CHANGE_FEED_POLL_MS > 0 ? followChangesAcrossProcesses({ sequelize, logger, pollMs: config.CHANGE_FEED_POLL_MS }) : null;
 
   const server = createServer(createHttpHandler(app, logger));
   server.on('error', (error) => {
@@ -56,6 +60,7 @@ async function main() {
     stopping = true;
     logger.info({ signal }, 'stopping');
     alertJob.stop();
+    await changeFeed?.stop();
     server.close();
     server.closeAllConnections();
     mailer.close();
