@@ -1,8 +1,8 @@
+import { utcTimestampField } from './fields';
 import { TIME_SOURCES, bandIdField } from './unit';
 import { z } from './zod-setup';
 
-const isoUtc = (label: string) =>
-  z.iso.datetime({ offset: true, message: `Give ${label} as an ISO 8601 UTC time, e.g. 2026-12-02T10:00:01Z` });
+const isoUtc = utcTimestampField;
 
 export const heartbeatInput = z.object({
   uptimeS: z.number().int('uptimeS is whole seconds').min(0, 'uptimeS cannot be negative'),
