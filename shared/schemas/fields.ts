@@ -1,10 +1,24 @@
 import { z } from './zod-setup';
 
+const isControl = (code: number) => code <= 0x1f || (code >= 0x7f && code <= 0x9f);
+const isLineBreakOrTab = (code: number) => code === 0x09 || code === 0x0a || code === 0x0d;
+/** Embeddings, overrides and isolates (U+202A–U+202E, U+2066–U+2069): they can make a name read as another. */
+const isBidiControl = (code: number) => (code >= 0x202a && code <= 0x202e) || (code >= 0x2066 && code <= 0x2069);
+
+const noneOf = (test: (code: number) => boolean) => (value: string) => {
+  for (let i = 0; i < value.length; i += 1) if (test(value.charCodeAt(i))) return false;
+  return true;
+};
+
+export const CONTROL_MESSAGE = 'Remove control characters (such as NUL or escape): they cannot be shown to others';
+export const BIDI_MESSAGE = 'Remove text-direction override characters (U+202A–U+202E, U+2066–U+2069): they can disguise a name';
+
 /** Maidenhead locator, 4 or 6 characters: field letters A–R, square digits, subsquare letters a–x. */
 export const LOCATOR_PATTERN = /^[A-R]{2}[0-9]{2}([A-X]{2})?$/;
 
 export const callsignField = z
   .string()
+  .refine(noneOf(isControl), CONTROL_MESSAGE)
   .trim()
   .toUpperCase()
   .min(3, 'A callsign has at least 3 characters')
@@ -64,27 +78,14 @@ export const utcTimestampField = (label: string) =>
       return ms >= EARLIEST_UTC_MS && ms < LATEST_UTC_MS;
     }, `Give ${label} between the years 2000 and 2099 (UTC)`);
 
-const isControl = (code: number) => code <= 0x1f || (code >= 0x7f && code <= 0x9f);
-const isLineBreakOrTab = (code: number) => code === 0x09 || code === 0x0a || code === 0x0d;
-/** Embeddings, overrides and isolates (U+202A–U+202E, U+2066–U+2069): they can make a name read as another. */
-const isBidiControl = (code: number) => (code >= 0x202a && code <= 0x202e) || (code >= 0x2066 && code <= 0x2069);
-
-const noneOf = (test: (code: number) => boolean) => (value: string) => {
-  for (let i = 0; i < value.length; i += 1) if (test(value.charCodeAt(i))) return false;
-  return true;
-};
-
-export const CONTROL_MESSAGE = 'Remove control characters (such as NUL or escape): they cannot be shown to others';
-export const BIDI_MESSAGE = 'Remove text-direction override characters (U+202A–U+202E, U+2066–U+2069): they can disguise a name';
-
 /** One line shown to others (a person's, station's or club's name): no control or direction-override characters. */
 export const nameText = (max: number) =>
   z
     .string()
-    .trim()
-    .max(max, `Use at most ${max} characters`)
     .refine(noneOf(isControl), CONTROL_MESSAGE)
-    .refine(noneOf(isBidiControl), BIDI_MESSAGE);
+    .refine(noneOf(isBidiControl), BIDI_MESSAGE)
+    .trim()
+    .max(max, `Use at most ${max} characters`);
 
 /** Free text shown to others (notes, reasons): line breaks and tabs allowed, other control characters not. */
 export const noteText = (max: number) =>

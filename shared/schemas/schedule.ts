@@ -14,7 +14,7 @@ import {
   MIN_STEP_SLOTS,
   type ScheduleRules,
 } from '../domain/schedule/model';
-import { utcTimestampField } from './fields';
+import { nameText, utcTimestampField } from './fields';
 import { bandIdField } from './unit';
 import { z } from './zod-setup';
 
@@ -88,7 +88,7 @@ const dateField = (label: string) =>
     );
 
 const fields = {
-  name: z.string().trim().min(1, 'Give the schedule a name').max(80, 'Use at most 80 characters'),
+  name: nameText(80).min(1, 'Give the schedule a name'),
   steps: z
     .array(rotationStepField)
     .min(1, 'Add at least one band to the rotation')
