@@ -76,7 +76,8 @@ export type Station = {
   referenceErrorPpm: number | null;
   bands: StationBand[];
   /** set while a club admin has stopped the station */
-  suspension: { at: string; reason: string; clubId: number | null } | null;
+  /** who stopped the station and why; kept after the owner leaves the club, so that club's admins can still lift it */
+  suspension: { at: string; reason: string; clubId: number | null; clubName: string | null; byName: string | null } | null;
   createdAt: string;
   updatedAt: string;
 };

@@ -13,10 +13,11 @@ import * as stationsRepo from '../stations/stations.repo';
 import { requireAdmin } from './access';
 import { memberIdsOf } from './clubs.repo';
 
-/** The station, if its owner belongs to the club. */
-async function clubStation(clubId: number, stationId: number) {
+/** The station, if its owner belongs to the club or (for lifting) the club suspended it. */
+async function clubStation(clubId: number, stationId: number, { suspendedByThisClub = false } = {}) {
   const station = await stationsRepo.findById(stationId);
-  if (!station || !(await memberIdsOf(clubId)).includes(station.ownerId))
+  const ours = station && suspendedByThisClub && station.suspension?.clubId === clubId;
+  if (!station || (!ours && !(await memberIdsOf(clubId)).includes(station.ownerId)))
     throw new AppError('not-found', `Station ${stationId} is not a station of this club`);
   const owner = (await UserModel.findByPk(station.ownerId))!;
   return { station, owner };
@@ -27,7 +28,11 @@ export async function suspend(sequelize: Sequelize, user: SessionUser, clubId: n
   const { station, owner } = await clubStation(clubId, stationId);
   if (station.suspension) throw new AppError('conflict', `${station.name} is already suspended`);
   await sequelize.transaction(async (transaction) => {
-    await stationsRepo.setSuspension(stationId, { reason, clubId }, transaction);
+    await stationsRepo.setSuspension(
+      stationId,
+      { reason, clubId, clubName: club.name, byUserId: user.id, byName: user.displayName },
+      transaction,
+    );
     await notify(owner.id, 'suspension', `${club.name} suspended ${station.name}: ${reason}`, `/stations/${stationId}`, transaction);
     await audit.record(
       {
@@ -54,8 +59,15 @@ export async function suspend(sequelize: Sequelize, user: SessionUser, clubId: n
 
 export async function lift(sequelize: Sequelize, user: SessionUser, clubId: number, stationId: number) {
   const { club } = await requireAdmin(user, clubId);
-  const { station, owner } = await clubStation(clubId, stationId);
+  // A suspension stays with the club that made it: its admins can lift it even after the owner left.
+  const { station, owner } = await clubStation(clubId, stationId, { suspendedByThisClub: true });
   if (!station.suspension) throw new AppError('conflict', `${station.name} is not suspended`);
+  if (station.suspension.clubId !== null && station.suspension.clubId !== clubId) {
+    throw new AppError(
+      'forbidden',
+      `${station.name} was suspended by ${station.suspension.clubName ?? 'another club'}; only its admins can lift it`,
+    );
+  }
   await sequelize.transaction(async (transaction) => {
     await stationsRepo.setSuspension(stationId, null, transaction);
     await notify(
