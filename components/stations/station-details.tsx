@@ -10,12 +10,18 @@ import { space } from '../ui/theme';
 
 export type StationDetailsProps = { station: Station; readOnly: boolean };
 
+/** "Suspended by Ann of Harbour Circle since … UTC: it does not send." */
+function suspendedLine(suspension: NonNullable<Station['suspension']>) {
+  const by = suspension.clubName ? `${suspension.byName ?? 'an admin'} of ${suspension.clubName}` : 'the club';
+  return `Suspended by ${by} since ${formatUtcDateTime(suspension.at)}: it does not send.`;
+}
+
 export function StationDetails({ station, readOnly }: StationDetailsProps) {
   return (
     <View style={styles.wrap}>
       {station.suspension ? (
         <Card tone="signal" style={styles.suspended}>
-          <Text variant="label">Suspended by the club since {formatUtcDateTime(station.suspension.at)}: it does not send.</Text>
+          <Text variant="label">{suspendedLine(station.suspension)}</Text>
           <Text>Reason: {station.suspension.reason}</Text>
         </Card>
       ) : null}

@@ -4,8 +4,9 @@ import * as m0001 from './migrations/0001-accounts-and-stations';
 import * as m0002 from './migrations/0002-units-and-station-bands';
 import * as m0003 from './migrations/0003-schedules-and-clubs';
 import * as m0004 from './migrations/0004-devices';
-import * as m0011 from './migrations/0011-station-change-feed';
+import * as m0005 from './migrations/0005-suspended-by';
 import * as m0008 from './migrations/0008-reception-reports';
+import * as m0011 from './migrations/0011-station-change-feed';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
@@ -13,8 +14,9 @@ const migrations = [
   { name: '0002-units-and-station-bands', ...m0002 },
   { name: '0003-schedules-and-clubs', ...m0003 },
   { name: '0004-devices', ...m0004 },
-  { name: '0011-station-change-feed', ...m0011 },
+  { name: '0005-suspended-by', ...m0005 },
   { name: '0008-reception-reports', ...m0008 },
+  { name: '0011-station-change-feed', ...m0011 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

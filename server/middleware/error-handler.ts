@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import type { ApiErrorBody } from '@/shared/api/contracts';
 import { AppError, statusOf } from '../lib/app-error';
+import { isDatabaseUnavailable, UNAVAILABLE_MESSAGE } from '../lib/db-errors';
 import type { Logger } from '../lib/logger';
 
 function fieldsOf(error: ZodError): Record<string, string> {
@@ -17,7 +18,13 @@ function describe(fields: Record<string, string>) {
   return `Check ${Object.keys(fields).join(', ')}: ${Object.values(fields)[0]}`;
 }
 
-type BodyParserError = Error & { type?: string; status?: number };
+type BodyParserError = Error & { type?: string; status?: number; statusCode?: number };
+
+/** A 4xx the framework or a parser attached to its error (a path that cannot be decoded, a malformed upload). */
+function clientStatusOf(error: BodyParserError): number | null {
+  const status = error.status ?? error.statusCode;
+  return typeof status === 'number' && status >= 400 && status < 500 ? status : null;
+}
 
 /** The one place that turns errors into `{ error: { code, message, fields } }`. Mounted last. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
@@ -38,15 +45,27 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     } else if (parserError.type === 'entity.parse.failed') {
       status = 400;
       body = { error: { code: 'bad-request', message: 'The request body is not valid JSON', fields: { body: 'Send valid JSON' } } };
-    } else if (parserError.type && parserError.status && parserError.status < 500) {
-      status = parserError.status;
-      body = { error: { code: status === 415 ? 'unsupported-media-type' : 'bad-request', message: parserError.message } };
+    } else if (error instanceof URIError) {
+      // Express decodes path parameters; "%", "%zz" or an invalid UTF-8 sequence cannot be decoded.
+      status = 400;
+      const message = 'The address contains a malformed %-escape: write % as %25';
+      body = { error: { code: 'bad-request', message, fields: { path: message } } };
+    } else if (clientStatusOf(parserError) !== null) {
+      status = clientStatusOf(parserError)!;
+      const code =
+        status === 415 ? 'unsupported-media-type' : status === 413 ? 'payload-too-large' : status === 404 ? 'not-found' : 'bad-request';
+      body = { error: { code, message: parserError.message } };
+    } else if (isDatabaseUnavailable(error)) {
+      status = 503;
+      logger.warn({ err: error, method: req.method, url: req.originalUrl }, 'database unavailable');
+      body = { error: { code: 'unavailable', message: UNAVAILABLE_MESSAGE } };
     } else {
       status = 500;
       logger.error({ err: error, method: req.method, url: req.originalUrl }, 'unhandled error');
       body = { error: { code: 'internal', message: 'Something went wrong on the server. It has been logged.' } };
     }
     if (res.headersSent) return;
+    if (status === 503) res.setHeader('Retry-After', '5');
     res.status(status).json(body);
   };
 }

@@ -1,5 +1,5 @@
 import { z } from './zod-setup';
-import { callsignField, emailField, passwordField } from './fields';
+import { callsignField, emailField, nameText, passwordField } from './fields';
 
 export const signInInput = z.object({
   email: emailField,
@@ -9,7 +9,7 @@ export type SignInInput = z.infer<typeof signInInput>;
 
 export const registerInput = z.object({
   email: emailField,
-  displayName: z.string().trim().min(2, 'Use at least 2 characters').max(80, 'Use at most 80 characters'),
+  displayName: nameText(80).min(2, 'Use at least 2 characters'),
   password: passwordField,
   callsign: z.union([callsignField, z.literal('')]).optional(),
 });

@@ -1,8 +1,8 @@
-import { emailField } from './fields';
+import { emailField, nameText, noteText } from './fields';
 import { z } from './zod-setup';
 
 export const clubInput = z.object({
-  name: z.string().trim().min(3, 'Give the club a name of at least 3 characters').max(120, 'Use at most 120 characters'),
+  name: nameText(120).min(3, 'Give the club a name of at least 3 characters'),
   maxPowerDbm: z
     .number()
     .int('Give the limit in whole dBm')
@@ -18,16 +18,14 @@ export const invitationInput = z.object({ email: emailField });
 export const acceptInvitationInput = z.object({ token: z.string().min(20, 'The invitation link is incomplete').max(200) });
 export const memberRoleInput = z.object({ role: z.enum(['member', 'admin'], { message: 'The role is member or admin' }) });
 export const suspensionInput = z.object({
-  reason: z
-    .string()
-    .trim()
+  reason: noteText(300)
     .min(5, 'Say in a few words why the station is stopped (at least 5 characters)')
     .max(300, 'Use at most 300 characters'),
 });
 export const offsetProposalInput = z.object({
   stationId: z.number().int().positive(),
   proposedOffsetHz: z.number().min(1400, 'The audio offset must be 1400–1600 Hz').max(1600, 'The audio offset must be 1400–1600 Hz'),
-  reason: z.string().trim().max(300).optional().default('Separates this station from another club station in the same slots'),
+  reason: noteText(300).optional().default('Separates this station from another club station in the same slots'),
 });
 
 export type ClubMember = {

@@ -1,12 +1,12 @@
+import { labelText, utcTimestampField } from './fields';
 import { TIME_SOURCES, bandIdField } from './unit';
 import { z } from './zod-setup';
 
-const isoUtc = (label: string) =>
-  z.iso.datetime({ offset: true, message: `Give ${label} as an ISO 8601 UTC time, e.g. 2026-12-02T10:00:01Z` });
+const isoUtc = utcTimestampField;
 
 export const heartbeatInput = z.object({
   uptimeS: z.number().int('uptimeS is whole seconds').min(0, 'uptimeS cannot be negative'),
-  firmwareVersion: z.string().trim().min(1, 'Give the firmware version').max(40),
+  firmwareVersion: labelText(40).min(1, 'Give the firmware version'),
   timeSource: z.enum(TIME_SOURCES, { message: 'timeSource is network, gps or rtc' }),
   clockOffsetMs: z
     .number()
@@ -19,7 +19,7 @@ export const heartbeatInput = z.object({
     .nullable()
     .optional()
     .default(null),
-  errorCodes: z.array(z.string().trim().min(1).max(16)).max(20).optional().default([]),
+  errorCodes: z.array(labelText(16).min(1)).max(20).optional().default([]),
 });
 export type HeartbeatInput = z.input<typeof heartbeatInput>;
 
@@ -30,7 +30,7 @@ export const transmissionLogInput = z.object({
         startUtc: isoUtc('startUtc'),
         bandId: bandIdField,
         frequencyHz: z.number().positive('frequencyHz must be above 0'),
-        messageText: z.string().trim().min(3).max(40),
+        messageText: labelText(40).min(3),
       }),
     )
     .min(1, 'Send at least one transmission')

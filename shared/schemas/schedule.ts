@@ -14,6 +14,7 @@ import {
   MIN_STEP_SLOTS,
   type ScheduleRules,
 } from '../domain/schedule/model';
+import { nameText, utcTimestampField } from './fields';
 import { bandIdField } from './unit';
 import { z } from './zod-setup';
 
@@ -80,10 +81,14 @@ const dateField = (label: string) =>
   z
     .string()
     .trim()
-    .refine((v) => dayNumber(v) !== null, `Give the ${label} date as YYYY-MM-DD, a real calendar day (UTC)`);
+    .refine((v) => dayNumber(v) !== null, `Give the ${label} date as YYYY-MM-DD, a real calendar day (UTC)`)
+    .refine(
+      (v) => dayNumber(v) === null || (v >= '2000-01-01' && v < '2100-01-01'),
+      `Give the ${label} date between the years 2000 and 2099`,
+    );
 
 const fields = {
-  name: z.string().trim().min(1, 'Give the schedule a name').max(80, 'Use at most 80 characters'),
+  name: nameText(80).min(1, 'Give the schedule a name'),
   steps: z
     .array(rotationStepField)
     .min(1, 'Add at least one band to the rotation')
@@ -164,3 +169,9 @@ export function applySchedulePatch(schedule: Schedule, patch: Partial<ScheduleVa
 // compile-time check: a stored schedule is what the domain plans from
 const _asRules = (s: Schedule): ScheduleRules => s;
 void _asRules;
+
+/** GET …/plan?from=&to=: both optional ISO 8601 UTC times (the server fills in now and a day later). */
+export const planQueryInput = z.object({
+  from: utcTimestampField('from').optional(),
+  to: utcTimestampField('to').optional(),
+});

@@ -1,7 +1,7 @@
 import { LICENCE_REGIONS, type BandId, type LicenceRegion } from '../domain/bands';
 import { validateCallsign } from '../domain/wspr/callsign';
 import { WINDOW_HIGH_OFFSET_HZ, WINDOW_LOW_OFFSET_HZ } from '../domain/tones';
-import { callsignField, locatorField } from './fields';
+import { callsignField, locatorField, nameText, noteText } from './fields';
 import { bandIdField } from './unit';
 import { z } from './zod-setup';
 
@@ -23,10 +23,10 @@ export const audioOffsetField = z
   .max(WINDOW_HIGH_OFFSET_HZ, `The audio offset must be ${WINDOW_LOW_OFFSET_HZ}–${WINDOW_HIGH_OFFSET_HZ} Hz`);
 
 export const stationInput = z.object({
-  name: z.string().trim().min(1, 'Give the station a name').max(80, 'Use at most 80 characters'),
+  name: nameText(80).min(1, 'Give the station a name'),
   callsign: encodableCallsign,
   locator: locatorField,
-  notes: z.string().trim().max(2000, 'Use at most 2000 characters').optional().default(''),
+  notes: noteText(2000).optional().default(''),
   unitId: z.number().int().positive().nullable().optional().default(null),
   region: z
     .enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]])
@@ -42,7 +42,7 @@ export const stationPatch = z
     name: stationInput.shape.name,
     callsign: encodableCallsign,
     locator: locatorField,
-    notes: z.string().trim().max(2000, 'Use at most 2000 characters'),
+    notes: noteText(2000),
     unitId: z.number().int().positive().nullable(),
     region: z.enum(LICENCE_REGIONS as [LicenceRegion, ...LicenceRegion[]]),
     audioOffsetHz: audioOffsetField,
@@ -76,7 +76,8 @@ export type Station = {
   referenceErrorPpm: number | null;
   bands: StationBand[];
   /** set while a club admin has stopped the station */
-  suspension: { at: string; reason: string; clubId: number | null } | null;
+  /** who stopped the station and why; kept after the owner leaves the club, so that club's admins can still lift it */
+  suspension: { at: string; reason: string; clubId: number | null; clubName: string | null; byName: string | null } | null;
   createdAt: string;
   updatedAt: string;
 };

@@ -1,4 +1,5 @@
 import { BAND_IDS, type BandId } from '../domain/bands';
+import { labelText, nameText, noteText } from './fields';
 import { z } from './zod-setup';
 
 export const TIME_SOURCES = ['network', 'gps', 'rtc'] as const;
@@ -19,7 +20,7 @@ export const generatorKindLabels: Record<(typeof GENERATOR_KINDS)[number], strin
 
 export const bandIdField = z.enum(BAND_IDS as [BandId, ...BandId[]], { message: `Use one of ${BAND_IDS.join(', ')}` });
 
-const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
+const text = noteText;
 
 export const lowPassFilterInput = z.object({
   bands: z.array(bandIdField).min(1, 'Name at least one band this filter serves').max(4),
@@ -43,9 +44,9 @@ export const antennaInput = z.object({
 });
 
 export const unitInput = z.object({
-  name: text(80).min(1, 'Give the unit a name'),
-  serialLabel: text(60).default(''),
-  controller: text(80).default(''),
+  name: nameText(80).min(1, 'Give the unit a name'),
+  serialLabel: labelText(60).default(''),
+  controller: labelText(80).default(''),
   timeSource: z.enum(TIME_SOURCES),
   generatorKind: z.enum(GENERATOR_KINDS),
   referenceHz: z.number().min(1e6, 'The reference is at least 1 MHz').max(200e6, 'The reference is at most 200 MHz'),

@@ -200,7 +200,7 @@ for (const viewport of VIEWPORTS) {
         const suspended = (await call<{ suspension: unknown }>(member.page, 'GET', `/api/stations/${station.body.id}`)).body;
         assert.ok(suspended.suspension, 'the station says suspended');
         await member.page.goto(`${BASE_URL}/stations/${station.body.id}`);
-        await visibleText(member.page, /Suspended by the club since .* UTC/).waitFor();
+        await visibleText(member.page, /Suspended by .+ of .+ since .* UTC/).waitFor();
         await button(admin.page, `Lift the stop on ${stationName}`).click();
         await visibleText(admin.page, `Let ${stationName} send again?`).waitFor();
         await screenshot(admin.page, `club-lift-dialog-${v}`);

@@ -15,6 +15,9 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
   declare suspendedAt: Date | null;
   declare suspendedReason: string | null;
   declare suspendedByClubId: number | null;
+  declare suspendedByUserId: CreationOptional<number | null>;
+  declare suspendedByName: CreationOptional<string | null>;
+  declare suspendedByClubName: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -35,6 +38,9 @@ export class StationModel extends Model<InferAttributes<StationModel>, InferCrea
         suspendedAt: { type: DataTypes.DATE(3), allowNull: true },
         suspendedReason: { type: DataTypes.STRING(300), allowNull: true },
         suspendedByClubId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        suspendedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        suspendedByName: { type: DataTypes.STRING(80), allowNull: true },
+        suspendedByClubName: { type: DataTypes.STRING(120), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

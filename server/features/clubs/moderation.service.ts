@@ -11,10 +11,11 @@ import { memberIdsOf, requireAdmin } from './access';
 import { findClub } from './clubs.repo';
 import * as repo from './proposals.repo';
 
-/** The station, if its owner belongs to the club. */
-async function clubStation(clubId: number, stationId: number) {
+/** The station, if its owner belongs to the club or (for lifting) the club suspended it. */
+async function clubStation(clubId: number, stationId: number, { suspendedByThisClub = false } = {}) {
   const station = await stations.stationById(stationId);
-  if (!station || !(await memberIdsOf(clubId)).includes(station.ownerId))
+  const ours = station && suspendedByThisClub && station.suspension?.clubId === clubId;
+  if (!station || (!ours && !(await memberIdsOf(clubId)).includes(station.ownerId)))
     throw new AppError('not-found', `Station ${stationId} is not a station of this club`);
   const owner = (await contactOf(station.ownerId))!;
   return { station, owner };
@@ -25,7 +26,11 @@ export async function suspend(db: TransactionRunner, user: SessionUser, clubId: 
   const { station, owner } = await clubStation(clubId, stationId);
   if (station.suspension) throw new AppError('conflict', `${station.name} is already suspended`);
   await db.transaction(async (transaction) => {
-    await stations.setSuspension(stationId, { reason, clubId }, transaction);
+    await stations.setSuspension(
+      stationId,
+      { reason, clubId, clubName: club.name, byUserId: user.id, byName: user.displayName },
+      transaction,
+    );
     await notify(owner.id, 'suspension', `${club.name} suspended ${station.name}: ${reason}`, `/stations/${stationId}`, transaction);
     await audit.record(
       {
@@ -52,8 +57,15 @@ export async function suspend(db: TransactionRunner, user: SessionUser, clubId: 
 
 export async function lift(db: TransactionRunner, user: SessionUser, clubId: number, stationId: number) {
   const { club } = await requireAdmin(user, clubId);
-  const { station, owner } = await clubStation(clubId, stationId);
+  // A suspension stays with the club that made it: its admins can lift it even after the owner left.
+  const { station, owner } = await clubStation(clubId, stationId, { suspendedByThisClub: true });
   if (!station.suspension) throw new AppError('conflict', `${station.name} is not suspended`);
+  if (station.suspension.clubId !== null && station.suspension.clubId !== clubId) {
+    throw new AppError(
+      'forbidden',
+      `${station.name} was suspended by ${station.suspension.clubName ?? 'another club'}; only its admins can lift it`,
+    );
+  }
   await db.transaction(async (transaction) => {
     await stations.setSuspension(stationId, null, transaction);
     await notify(

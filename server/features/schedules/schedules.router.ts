@@ -1,24 +1,18 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import { scheduleInput, schedulePatch } from '@/shared/schemas/schedule';
-import { z } from '@/shared/schemas/zod-setup';
+import { planQueryInput, scheduleInput, schedulePatch } from '@/shared/schemas/schedule';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import * as schedules from './schedules.service';
 
-const planQuery = z
-  .object({
-    from: z.iso.datetime({ offset: true, message: 'Give from as an ISO 8601 UTC time, e.g. 2026-12-02T00:00:00Z' }).optional(),
-    to: z.iso.datetime({ offset: true, message: 'Give to as an ISO 8601 UTC time, e.g. 2026-12-03T00:00:00Z' }).optional(),
-  })
-  .transform((q, ctx) => {
-    const fromMs = q.from ? Date.parse(q.from) : Date.now();
-    const toMs = q.to ? Date.parse(q.to) : fromMs + 86_400_000;
-    if (toMs <= fromMs) ctx.addIssue({ code: 'custom', path: ['to'], message: 'to must be later than from' });
-    if (toMs - fromMs > schedules.MAX_PLAN_RANGE_MS)
-      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Ask for at most 8 days at a time' });
-    return { fromMs, toMs };
-  });
+const planQuery = planQueryInput.transform((q, ctx) => {
+  const fromMs = q.from ? Date.parse(q.from) : Date.now();
+  const toMs = q.to ? Date.parse(q.to) : fromMs + 86_400_000;
+  if (toMs <= fromMs) ctx.addIssue({ code: 'custom', path: ['to'], message: 'to must be later than from' });
+  if (toMs - fromMs > schedules.MAX_PLAN_RANGE_MS)
+    ctx.addIssue({ code: 'custom', path: ['to'], message: 'Ask for at most 8 days at a time' });
+  return { fromMs, toMs };
+});
 
 /** Mounted at /api/stations/:id — the station's schedule and its plan. */
 export function schedulesRouter({ sequelize }: { sequelize: Sequelize }) {

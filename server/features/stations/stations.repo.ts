@@ -34,7 +34,13 @@ function toStation(row: Row): Station {
     referenceErrorPpm: row.referenceErrorPpm,
     bands: (row.bands ?? []).map(toBand).sort((a, b) => a.bandId.localeCompare(b.bandId)),
     suspension: row.suspendedAt
-      ? { at: row.suspendedAt.toISOString(), reason: row.suspendedReason ?? '', clubId: row.suspendedByClubId }
+      ? {
+          at: row.suspendedAt.toISOString(),
+          reason: row.suspendedReason ?? '',
+          clubId: row.suspendedByClubId,
+          clubName: row.suspendedByClubName ?? null,
+          byName: row.suspendedByName ?? null,
+        }
       : null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
@@ -124,11 +130,27 @@ export async function setReferenceError(id: number, referenceErrorPpm: number | 
   stationChangedAfter(transaction, id);
 }
 
-export async function setSuspension(id: number, suspension: { reason: string; clubId: number } | null, transaction?: Transaction) {
+export type SuspensionRecord = { reason: string; clubId: number; clubName: string; byUserId: number; byName: string };
+
+export async function setSuspension(id: number, suspension: SuspensionRecord | null, transaction?: Transaction) {
   await StationModel.update(
     suspension
-      ? { suspendedAt: new Date(), suspendedReason: suspension.reason, suspendedByClubId: suspension.clubId }
-      : { suspendedAt: null, suspendedReason: null, suspendedByClubId: null },
+      ? {
+          suspendedAt: new Date(),
+          suspendedReason: suspension.reason,
+          suspendedByClubId: suspension.clubId,
+          suspendedByClubName: suspension.clubName,
+          suspendedByUserId: suspension.byUserId,
+          suspendedByName: suspension.byName,
+        }
+      : {
+          suspendedAt: null,
+          suspendedReason: null,
+          suspendedByClubId: null,
+          suspendedByClubName: null,
+          suspendedByUserId: null,
+          suspendedByName: null,
+        },
     { where: { id }, transaction },
   );
   stationChangedAfter(transaction, id);

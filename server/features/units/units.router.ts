@@ -1,29 +1,21 @@
 import { Router } from 'express';
-import multer from 'multer';
 import type { Sequelize } from 'sequelize';
 import { PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
-import { AppError } from '../../lib/app-error';
 import type { Logger } from '../../lib/logger';
 import { parseId } from '../../lib/params';
+import { singleUpload } from '../../lib/upload';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import type { FileStorage } from '../../storage';
 import * as photos from './photos.service';
 import * as units from './units.service';
 
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 },
-  fileFilter: (_req, file, done) => {
-    if ((PHOTO_TYPES as readonly string[]).includes(file.mimetype)) return done(null, true);
-    done(
-      new AppError('unsupported-media-type', `Photos must be JPEG, PNG or WebP; this file is ${file.mimetype}`, {
-        photo: 'Choose a JPEG, PNG or WebP photo',
-      }),
-    );
-  },
-}).single('photo');
-
-const MB = PHOTO_MAX_BYTES / 1024 / 1024;
+const upload = singleUpload({
+  field: 'photo',
+  maxBytes: PHOTO_MAX_BYTES,
+  types: PHOTO_TYPES,
+  what: 'photo',
+  typesInWords: 'JPEG, PNG or WebP',
+});
 
 export function unitsRouter({ sequelize, storage, logger }: { sequelize: Sequelize; storage: FileStorage; logger: Logger }) {
   const router = Router();
@@ -51,21 +43,9 @@ export function unitsRouter({ sequelize, storage, logger }: { sequelize: Sequeli
     res.status(201).json(await units.copy(sequelize, currentUser(req), id(req.params.id)));
   });
 
-  router.post('/:id/photos', (req, res, next) => {
-    upload(req, res, async (error: unknown) => {
-      try {
-        if (error instanceof multer.MulterError) {
-          throw error.code === 'LIMIT_FILE_SIZE'
-            ? new AppError('payload-too-large', `A photo may be at most ${MB} MB`, { photo: `Choose a photo of at most ${MB} MB` })
-            : new AppError('bad-request', `Upload one photo in the field 'photo' (${error.message})`, { photo: 'Upload one photo' });
-        }
-        if (error) throw error;
-        if (!req.file) throw new AppError('bad-request', 'No photo was sent', { photo: 'Choose a photo to upload' });
-        res.status(201).json(await photos.addPhoto(sequelize, storage, currentUser(req), id(req.params.id), req.file.buffer));
-      } catch (failure) {
-        next(failure);
-      }
-    });
+  router.post('/:id/photos', async (req, res) => {
+    const file = await upload(req, res);
+    res.status(201).json(await photos.addPhoto(sequelize, storage, currentUser(req), id(req.params.id), file.buffer));
   });
   for (const which of ['main', 'thumb'] as const) {
     router.get(which === 'main' ? '/:id/photos/:photoId' : '/:id/photos/:photoId/thumb', async (req, res) => {

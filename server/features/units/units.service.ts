@@ -64,7 +64,10 @@ export async function update(db: TransactionRunner, user: SessionUser, id: numbe
 
 /** A new unit with the same hardware (photos stay with the original). */
 export async function copy(db: TransactionRunner, user: SessionUser, id: number) {
-  const values = specOf(await getFor(user, id));
+  // A club admin may read a member's unit, but a copy is the member's design: only its owner copies it.
+  const unit = await getFor(user, id);
+  if (unit.ownerId !== user.id) throw new AppError('forbidden', `Unit ${id} belongs to ${unit.ownerName}; only its owner can copy it`);
+  const values = specOf(unit);
   return create(db, user, { ...values, name: `${values.name} (copy)`.slice(0, 80), serialLabel: '' }, `Copied unit ${values.name}`);
 }
 
