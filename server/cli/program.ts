@@ -15,11 +15,13 @@ import {
   latLonToLocator,
   LICENCE_REGIONS,
   locatorToLatLon,
+  MAX_WSPR_POWER_DBM,
+  MIN_WSPR_POWER_DBM,
+  nearestWsprLevel,
   pathBetweenLocators,
   planMessages,
   planSynth,
   predictOffsets,
-  requiredFilterAttenuation,
   toneFrequenciesHz,
   type FilterKind,
   type LicenceRegion,
@@ -27,7 +29,7 @@ import {
 } from '../../shared/domain';
 import { airtimeByDay, effectiveDuty, expandPlan, validateSchedule } from '../../shared/domain/schedule';
 import type { StationSettings, UnitHardware } from '../../shared/domain/workshop';
-import { FILTER_LOSS_DB } from '../../shared/domain/workshop';
+import { FILTER_LOSS_DB, spuriousRequirement } from '../../shared/domain/workshop';
 import { scheduleInput } from '../../shared/schemas/schedule';
 
 export type CliIo = { out: (line: string) => void; err: (line: string) => void; setExitCode: (code: number) => void };
@@ -251,50 +253,66 @@ export function buildProgram(io: CliIo = defaultIo): Command {
   program
     .command('filter')
     .description('Harmonics of the square-wave drive, the attenuation needed, and a low-pass filter design with toroid turns.')
-    .option('--band <band>', 'band to filter for (its dial frequency is the fundamental)')
-    .option('--frequency <Hz>', 'fundamental frequency instead of a band', number('Frequency'))
-    .option('--cutoff <Hz>', 'filter cutoff; default 1.15 × the fundamental (common practice, no source)', number('Cutoff'))
+    .option('--band <band>', 'band to filter for (the carrier is its dial frequency + --offset)')
+    .option('--offset <Hz>', 'audio offset of the carrier above the dial', number('Offset'), 1500)
+    .option('--frequency <Hz>', 'carrier frequency instead of a band', number('Frequency'))
+    .option('--cutoff <Hz>', 'filter cutoff; default 1.15 × the carrier (common practice, no source)', number('Cutoff'))
     .option('--kind <kind>', `filter kind: ${FILTER_KINDS.join(', ')}`, 'chebyshev-0.5')
     .option('--order <n>', '3, 5 or 7', number('Order'), 5)
     .option('--core <core>', 'iron-powder toroid for the inductors, e.g. T-50-2', 'T-50-2')
     .option('--duty <fraction>', 'duty cycle of the drive, 0 to 1', number('Duty cycle'), 0.5)
-    .option(
-      '--limit <dB>',
-      'spurious limit below the fundamental; default 43 dB under 30 MHz, 60 dB above (47 CFR 97.307)',
-      number('Limit'),
-    )
+    .option('--power <dBm>', 'output power; the ITU rule outside region 2 depends on it', number('Power'), 23)
+    .option('--limit <dB>', "spurious limit below the carrier; default the region's rule (named in the output)", number('Limit'))
     .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
     .action(
       (opts: {
         band?: string;
+        offset: number;
         frequency?: number;
         cutoff?: number;
         kind: string;
         order: number;
         core: string;
         duty: number;
+        power: number;
         limit?: number;
         region: LicenceRegion;
       }) => {
-        let fundamentalHz: number;
-        if (opts.frequency !== undefined) fundamentalHz = opts.frequency;
+        let carrierHz: number;
+        if (opts.frequency !== undefined) carrierHz = opts.frequency;
         else if (opts.band) {
           const b = bandFor(opts.band, opts.region);
           if (!b.ok) return fail(b);
-          fundamentalHz = b.band.dialHz + 1500;
+          carrierHz = commandForBand(b.band.dialHz, opts.offset, { referenceErrorPpm: 0 }).carrierHz;
         } else return fail('Give --band or --frequency.');
+        if (!(carrierHz > 0)) return fail('The carrier frequency must be positive.');
         if (!(opts.duty > 0 && opts.duty < 1)) return fail('Duty cycle must be between 0 and 1.');
-        const harmonics = requiredFilterAttenuation(fundamentalHz, { dutyCycle: opts.duty, limitDb: opts.limit });
+        const spurious = spuriousRequirement({
+          region: opts.region,
+          carrierHz,
+          powerW: dbmToMw(opts.power) / 1000,
+          dutyCycle: opts.duty,
+          limitDb: opts.limit,
+        });
+        const harmonics = spurious.harmonics;
         const r = designLowPass({
           kind: opts.kind as FilterKind,
           order: opts.order,
-          cutoffHz: opts.cutoff ?? fundamentalHz * 1.15,
+          cutoffHz: opts.cutoff ?? carrierHz * 1.15,
           core: opts.core,
           atFrequenciesHz: harmonics.map((h) => h.frequencyHz),
         });
         if (!r.ok) return fail(r);
         const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
-        emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
+        emit({
+          fundamentalHz: carrierHz,
+          carrierHz,
+          region: opts.region,
+          limit: spurious.limit,
+          harmonics,
+          design: r.design,
+          meetsLimit: meets,
+        });
         if (!meets)
           io.err(
             'faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.',
@@ -346,6 +364,11 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       if (!Number.isFinite(fromMs)) return fail(`--from must be an ISO 8601 time such as 2026-12-02T00:00Z; got '${opts.from}'.`);
       if (!(opts.hours > 0 && opts.hours <= 744)) return fail('--hours must be more than 0 and at most 744 (a month).');
       if (opts.duty !== undefined && opts.every !== undefined) return fail('Give --duty or --every, not both.');
+      if (!(opts.power >= MIN_WSPR_POWER_DBM && opts.power <= MAX_WSPR_POWER_DBM))
+        return fail(`--power ${opts.power} dBm is outside what WSPR can report: give 0 to 60 dBm (0, 3, 7, 10, 13 … 60).`);
+      const reported = nearestWsprLevel(opts.power);
+      if (reported.rounded)
+        io.err(`faintline: power ${opts.power} dBm is not a WSPR level; the messages report ${reported.reportedDbm} dBm.`);
       const steps: { bandId: string; slots: number; activeHoursUtc: { fromHour: number; toHour: number } | null }[] = [];
       for (const text of opts.band) {
         const m = /^([^@]+)(?:@(\d{1,2})-(\d{1,2}))?$/.exec(text.trim());
@@ -407,7 +430,7 @@ export function buildProgram(io: CliIo = defaultIo): Command {
         tolerancePpm: 0,
         tempCoPpmPerC: null,
         disciplined: true,
-        generatorLevelDbm: opts.power + FILTER_LOSS_DB,
+        generatorLevelDbm: reported.reportedDbm + FILTER_LOSS_DB,
         attenuatorDb: 0,
         amplifier: null,
         filters: bandIds.flatMap((bandId) => {
