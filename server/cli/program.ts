@@ -27,6 +27,7 @@ import {
   type LicenceRegion,
   type Refusal,
 } from '../../shared/domain';
+import { amplifierSupply, designPad, estimateExposure, neededAttenuation } from '../../shared/domain/bench';
 import { airtimeByDay, effectiveDuty, expandPlan, validateSchedule } from '../../shared/domain/schedule';
 import type { StationSettings, UnitHardware } from '../../shared/domain/workshop';
 import { FILTER_LOSS_DB, spuriousRequirement } from '../../shared/domain/workshop';
@@ -319,6 +320,105 @@ export function buildProgram(io: CliIo = defaultIo): Command {
           );
       },
     );
+
+  program
+    .command('pad')
+    .description(
+      'A matched resistive attenuator: exact pi and T resistors, the nearest E24 parts and what they really give, and the heat in each. ' +
+        'With --generator and --want-dbm (or --want-mw), first works out the attenuation the chain needs.',
+    )
+    .option('--attenuation-db <dB>', 'attenuation of the pad', number('Attenuation'))
+    .option('--impedance-ohm <ohm>', 'line impedance', number('Impedance'), 50)
+    .option('--power-w <W>', 'power going into the pad, for the heat in each resistor', number('Power'), 0.01)
+    .option('--rating-w <W>', "each resistor's power rating", number('Rating'), 0.25)
+    .option('--generator <dBm>', 'generator output level (to work out the attenuation)', number('Generator level'))
+    .option('--gain <dB>', 'amplifier gain after the pad', number('Gain'))
+    .option('--saturation <dBm>', "amplifier's saturated output", number('Saturation'))
+    .option('--filter-loss <dB>', 'low-pass filter insertion loss', number('Filter loss'), 0)
+    .option('--want-dbm <dBm>', 'wanted output in dBm', number('Wanted output'))
+    .option('--want-mw <mW>', 'wanted output in mW', number('Wanted output'))
+    .action(
+      (opts: {
+        attenuationDb?: number;
+        impedanceOhm: number;
+        powerW: number;
+        ratingW: number;
+        generator?: number;
+        gain?: number;
+        saturation?: number;
+        filterLoss: number;
+        wantDbm?: number;
+        wantMw?: number;
+      }) => {
+        let attenuationDb = opts.attenuationDb;
+        let needed: unknown = undefined;
+        if (attenuationDb === undefined) {
+          if (opts.generator === undefined || (opts.wantDbm === undefined && opts.wantMw === undefined))
+            return fail('Give --attenuation-db, or --generator with --want-dbm or --want-mw.');
+          const r = neededAttenuation({
+            generatorDbm: opts.generator,
+            amplifierGainDb: opts.gain,
+            amplifierSaturationDbm: opts.saturation,
+            filterLossDb: opts.filterLoss,
+            wanted: opts.wantMw !== undefined ? { mw: opts.wantMw } : { dbm: opts.wantDbm! },
+          });
+          if (!r.ok) return fail(r);
+          needed = plain(r);
+          for (const note of r.notes) io.err(`faintline: ${note}`);
+          if (r.neededDb <= 0) return emit({ needed });
+          attenuationDb = r.neededDb;
+        }
+        const pad = designPad({ attenuationDb, impedanceOhm: opts.impedanceOhm, inputW: opts.powerW, ratingW: opts.ratingW });
+        if (!pad.ok) return fail(pad);
+        emit({ ...(needed ? { needed } : {}), ...plain(pad) });
+        for (const caution of pad.cautions) io.err(`faintline: caution: ${caution}`);
+      },
+    );
+
+  program
+    .command('supply')
+    .description("An amplifier's DC input power, the heat it must shed, and the heatsink and fuse it needs.")
+    .requiredOption('--output-w <W>', 'RF output power', number('Output'))
+    .requiredOption('--supply-v <V>', 'supply voltage', number('Supply voltage'))
+    .option('--supply-a <A>', 'supply current while transmitting', number('Supply current'))
+    .option('--efficiency <fraction>', 'efficiency instead of a measured current, 0 to 1', number('Efficiency'))
+    .option('--drive-w <W>', 'RF drive into the amplifier', number('Drive'), 0)
+    .action((opts: { outputW: number; supplyV: number; supplyA?: number; efficiency?: number; driveW: number }) => {
+      const r = amplifierSupply({
+        rfOutputW: opts.outputW,
+        rfDriveW: opts.driveW,
+        supplyV: opts.supplyV,
+        supplyA: opts.supplyA,
+        efficiency: opts.efficiency,
+      });
+      if (!r.ok) return fail(r);
+      emit(plain(r));
+      for (const caution of r.cautions) io.err(`faintline: caution: ${caution}`);
+    });
+
+  program
+    .command('exposure')
+    .description(
+      'RF exposure estimate: EIRP and the distance beyond which the time-averaged power density is within the general-public limit ' +
+        '(47 CFR 1.1310 Table 1; far-field S = EIRP·duty/(4πr²)). An estimate only: local rules decide.',
+    )
+    .requiredOption('--power-w <W>', 'transmitter output power', number('Power'))
+    .requiredOption('--gain-dbi <dBi>', 'antenna gain over isotropic', number('Gain'))
+    .requiredOption('--frequency-hz <Hz>', 'transmit frequency', number('Frequency'))
+    .option('--duty <fraction>', 'share of time on the air, 0 to 1 (a WSPR beacon at one slot in five: 0.2)', number('Duty'), 1)
+    .option('--loss-db <dB>', 'feed-line loss', number('Loss'), 0)
+    .action((opts: { powerW: number; gainDbi: number; frequencyHz: number; duty: number; lossDb: number }) => {
+      const r = estimateExposure({
+        powerW: opts.powerW,
+        gainDbi: opts.gainDbi,
+        frequencyHz: opts.frequencyHz,
+        duty: opts.duty,
+        lossDb: opts.lossDb,
+      });
+      if (!r.ok) return fail(r);
+      emit(plain(r));
+      for (const caution of r.cautions) io.err(`faintline: caution: ${caution}`);
+    });
 
   program
     .command('plan')

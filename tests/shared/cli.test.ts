@@ -26,7 +26,7 @@ describe('faintline command', () => {
   it('when asked for help, lists the commands and exits 0', async () => {
     const r = await run('--help');
     expect(r.code).toBe(0);
-    for (const command of ['encode', 'messages', 'locator', 'path', 'tones', 'synth', 'power', 'filter']) {
+    for (const command of ['encode', 'messages', 'locator', 'path', 'tones', 'synth', 'power', 'filter', 'pad', 'supply', 'exposure']) {
       expect(r.stdout).toContain(command);
     }
   });
@@ -152,6 +152,46 @@ describe('faintline command', () => {
     expect(filter).toMatchObject({ meetsLimit: true });
   });
 
+  it('when designing a 10 dB pad, prints the exact pi and T resistors and the nearest E24 parts with what they give', async () => {
+    const r = await run('pad', '--attenuation-db', '10', '--impedance-ohm', '50');
+    expect(r.code).toBe(0);
+    const pad = lines(r)[0] as {
+      pi: { shuntOhm: number; seriesOhm: number };
+      t: { seriesOhm: number; shuntOhm: number };
+      e24: { pi: { shuntOhm: number; seriesOhm: number; attenuationDb: number; returnLossDb: number } };
+    };
+    // standard 50 Ω attenuator table (ARRL Handbook, from memory): 10 dB pi 96.2/71.2 Ω, T 26.0/35.1 Ω
+    expect(pad.pi).toEqual({ shuntOhm: expect.closeTo(96.25, 1), seriesOhm: expect.closeTo(71.15, 1) });
+    expect(pad.t).toEqual({ seriesOhm: expect.closeTo(25.97, 1), shuntOhm: expect.closeTo(35.14, 1) });
+    // E24 (IEC 60063): 100 Ω and 68 Ω; 100 ∥ (68 + 100 ∥ 50) = 50.33 Ω in, 9.63 dB through (worked by hand)
+    expect(pad.e24.pi).toMatchObject({ shuntOhm: 100, seriesOhm: 68, attenuationDb: expect.closeTo(9.629, 2) });
+  });
+
+  it('when estimating exposure for 0.2 W into a dipole on 20 m, prints EIRP, the limit, the distance and the source', async () => {
+    const r = await run(
+      'exposure',
+      '--power-w',
+      '0.2',
+      '--gain-dbi',
+      '2.15',
+      '--frequency-hz',
+      '14097100',
+      '--duty',
+      '0.2',
+      '--loss-db',
+      '0',
+    );
+    expect(r.code).toBe(0);
+    // EIRP = 0.2 · 10^0.215 W; 47 CFR 1.1310 Table 1: 180/f² mW/cm² at 14.0971 MHz = 9.0576 W/m²
+    expect(lines(r)[0]).toMatchObject({
+      eirpW: expect.closeTo(0.32812, 4),
+      limitWPerM2: expect.closeTo(9.0576, 3),
+      distanceM: expect.closeTo(Math.sqrt((0.2 * 0.32812) / (4 * Math.PI * 9.0576)), 4),
+      source: expect.stringContaining('1.1310'),
+    });
+    expect(r.stderr).toMatch(/Keep people/);
+  });
+
   it.each([
     [['encode', 'KABC FN42 37'], /no digit/],
     [['encode', 'K1ABC ZZ99 37'], /locator/],
@@ -160,6 +200,8 @@ describe('faintline command', () => {
     [['messages', '--callsign', 'PJ4/K1ABC/P', '--locator', 'FN42AB', '--power', '37'], /only one/],
     [['tones', '--band', '4m', '--region', 'itu2'], /no amateur allocation/],
     [['power', '--generator', 'ten'], /must be a number/],
+    [['pad', '--attenuation-db', '0'], /more than 0/],
+    [['exposure', '--power-w', '1', '--gain-dbi', '0', '--frequency-hz', '137500'], /outside the table/],
   ])('when given %j, exits non-zero and says what to fix on stderr', async (args, reason) => {
     const r = await run(...args);
     expect(r.code).not.toBe(0);

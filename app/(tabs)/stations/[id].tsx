@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { useSessionQuery } from '@/components/auth/queries';
 import { StationDeviceLinks } from '@/components/devices/station-device-links';
 import { useDeleteStationMutation, useStationQuery } from '@/components/stations/queries';
+import { ExposureCard } from '@/components/stations/exposure-card';
 import { StationDetails } from '@/components/stations/station-details';
 import { StationHeader } from '@/components/stations/station-header';
 import { useUnitQuery } from '@/components/units/queries';
@@ -57,6 +58,7 @@ export default function StationDetailRoute() {
           onOpenCalibration={() => router.push({ pathname: '/stations/[id]/calibrate', params: { id: String(stationId) } })}
           onOpenOnAir={() => router.push({ pathname: '/stations/[id]/on-air', params: { id: String(stationId) } })}
         />
+        <ExposureCard station={station.data} unit={unit.data ?? null} />
         <StationDetails station={station.data} readOnly={readOnly} />
       </>
     );

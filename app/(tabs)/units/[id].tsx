@@ -12,6 +12,7 @@ import {
   useUploadPhotoMutation,
 } from '@/components/units/queries';
 import type { UploadProgress } from '@/components/units/api-upload';
+import { FittedFilterCard } from '@/components/units/fitted-filter-card';
 import { LazyUnitDetails as UnitDetails } from '@/components/units/lazy-parts';
 import { UnitPhotos } from '@/components/units/unit-photos';
 import { generatorSummary } from '@/components/units/unit-summary';
@@ -121,6 +122,7 @@ export default function UnitDetailRoute() {
             <Text variant="label">Read-only: this unit belongs to {unit.data.ownerName}</Text>
           </Card>
         ) : null}
+        <FittedFilterCard unit={unit.data} readOnly={readOnly} />
         <FormSection title="Photos">
           <UnitPhotos
             unitName={unit.data.name}

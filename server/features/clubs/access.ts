@@ -16,3 +16,6 @@ export async function requireAdmin(user: SessionUser, clubId: number) {
   if (found.membership.role !== 'admin') throw new AppError('forbidden', `Only the admins of ${found.club.name} can do this`);
   return found;
 }
+
+/** Whether a club admin shares a club with an owner (so may read the owner's stations and units). */
+export { adminSharesClubWith } from './clubs.repo';

@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
 import { commandForBand } from '@/shared/domain/calibration';
 import { planSynth } from '@/shared/domain/synth';
-import { buildStationConfig } from '@/shared/domain/workshop';
+import { bandFor } from '@/shared/domain/bands';
+import { buildStationConfig, selectFilter } from '@/shared/domain/workshop';
 import { bytesToHex } from '@/shared/domain/wspr/pack';
 import type { Schedule, Station, Unit } from '@/shared/schemas';
 import { planFor } from '../schedules/plan';
@@ -29,9 +30,13 @@ export function deviceConfig(station: Station, unit: Unit | null, schedule: Sche
     const band = station.bands.find((b) => b.bandId === tx.bandId);
     const command = commandForBand(tx.dialHz, tx.audioOffsetHz, { referenceErrorPpm: 0, bandOffsetHz: band?.calibrationOffsetHz ?? 0 });
     const synth = unit?.generatorKind === 'pll' ? planSynth({ referenceHz: unit.referenceHz, targetsHz: command.commandTonesHz }) : null;
+    // the shared filter rule: which filter to put in circuit before keying (the plan only holds bands it allows)
+    const found = bandFor(tx.bandId, station.region);
+    const choice = unit && found.ok ? selectFilter(unit, found.band) : null;
     return {
       startUtc: tx.startUtc,
       bandId: tx.bandId,
+      filter: choice?.covered ? choice.select : null,
       carrierHz: Number(tx.carrierHz.toFixed(3)),
       commandHz: Number(tx.commandHz.toFixed(3)),
       messageText: tx.messageText,
@@ -53,6 +58,11 @@ export function deviceConfig(station: Station, unit: Unit | null, schedule: Sche
   });
   return {
     ...base,
+    filters: unit && {
+      selection: unit.filterSelection,
+      fitted: unit.filterSelection === 'hand' ? unit.fittedFilter : null,
+      list: unit.filters.map((f, index) => ({ index, bands: f.bands, cutoffHz: f.cutoffHz, controlCode: f.controlCode || null })),
+    },
     identity: { stationId: station.id, callsign: station.callsign, locator: station.locator },
     status: station.suspension ? 'suspended' : station.transmitEnabled ? 'transmit' : 'off',
     suspension: station.suspension && { reason: station.suspension.reason, sinceUtc: station.suspension.at },

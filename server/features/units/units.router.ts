@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import multer from 'multer';
-import { PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
+import { fittedFilterInput, PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import type { Logger } from '../../lib/logger';
 import { parseId } from '../../lib/params';
@@ -45,6 +45,10 @@ export function unitsRouter({ storage, logger }: { storage: FileStorage; logger:
     const removed = await units.remove(currentUser(req), id(req.params.id));
     res.status(204).end();
     void photos.removeStored(storage, removed, logger);
+  });
+  router.post('/:id/fitted-filter', async (req, res) => {
+    const { filterIndex } = fittedFilterInput.parse(req.body);
+    res.json(await units.recordFittedFilter(currentUser(req), id(req.params.id), filterIndex));
   });
   router.post('/:id/copy', async (req, res) => {
     res.status(201).json(await units.copy(currentUser(req), id(req.params.id)));

@@ -3,7 +3,7 @@ import { unitInput, type Unit, type UnitValues } from '@/shared/schemas';
 import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
-import { adminSharesClubWith } from '../clubs/clubs.repo';
+import { adminSharesClubWith } from '../clubs/access';
 import * as repo from './units.repo';
 
 const notFound = (id: number) => new AppError('not-found', `Unit ${id} does not exist`);
@@ -24,7 +24,8 @@ export async function getOwnedBy(user: SessionUser, id: number): Promise<Unit> {
   return unit;
 }
 
-const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...values }: Unit) => values;
+const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, fittedFilter: _f, ...values }: Unit) =>
+  values;
 
 export function create(user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
   return inTransaction(async (transaction) => {
@@ -84,4 +85,39 @@ export async function remove(user: SessionUser, id: number) {
     );
   });
   return photos;
+}
+
+const bandList = (bands: readonly string[]) => bands.map((b) => b.replace(/m$/, ' m')).join('/');
+
+/** "I fitted the 40 m filter": for hand-swapped filters, recorded with its UTC time and audited; it changes what may be planned. */
+export async function recordFittedFilter(user: SessionUser, id: number, filterIndex: number, now = new Date()) {
+  const unit = await getOwnedBy(user, id);
+  if (unit.filterSelection !== 'hand') {
+    throw new AppError('conflict', `Unit ${unit.name} does not have hand-swapped filters, so there is no fitted filter to record`, {
+      filterIndex: 'Set the unit’s filter selection to “swapped by hand” first',
+    });
+  }
+  const filter = unit.filters[filterIndex];
+  if (!filter) {
+    throw new AppError('bad-request', `Unit ${unit.name} has ${unit.filters.length} filters; there is no filter ${filterIndex + 1}`, {
+      filterIndex: 'Choose one of the unit’s filters',
+    });
+  }
+  return inTransaction(async (transaction) => {
+    const updated = await repo.setFittedFilter(id, filterIndex, now, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'unit.filter-fitted',
+        entityType: 'unit',
+        entityId: id,
+        summary: `Fitted the ${bandList(filter.bands)} filter in unit ${unit.name} at ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC`,
+        before: { fittedFilter: unit.fittedFilter },
+        after: { fittedFilter: updated.fittedFilter },
+      },
+      transaction,
+    );
+    return updated;
+  });
 }
