@@ -101,3 +101,19 @@ export function useDeletePhotoMutation(unitId: number) {
       ]),
   });
 }
+
+/** "I fitted this filter" for hand-swapped filters: the unit, and every plan that depends on it, change. */
+export function useFittedFilterMutation(unitId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (filterIndex: number) => api<Unit>(`/units/${unitId}/fitted-filter`, { method: 'POST', body: { filterIndex } }),
+    onSuccess: (updated) => {
+      queryClient.setQueryData(unitKeys.detail(unitId), updated);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: unitKeys.list() }),
+        queryClient.invalidateQueries({ queryKey: ['stations'] }),
+        queryClient.invalidateQueries({ queryKey: ['schedules'] }),
+      ]);
+    },
+  });
+}

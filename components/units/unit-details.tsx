@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import { stationPower } from '@/shared/domain/workshop';
+import { filterSelectionLabels, stationPower } from '@/shared/domain/workshop';
 import { timeSourceLabels, type Unit } from '@/shared/schemas';
 
 import { Text } from '../ui/text';
@@ -9,6 +9,7 @@ import { FormSection } from '../form/form-section';
 import { formatValue } from '../ui/format';
 import { PowerChain } from '../workshop/power-chain';
 import { antennaKindLabels, filterTypeLabels } from './unit-form';
+import { SupplyFigures } from './supply-figures';
 import { bandName, generatorSummary } from './unit-summary';
 
 export type UnitDetailsProps = { unit: Unit };
@@ -45,6 +46,7 @@ export function UnitDetails({ unit }: UnitDetailsProps) {
         />
       </FormSection>
       <FormSection title="Low-pass filters">
+        <Fact label="Selection" value={filterSelectionLabels[unit.filterSelection]} />
         {unit.filters.length === 0 ? (
           <Text tone="danger">No filters: no band can be enabled on this unit.</Text>
         ) : (
@@ -52,13 +54,16 @@ export function UnitDetails({ unit }: UnitDetailsProps) {
             <Fact
               key={index}
               label={`Filter ${index + 1}`}
-              value={`${filter.bands.map(bandName).join(', ')}: ${filterTypeLabels[filter.type]}, order ${filter.order}, cut-off ${Number((filter.cutoffHz / 1e6).toPrecision(9))} MHz`}
+              value={`${filter.bands.map(bandName).join(', ')}: ${filterTypeLabels[filter.type]}, order ${filter.order}, cut-off ${Number((filter.cutoffHz / 1e6).toPrecision(9))} MHz${
+                unit.filterSelection === 'switched' && filter.controlCode ? `; control code ${filter.controlCode}` : ''
+              }`}
             />
           ))
         )}
       </FormSection>
       <FormSection title="Power at the antenna" description="Stay within the power your licence allows.">
         <PowerChain power={stationPower(unit)} />
+        <SupplyFigures power={stationPower(unit)} amplifier={unit.amplifier} />
       </FormSection>
       {unit.notes ? (
         <FormSection title="Notes">

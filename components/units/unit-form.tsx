@@ -5,7 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 
 import { BAND_TABLE, type BandId } from '@/shared/domain';
-import { stationPower } from '@/shared/domain/workshop';
+import { FILTER_LOSS_DB, FILTER_SELECTIONS, filterSelectionLabels, stationPower } from '@/shared/domain/workshop';
 import {
   ANTENNA_KINDS,
   FILTER_TYPES,
@@ -31,6 +31,8 @@ import { FormSection } from '../form/form-section';
 import { numberFieldErrors } from '../form/number-text';
 import { PowerChain } from '../workshop/power-chain';
 import { Switch } from '../ui/switch';
+import { PadDesigner } from './pad-designer';
+import { SupplyFigures } from './supply-figures';
 
 type UnitFields = z.input<typeof unitInput>;
 
@@ -66,12 +68,25 @@ export const emptyUnit: UnitFields = {
   attenuatorDb: 0,
   amplifier: null,
   filters: [],
+  filterSelection: 'switched',
   antenna: { kind: 'dipole', bands: [], gainDbi: 2.15 },
   dutyCycle: 0.5,
   notes: '',
 };
 
-const newFilter = { bands: [] as BandId[], type: 'chebyshev-0.5' as const, order: 5, cutoffHz: undefined as unknown as number };
+const newFilter = {
+  bands: [] as BandId[],
+  type: 'chebyshev-0.5' as const,
+  order: 5,
+  cutoffHz: undefined as unknown as number,
+  controlCode: '',
+};
+
+const selectionHints: Record<(typeof FILTER_SELECTIONS)[number], string> = {
+  fixed: 'The first filter below is wired in for good: only its bands can go on the air.',
+  hand: 'You plug in one filter at a time: only the band of the filter you record as fitted may be scheduled.',
+  switched: 'Relays switch the filters: a rotation may use every band a filter covers. Give each filter the code the controller sets.',
+};
 const newAmplifier = { gainDb: undefined as unknown as number, saturatedDbm: undefined as unknown as number, supplyV: 5, supplyA: 0.5 };
 
 export type UnitFormProps = {
@@ -91,6 +106,8 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
   const filters = useFieldArray({ control, name: 'filters' });
   const disciplined = useWatch({ control, name: 'disciplined' });
   const amplifier = useWatch({ control, name: 'amplifier' });
+  const filterSelection = useWatch({ control, name: 'filterSelection' }) ?? 'switched';
+  const [generatorLevelDbm, filterList] = useWatch({ control, name: ['generatorLevelDbm', 'filters'] });
   const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
   const invalidCount = Object.keys(form.formState.errors).filter((key) => key !== 'root').length;
@@ -202,9 +219,24 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
         title="Low-pass filters"
         description="Every band you transmit on needs its own filter; Faintline will not enable a band no filter covers."
       >
+        <ControlledChoice
+          control={control}
+          name="filterSelection"
+          label="How filters are selected"
+          options={FILTER_SELECTIONS.map((value) => ({ value, label: filterSelectionLabels[value] }))}
+        />
+        <Text variant="caption" tone="muted">
+          {selectionHints[filterSelection]}
+        </Text>
         {filters.fields.length === 0 ? <Text tone="muted">No filters yet. Add one for each band you will use.</Text> : null}
         {filters.fields.map((field, index) => (
-          <FilterRow key={field.id} control={control} index={index} onRemove={() => filters.remove(index)} />
+          <FilterRow
+            key={field.id}
+            control={control}
+            index={index}
+            switched={filterSelection === 'switched'}
+            onRemove={() => filters.remove(index)}
+          />
         ))}
         <Button label="Add a filter" variant="secondary" onPress={() => filters.append({ ...newFilter, bands: [] })} style={styles.start} />
       </FormSection>
@@ -225,6 +257,13 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
 
       <LivePower control={control} />
 
+      <PadDesigner
+        generatorDbm={typeof generatorLevelDbm === 'number' ? generatorLevelDbm : undefined}
+        amplifier={amplifier ?? null}
+        filterLossDb={(filterList ?? []).length ? FILTER_LOSS_DB : 0}
+        onUse={(db) => form.setValue('attenuatorDb', db, { shouldDirty: true, shouldValidate: true })}
+      />
+
       <FormSection title="Notes">
         <FormTextField control={control} name="notes" label="Notes" multiline numberOfLines={4} />
       </FormSection>
@@ -238,7 +277,17 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
   );
 }
 
-function FilterRow({ control, index, onRemove }: { control: Control<UnitFields>; index: number; onRemove: () => void }) {
+function FilterRow({
+  control,
+  index,
+  switched,
+  onRemove,
+}: {
+  control: Control<UnitFields>;
+  index: number;
+  switched: boolean;
+  onRemove: () => void;
+}) {
   const { colors } = useAppTheme();
   const number = index + 1;
   return (
@@ -272,6 +321,15 @@ function FilterRow({ control, index, onRemove }: { control: Control<UnitFields>;
           style={styles.pairItem}
         />
       </View>
+      {switched ? (
+        <FormTextField
+          control={control}
+          name={`filters.${index}.controlCode`}
+          label={`Filter ${number} control code`}
+          hint="What the controller sets to put this filter in circuit, e.g. relay-2 or GPIO 14."
+          mono
+        />
+      ) : null}
     </View>
   );
 }
@@ -346,7 +404,14 @@ function LivePower({ control }: { control: Control<UnitFields> }) {
   }, [generatorLevelDbm, attenuatorDb, amplifier, filters]);
   return (
     <FormSection title="Power at the antenna" description="Worked out from the levels above. Stay within the power your licence allows.">
-      {power ? <PowerChain power={power} /> : <Text tone="muted">Fill in the generator output to see the arithmetic.</Text>}
+      {power ? (
+        <>
+          <PowerChain power={power} />
+          <SupplyFigures power={power} amplifier={amplifier} />
+        </>
+      ) : (
+        <Text tone="muted">Fill in the generator output to see the arithmetic.</Text>
+      )}
     </FormSection>
   );
 }

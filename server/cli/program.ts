@@ -15,19 +15,22 @@ import {
   latLonToLocator,
   LICENCE_REGIONS,
   locatorToLatLon,
+  MAX_WSPR_POWER_DBM,
+  MIN_WSPR_POWER_DBM,
+  nearestWsprLevel,
   pathBetweenLocators,
   planMessages,
   planSynth,
   predictOffsets,
-  requiredFilterAttenuation,
   toneFrequenciesHz,
   type FilterKind,
   type LicenceRegion,
   type Refusal,
 } from '../../shared/domain';
+import { amplifierSupply, designPad, estimateExposure, neededAttenuation } from '../../shared/domain/bench';
 import { airtimeByDay, effectiveDuty, expandPlan, validateSchedule } from '../../shared/domain/schedule';
 import type { StationSettings, UnitHardware } from '../../shared/domain/workshop';
-import { FILTER_LOSS_DB } from '../../shared/domain/workshop';
+import { FILTER_LOSS_DB, spuriousRequirement } from '../../shared/domain/workshop';
 import { scheduleInput } from '../../shared/schemas/schedule';
 
 export type CliIo = { out: (line: string) => void; err: (line: string) => void; setExitCode: (code: number) => void };
@@ -251,56 +254,171 @@ export function buildProgram(io: CliIo = defaultIo): Command {
   program
     .command('filter')
     .description('Harmonics of the square-wave drive, the attenuation needed, and a low-pass filter design with toroid turns.')
-    .option('--band <band>', 'band to filter for (its dial frequency is the fundamental)')
-    .option('--frequency <Hz>', 'fundamental frequency instead of a band', number('Frequency'))
-    .option('--cutoff <Hz>', 'filter cutoff; default 1.15 × the fundamental (common practice, no source)', number('Cutoff'))
+    .option('--band <band>', 'band to filter for (the carrier is its dial frequency + --offset)')
+    .option('--offset <Hz>', 'audio offset of the carrier above the dial', number('Offset'), 1500)
+    .option('--frequency <Hz>', 'carrier frequency instead of a band', number('Frequency'))
+    .option('--cutoff <Hz>', 'filter cutoff; default 1.15 × the carrier (common practice, no source)', number('Cutoff'))
     .option('--kind <kind>', `filter kind: ${FILTER_KINDS.join(', ')}`, 'chebyshev-0.5')
     .option('--order <n>', '3, 5 or 7', number('Order'), 5)
     .option('--core <core>', 'iron-powder toroid for the inductors, e.g. T-50-2', 'T-50-2')
     .option('--duty <fraction>', 'duty cycle of the drive, 0 to 1', number('Duty cycle'), 0.5)
-    .option(
-      '--limit <dB>',
-      'spurious limit below the fundamental; default 43 dB under 30 MHz, 60 dB above (47 CFR 97.307)',
-      number('Limit'),
-    )
+    .option('--power <dBm>', 'output power; the ITU rule outside region 2 depends on it', number('Power'), 23)
+    .option('--limit <dB>', "spurious limit below the carrier; default the region's rule (named in the output)", number('Limit'))
     .option('--region <region>', `licence region: ${LICENCE_REGIONS.join(', ')}`, region, 'itu1')
     .action(
       (opts: {
         band?: string;
+        offset: number;
         frequency?: number;
         cutoff?: number;
         kind: string;
         order: number;
         core: string;
         duty: number;
+        power: number;
         limit?: number;
         region: LicenceRegion;
       }) => {
-        let fundamentalHz: number;
-        if (opts.frequency !== undefined) fundamentalHz = opts.frequency;
+        let carrierHz: number;
+        if (opts.frequency !== undefined) carrierHz = opts.frequency;
         else if (opts.band) {
           const b = bandFor(opts.band, opts.region);
           if (!b.ok) return fail(b);
-          fundamentalHz = b.band.dialHz + 1500;
+          carrierHz = commandForBand(b.band.dialHz, opts.offset, { referenceErrorPpm: 0 }).carrierHz;
         } else return fail('Give --band or --frequency.');
+        if (!(carrierHz > 0)) return fail('The carrier frequency must be positive.');
         if (!(opts.duty > 0 && opts.duty < 1)) return fail('Duty cycle must be between 0 and 1.');
-        const harmonics = requiredFilterAttenuation(fundamentalHz, { dutyCycle: opts.duty, limitDb: opts.limit });
+        const spurious = spuriousRequirement({
+          region: opts.region,
+          carrierHz,
+          powerW: dbmToMw(opts.power) / 1000,
+          dutyCycle: opts.duty,
+          limitDb: opts.limit,
+        });
+        const harmonics = spurious.harmonics;
         const r = designLowPass({
           kind: opts.kind as FilterKind,
           order: opts.order,
-          cutoffHz: opts.cutoff ?? fundamentalHz * 1.15,
+          cutoffHz: opts.cutoff ?? carrierHz * 1.15,
           core: opts.core,
           atFrequenciesHz: harmonics.map((h) => h.frequencyHz),
         });
         if (!r.ok) return fail(r);
         const meets = harmonics.every((h, i) => r.design.attenuation[i].attenuationDb >= h.requiredAttenuationDb);
-        emit({ fundamentalHz, harmonics, design: r.design, meetsLimit: meets });
+        emit({
+          fundamentalHz: carrierHz,
+          carrierHz,
+          region: opts.region,
+          limit: spurious.limit,
+          harmonics,
+          design: r.design,
+          meetsLimit: meets,
+        });
         if (!meets)
           io.err(
             'faintline: warning: this filter does not reach the required attenuation at every harmonic; raise the order or lower the cutoff.',
           );
       },
     );
+
+  program
+    .command('pad')
+    .description(
+      'A matched resistive attenuator: exact pi and T resistors, the nearest E24 parts and what they really give, and the heat in each. ' +
+        'With --generator and --want-dbm (or --want-mw), first works out the attenuation the chain needs.',
+    )
+    .option('--attenuation-db <dB>', 'attenuation of the pad', number('Attenuation'))
+    .option('--impedance-ohm <ohm>', 'line impedance', number('Impedance'), 50)
+    .option('--power-w <W>', 'power going into the pad, for the heat in each resistor', number('Power'), 0.01)
+    .option('--rating-w <W>', "each resistor's power rating", number('Rating'), 0.25)
+    .option('--generator <dBm>', 'generator output level (to work out the attenuation)', number('Generator level'))
+    .option('--gain <dB>', 'amplifier gain after the pad', number('Gain'))
+    .option('--saturation <dBm>', "amplifier's saturated output", number('Saturation'))
+    .option('--filter-loss <dB>', 'low-pass filter insertion loss', number('Filter loss'), 0)
+    .option('--want-dbm <dBm>', 'wanted output in dBm', number('Wanted output'))
+    .option('--want-mw <mW>', 'wanted output in mW', number('Wanted output'))
+    .action(
+      (opts: {
+        attenuationDb?: number;
+        impedanceOhm: number;
+        powerW: number;
+        ratingW: number;
+        generator?: number;
+        gain?: number;
+        saturation?: number;
+        filterLoss: number;
+        wantDbm?: number;
+        wantMw?: number;
+      }) => {
+        let attenuationDb = opts.attenuationDb;
+        let needed: unknown = undefined;
+        if (attenuationDb === undefined) {
+          if (opts.generator === undefined || (opts.wantDbm === undefined && opts.wantMw === undefined))
+            return fail('Give --attenuation-db, or --generator with --want-dbm or --want-mw.');
+          const r = neededAttenuation({
+            generatorDbm: opts.generator,
+            amplifierGainDb: opts.gain,
+            amplifierSaturationDbm: opts.saturation,
+            filterLossDb: opts.filterLoss,
+            wanted: opts.wantMw !== undefined ? { mw: opts.wantMw } : { dbm: opts.wantDbm! },
+          });
+          if (!r.ok) return fail(r);
+          needed = plain(r);
+          for (const note of r.notes) io.err(`faintline: ${note}`);
+          if (r.neededDb <= 0) return emit({ needed });
+          attenuationDb = r.neededDb;
+        }
+        const pad = designPad({ attenuationDb, impedanceOhm: opts.impedanceOhm, inputW: opts.powerW, ratingW: opts.ratingW });
+        if (!pad.ok) return fail(pad);
+        emit({ ...(needed ? { needed } : {}), ...plain(pad) });
+        for (const caution of pad.cautions) io.err(`faintline: caution: ${caution}`);
+      },
+    );
+
+  program
+    .command('supply')
+    .description("An amplifier's DC input power, the heat it must shed, and the heatsink and fuse it needs.")
+    .requiredOption('--output-w <W>', 'RF output power', number('Output'))
+    .requiredOption('--supply-v <V>', 'supply voltage', number('Supply voltage'))
+    .option('--supply-a <A>', 'supply current while transmitting', number('Supply current'))
+    .option('--efficiency <fraction>', 'efficiency instead of a measured current, 0 to 1', number('Efficiency'))
+    .option('--drive-w <W>', 'RF drive into the amplifier', number('Drive'), 0)
+    .action((opts: { outputW: number; supplyV: number; supplyA?: number; efficiency?: number; driveW: number }) => {
+      const r = amplifierSupply({
+        rfOutputW: opts.outputW,
+        rfDriveW: opts.driveW,
+        supplyV: opts.supplyV,
+        supplyA: opts.supplyA,
+        efficiency: opts.efficiency,
+      });
+      if (!r.ok) return fail(r);
+      emit(plain(r));
+      for (const caution of r.cautions) io.err(`faintline: caution: ${caution}`);
+    });
+
+  program
+    .command('exposure')
+    .description(
+      'RF exposure estimate: EIRP and the distance beyond which the time-averaged power density is within the general-public limit ' +
+        '(47 CFR 1.1310 Table 1; far-field S = EIRP·duty/(4πr²)). An estimate only: local rules decide.',
+    )
+    .requiredOption('--power-w <W>', 'transmitter output power', number('Power'))
+    .requiredOption('--gain-dbi <dBi>', 'antenna gain over isotropic', number('Gain'))
+    .requiredOption('--frequency-hz <Hz>', 'transmit frequency', number('Frequency'))
+    .option('--duty <fraction>', 'share of time on the air, 0 to 1 (a WSPR beacon at one slot in five: 0.2)', number('Duty'), 1)
+    .option('--loss-db <dB>', 'feed-line loss', number('Loss'), 0)
+    .action((opts: { powerW: number; gainDbi: number; frequencyHz: number; duty: number; lossDb: number }) => {
+      const r = estimateExposure({
+        powerW: opts.powerW,
+        gainDbi: opts.gainDbi,
+        frequencyHz: opts.frequencyHz,
+        duty: opts.duty,
+        lossDb: opts.lossDb,
+      });
+      if (!r.ok) return fail(r);
+      emit(plain(r));
+      for (const caution of r.cautions) io.err(`faintline: caution: ${caution}`);
+    });
 
   program
     .command('plan')
@@ -346,6 +464,11 @@ export function buildProgram(io: CliIo = defaultIo): Command {
       if (!Number.isFinite(fromMs)) return fail(`--from must be an ISO 8601 time such as 2026-12-02T00:00Z; got '${opts.from}'.`);
       if (!(opts.hours > 0 && opts.hours <= 744)) return fail('--hours must be more than 0 and at most 744 (a month).');
       if (opts.duty !== undefined && opts.every !== undefined) return fail('Give --duty or --every, not both.');
+      if (!(opts.power >= MIN_WSPR_POWER_DBM && opts.power <= MAX_WSPR_POWER_DBM))
+        return fail(`--power ${opts.power} dBm is outside what WSPR can report: give 0 to 60 dBm (0, 3, 7, 10, 13 … 60).`);
+      const reported = nearestWsprLevel(opts.power);
+      if (reported.rounded)
+        io.err(`faintline: power ${opts.power} dBm is not a WSPR level; the messages report ${reported.reportedDbm} dBm.`);
       const steps: { bandId: string; slots: number; activeHoursUtc: { fromHour: number; toHour: number } | null }[] = [];
       for (const text of opts.band) {
         const m = /^([^@]+)(?:@(\d{1,2})-(\d{1,2}))?$/.exec(text.trim());
@@ -407,7 +530,7 @@ export function buildProgram(io: CliIo = defaultIo): Command {
         tolerancePpm: 0,
         tempCoPpmPerC: null,
         disciplined: true,
-        generatorLevelDbm: opts.power + FILTER_LOSS_DB,
+        generatorLevelDbm: reported.reportedDbm + FILTER_LOSS_DB,
         attenuatorDb: 0,
         amplifier: null,
         filters: bandIds.flatMap((bandId) => {

@@ -60,6 +60,19 @@ export function locatorToLatLon(text: string): Result<{ locator: string } & LatL
   return { ok: true, locator: valid.locator, lat, lon };
 }
 
+/**
+ * The cell index of an offset within a range of cells `size` wide, and the offset left inside that cell.
+ * A remainder within a rounding error of the next boundary (a cell centre computed back from a locator)
+ * counts as that boundary; the nudge is far below any position a receiver or GPS gives (1e-12 of a cell),
+ * and the index and remainder are clamped so neither can go negative or past the last cell.
+ */
+function cellOf(offset: number, size: number, last: number): [index: number, remainder: number] {
+  let index = Math.floor(offset / size);
+  if ((index + 1) * size - offset <= size * 1e-12) index += 1;
+  index = Math.max(0, Math.min(index, last));
+  return [index, Math.max(0, offset - index * size)];
+}
+
 /** The locator of a position, to 2, 4, 6 or 8 characters. */
 export function latLonToLocator(position: LatLon, precision: number = 6): Result<{ locator: string }> {
   const { lat, lon } = position;
@@ -72,14 +85,13 @@ export function latLonToLocator(position: LatLon, precision: number = 6): Result
   let out = '';
   for (let p = 0; p < precision / 2; p++) {
     const [w, h] = CELL_DEG[p];
-    const i = Math.floor(x / w + 1e-9);
-    const j = Math.floor(y / h + 1e-9);
-    const ci = Math.min(i, p === 0 ? 17 : p === 2 ? 23 : 9);
-    const cj = Math.min(j, p === 0 ? 17 : p === 2 ? 23 : 9);
+    const last = p === 0 ? 17 : p === 2 ? 23 : 9;
+    const [ci, rx] = cellOf(x, w, last);
+    const [cj, ry] = cellOf(y, h, last);
     out +=
       p % 2 === 0 ? String.fromCharCode((p === 2 ? 97 : 65) + ci) + String.fromCharCode((p === 2 ? 97 : 65) + cj) : String(ci) + String(cj);
-    x -= ci * w;
-    y -= cj * h;
+    x = rx;
+    y = ry;
   }
   return { ok: true, locator: out };
 }

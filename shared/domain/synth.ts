@@ -10,12 +10,22 @@ import { refuse, type Result } from './result';
 export const MAX_DENOMINATOR = 1_048_575;
 export const VCO_MIN_HZ = 600e6;
 export const VCO_MAX_HZ = 900e6;
-/** PLL feedback range a + b/c (AN619: 15 … 90). */
+/** PLL feedback range a + b/c, both ends included (AN619: "a + b/c … valid range 15 to 90"). */
 export const FEEDBACK_MIN = 15;
 export const FEEDBACK_MAX = 90;
 const R_DIVIDERS = [1, 2, 4, 8, 16, 32, 64, 128];
 /** Output divider: 4, 6, or 8 … 2048 (AN619); plans use even integers only. */
 const OUTPUT_DIVIDER_MAX = 2048;
+/** Highest output: the clock chip's data sheet (Si5351A/B/C-B, revision 1.0 and later) gives 200 MHz. */
+export const OUTPUT_MAX_HZ = 200e6;
+/** Lowest output these dividers reach: the VCO's floor over the largest output and R dividers (≈ 2289 Hz). */
+export const OUTPUT_MIN_HZ = VCO_MIN_HZ / (OUTPUT_DIVIDER_MAX * R_DIVIDERS[R_DIVIDERS.length - 1]);
+
+/** Whether a + b/c lies within AN619's feedback range 15 … 90 (90 + 0/1 included). */
+export function feedbackInRange(fraction: Fraction): boolean {
+  const ratio = fraction.a + fraction.b / fraction.c;
+  return ratio >= FEEDBACK_MIN && ratio <= FEEDBACK_MAX;
+}
 
 export type Fraction = { a: number; b: number; c: number };
 
@@ -149,18 +159,21 @@ export function planSynth(input: SynthInput): Result<SynthPlan> {
   const lowest = Math.min(...input.targetsHz);
   const highest = Math.max(...input.targetsHz);
   if (!(lowest > 0)) return refuse('Frequencies to produce must be positive.');
+  const reach = `this generator reaches ${OUTPUT_MIN_HZ.toFixed(0)} Hz to ${OUTPUT_MAX_HZ / 1e6} MHz`;
+  if (highest > OUTPUT_MAX_HZ) return refuse(`${highest.toFixed(0)} Hz is above the clock chip's 200 MHz output limit (${reach}).`);
   const dividers = chooseDividers(lowest, highest);
   if (!dividers) {
-    return refuse(
-      `No divider pair keeps the VCO within 600–900 MHz for ${lowest.toFixed(0)}–${highest.toFixed(0)} Hz (this generator reaches about 4.6 kHz to 225 MHz).`,
-    );
+    return refuse(`No divider pair keeps the VCO within 600–900 MHz for ${lowest.toFixed(0)}–${highest.toFixed(0)} Hz (${reach}).`);
   }
   const { d, r } = dividers;
   const tones: TonePlan[] = [];
   for (const targetHz of input.targetsHz) {
     const feedback = fractionFor((targetHz * r * d) / actualReferenceHz);
-    if (feedback.a < FEEDBACK_MIN || feedback.a >= FEEDBACK_MAX) {
-      return refuse(`PLL feedback ${feedback.a} is outside ${FEEDBACK_MIN}–${FEEDBACK_MAX} for ${targetHz} Hz.`);
+    if (!feedbackInRange(feedback)) {
+      const ratio = feedback.a + feedback.b / feedback.c;
+      return refuse(
+        `PLL feedback ${ratio.toFixed(6)} is ${ratio < FEEDBACK_MIN ? 'below' : 'above'} the allowed ${FEEDBACK_MIN}–${FEEDBACK_MAX} for ${targetHz} Hz: use a reference between 10 and 40 MHz.`,
+      );
     }
     const vcoHz = actualReferenceHz * (feedback.a + feedback.b / feedback.c);
     const producedHz = vcoHz / (d * r);

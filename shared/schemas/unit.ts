@@ -1,5 +1,6 @@
 import { BAND_IDS, type BandId } from '../domain/bands';
 import { labelText, nameText, noteText } from './fields';
+import { FILTER_SELECTIONS } from '../domain/workshop/filter-selection';
 import { z } from './zod-setup';
 
 export const TIME_SOURCES = ['network', 'gps', 'rtc'] as const;
@@ -27,6 +28,13 @@ export const lowPassFilterInput = z.object({
   type: z.enum(FILTER_TYPES),
   order: z.number().int('The order is a whole number').min(1, 'The order is at least 1').max(11, 'The order is at most 11'),
   cutoffHz: z.number().positive('The cut-off must be above 0 Hz').max(500e6, 'The cut-off must be below 500 MHz'),
+  /** switched filters: the control line or code the controller sets to put this filter in circuit */
+  controlCode: z
+    .string()
+    .trim()
+    .max(40, 'Use at most 40 characters for the control code')
+    .regex(/^[\w .:#/+-]*$/, 'Use letters, digits and . : # / + - for the control code')
+    .default(''),
 });
 export type LowPassFilterInput = z.infer<typeof lowPassFilterInput>;
 
@@ -60,6 +68,8 @@ export const unitInput = z.object({
   attenuatorDb: z.number().min(0, 'Attenuation cannot be negative').max(80).default(0),
   amplifier: amplifierInput.nullable().default(null),
   filters: z.array(lowPassFilterInput).max(12, 'At most 12 filters').default([]),
+  /** how the filters are put in circuit: one fixed, swapped by hand, or switched by the controller */
+  filterSelection: z.enum(FILTER_SELECTIONS, { message: 'Choose fixed, hand or switched' }).default('switched'),
   antenna: antennaInput.default({ kind: 'dipole', bands: [], gainDbi: 2.15 }),
   /** duty cycle of the generator's square-wave output, for the harmonic estimate */
   dutyCycle: z.number().min(0.05).max(0.95).default(0.5),
@@ -81,8 +91,19 @@ export const unitPatch = z.record(z.string(), z.unknown()).transform((body, ctx)
 
 export type UnitPhoto = { id: number; url: string; thumbUrl: string; contentType: string; bytes: number; createdAt: string };
 
+/** "I fitted this filter": recorded for a unit whose filters are swapped by hand. */
+export const fittedFilterInput = z.object({
+  filterIndex: z
+    .number({ message: 'Choose the filter you fitted' })
+    .int('Choose one of the unit’s filters')
+    .min(0, 'Choose one of the unit’s filters'),
+});
+export type FittedFilterInput = z.infer<typeof fittedFilterInput>;
+
 export type Unit = UnitValues & {
   id: number;
+  /** hand-swapped filters: the one fitted now and when it was recorded (UTC) */
+  fittedFilter: { index: number; atUtc: string } | null;
   ownerId: number;
   ownerName: string;
   photos: UnitPhoto[];

@@ -1,4 +1,5 @@
 import { defaultSpuriousLimitDb, requiredFilterAttenuation, squareWaveHarmonics } from '@/shared/domain/harmonics';
+import { spuriousRequirement } from '@/shared/domain/workshop/spurious';
 
 // Fourier series of a rectangular wave: harmonic n ∝ |sin(πnD)|/n (standard result); an ideal square
 // wave's 3rd harmonic is 20·log10(1/3) = −9.54 dBc, 5th 20·log10(1/5) = −13.98 dBc.
@@ -45,5 +46,24 @@ describe('requiredFilterAttenuation', () => {
 
   it('when the caller passes its own limit, uses it', () => {
     expect(requiredFilterAttenuation(7.04e6, { limitDb: 50 })[1].requiredAttenuationDb).toBeCloseTo(40.4576, 3);
+  });
+});
+
+describe('spuriousRequirement', () => {
+  it('when the station is in region 2, counts harmonics from the real carrier and applies 47 CFR 97.307(e)', () => {
+    // 47 CFR 97.307(e): below 30 MHz, spurious emissions at least 43 dB below the fundamental's mean power
+    const r = spuriousRequirement({ region: 'itu2', carrierHz: 14_095_600 + 1520, powerW: 0.2 });
+    expect(r.limit).toMatchObject({ limitDb: 43, source: expect.stringContaining('97.307') });
+    const third = r.harmonics.find((h) => h.harmonic === 3)!;
+    expect(third.frequencyHz).toBe(3 * (14_095_600 + 1520));
+    // ideal square wave: 3rd harmonic 20·log10(1/3) = −9.54 dBc, so 43 − 9.54 = 33.46 dB to add
+    expect(third.requiredAttenuationDb).toBeCloseTo(43 - 9.5424, 3);
+  });
+
+  it('when the station is in region 1, uses the ITU formula for its power, and a given limit overrides both', () => {
+    // ITU Radio Regulations Appendix 3 (from memory): 43 + 10·log10(P/W), at most 50 dBc below 30 MHz
+    expect(spuriousRequirement({ region: 'itu1', carrierHz: 7_040_100, powerW: 0.2 }).limit.limitDb).toBeCloseTo(36.0103, 3);
+    expect(spuriousRequirement({ region: 'itu1', carrierHz: 7_040_100, powerW: 100 }).limit.limitDb).toBe(50);
+    expect(spuriousRequirement({ region: 'itu1', carrierHz: 7_040_100, powerW: 0.2, limitDb: 60 }).limit.limitDb).toBe(60);
   });
 });

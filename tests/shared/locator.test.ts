@@ -31,6 +31,19 @@ describe('latLonToLocator', () => {
     expect(latLonToLocator(position, 6)).toEqual({ ok: true, locator });
   });
 
+  // Positions a hair west of the prime meridian (or south of the equator) lie in field I (20°W…0°; 10°S…0°),
+  // square 9, by the Maidenhead definition (Tyson, QST January 1989); each character must stay in its range.
+  it.each([
+    [{ lat: 10, lon: -1e-8 }, 4, 'IK90'],
+    [{ lat: 0, lon: -1e-10 }, 4, 'IJ90'],
+    [{ lat: 0, lon: -1e-10 }, 8, 'IJ90xa90'],
+    [{ lat: -1e-9, lon: 0 }, 6, 'JI09ax'],
+  ])('when the position %j sits just below a boundary, gives the cell it is in (%i characters: %s)', (position, precision, locator) => {
+    const r = latLonToLocator(position, precision);
+    expect(r).toEqual({ ok: true, locator });
+    if (r.ok) expect(r.locator).toMatch(/^[A-R]{2}(\d{2}([a-x]{2}(\d{2})?)?)?$/);
+  });
+
   it.each([
     [{ lat: 91, lon: 0 }, 6, /Latitude/],
     [{ lat: 0, lon: 181 }, 6, /Longitude/],

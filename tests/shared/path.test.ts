@@ -1,5 +1,5 @@
 import { pathBetween, pathBetweenLocators } from '@/shared/domain/path';
-import { locatorToLatLon } from '@/shared/domain/locator';
+import { vincentyInverse } from './fixtures/vincenty';
 
 describe('pathBetween', () => {
   it.each([
@@ -8,7 +8,8 @@ describe('pathBetween', () => {
     // geographiclib's test suite (GeodSolve0): JFK to CDG, azi1 53.47022°, s12 5853226 m
     ['JFK to CDG', { lat: 40.6, lon: -73.8 }, { lat: 49.01666667, lon: 2.55 }, 5853.226, 53.47022],
     // GeodTest.dat sample in geographiclib's test suite: azi1 22.020059880982801°, s12 4105086.1713924406 m
-    ['GeodTest sample', { lat: 55.52454, lon: 106.05087 }, { lat: 77.03196, lon: 197.18234 }, 4105.0861713924406, 22.020059880982801],
+    // (values to 15 significant digits, as many as a double holds)
+    ['GeodTest sample', { lat: 55.52454, lon: 106.05087 }, { lat: 77.03196, lon: 197.18234 }, 4105.08617139244, 22.0200598809828],
   ])('when the path is %s, gives the published distance and bearing', (_name, from, to, distanceKm, bearingDeg) => {
     const r = pathBetween(from, to);
     expect(r.distanceKm).toBeCloseTo(distanceKm, 3);
@@ -22,11 +23,19 @@ describe('pathBetween', () => {
 });
 
 describe('pathBetweenLocators', () => {
+  // Centres from the Maidenhead definition (FN31pr: 72°42.5′W 41°43.75′N; JN58td: 11°37.5′E 48°8.75′N),
+  // distance and bearing from an independent Vincenty (1975) inverse on WGS84 (tests/shared/fixtures/vincenty.ts).
   it('when given two locators, measures between the centres of their squares', () => {
-    const a = locatorToLatLon('FN31pr');
-    const b = locatorToLatLon('JN58td');
     const r = pathBetweenLocators('FN31pr', 'JN58td');
-    expect(r.ok && a.ok && b.ok && r.distanceKm).toBeCloseTo(pathBetween(a as never, b as never).distanceKm, 9);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.from).toEqual({ lat: expect.closeTo(41 + 43.75 / 60, 9), lon: expect.closeTo(-(72 + 42.5 / 60), 9) });
+    expect(r.to).toEqual({ lat: expect.closeTo(48 + 8.75 / 60, 9), lon: expect.closeTo(11 + 37.5 / 60, 9) });
+    const check = vincentyInverse(r.from.lat, r.from.lon, r.to.lat, r.to.lon);
+    expect(r.distanceKm).toBeCloseTo(check.distanceKm, 5);
+    expect(r.bearingDeg).toBeCloseTo(check.bearingDeg, 6);
+    // and the Vincenty check itself reproduces geographiclib's published JFK → CDG figure (GeodSolve0)
+    expect(vincentyInverse(40.6, -73.8, 49.01666667, 2.55).distanceKm).toBeCloseTo(5853.226, 3);
   });
 
   it('when a locator is invalid, refuses with its reason', () => {

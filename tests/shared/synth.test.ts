@@ -1,9 +1,11 @@
-import { bestRational, encodeDivider, fractionFor, MAX_DENOMINATOR, planSynth } from '@/shared/domain/synth';
+import { bestRational, encodeDivider, feedbackInRange, fractionFor, MAX_DENOMINATOR, planSynth } from '@/shared/domain/synth';
 import { toneFrequenciesHz } from '@/shared/domain/tones';
 
 describe('encodeDivider', () => {
-  // Silicon Labs AN619 formulas P1 = 128a + ⌊128b/c⌋ − 512, P2 = 128b − c⌊128b/c⌋, P3 = c, and its
-  // register layout; check values given in the issue: 25 + 493/2500 → 2713/604/2500, bytes 09 C4 00 0A 99 00 02 5C
+  // Silicon Labs AN619 ("Manually Generating an Si5351 Register Map"), section 3.2: P1 = 128a + ⌊128b/c⌋ − 512,
+  // P2 = 128b − c⌊128b/c⌋, P3 = c, and its register layout (MSNA registers 26–33). Worked by hand from those
+  // formulas: 25 + 493/2500 → P1 = 3200 + 25 − 512 = 2713, P2 = 63104 − 62500 = 604, P3 = 2500,
+  // bytes P3[15:8] P3[7:0] P1[17:16] P1[15:8] P1[7:0] P3[19:16]|P2[19:16] P2[15:8] P2[7:0] = 09 C4 00 0A 99 00 02 5C
   it('when the feedback is 25 + 493/2500, gives P1 2713, P2 604, P3 2500 and the published bytes', () => {
     const r = encodeDivider({ a: 25, b: 493, c: 2500 });
     expect([r.p1, r.p2, r.p3]).toEqual([2713, 604, 2500]);
@@ -62,5 +64,36 @@ describe('planSynth', () => {
 
   it('when the frequency is beyond what the generator reaches, refuses', () => {
     expect(planSynth({ referenceHz: 25e6, targetsHz: [1000] }).ok).toBe(false);
+  });
+
+  // Si5351A/B/C-B data sheet, revision 1.0 and later: outputs up to 200 MHz (earlier revisions said more).
+  it('when asked for more than 200 MHz, refuses and names the 200 MHz limit', () => {
+    expect(planSynth({ referenceHz: 25e6, targetsHz: [200e6] }).ok).toBe(true);
+    const r = planSynth({ referenceHz: 25e6, targetsHz: [210e6] });
+    expect(r).toMatchObject({ ok: false, reason: expect.stringMatching(/200 MHz/) });
+  });
+
+  // AN619: VCO 600 MHz minimum, output divider up to 2048, R divider up to 128, so the floor is
+  // 600e6 / (2048 · 128) ≈ 2288.8 Hz (arithmetic from AN619's ranges).
+  it('when asked for 2.3 kHz, plans it, and below the floor the refusal gives the true 2289 Hz', () => {
+    const r = planSynth({ referenceHz: 25e6, targetsHz: [2300] });
+    expect(r).toMatchObject({ ok: true, rDivider: 128 });
+    const low = planSynth({ referenceHz: 25e6, targetsHz: [2000] });
+    expect(low.ok).toBe(false);
+    if (!low.ok) {
+      expect(low.reason).toContain('2289 Hz');
+      expect(low.reason).not.toContain('4.6 kHz');
+    }
+  });
+
+  // AN619: "a + b/c … valid range 15 to 90"; 8 MHz × 90 = 720 MHz (inside the VCO range) ÷ 4 = 180 MHz
+  it('when the feedback ratio is exactly 90, accepts it; just above 90 is refused', () => {
+    const r = planSynth({ referenceHz: 8e6, targetsHz: [180e6] });
+    expect(r).toMatchObject({ ok: true, outputDivider: 4 });
+    if (r.ok) expect(r.tones[0].feedback).toEqual({ a: 90, b: 0, c: 1 });
+    expect(feedbackInRange({ a: 90, b: 0, c: 1 })).toBe(true);
+    expect(feedbackInRange({ a: 90, b: 1, c: 1000 })).toBe(false);
+    expect(feedbackInRange({ a: 15, b: 0, c: 1 })).toBe(true);
+    expect(feedbackInRange({ a: 14, b: 999, c: 1000 })).toBe(false);
   });
 });

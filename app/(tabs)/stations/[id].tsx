@@ -2,6 +2,7 @@ import { useRouter } from 'expo-router';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { StationDeviceLinks } from '@/components/devices/station-device-links';
+import { ExposureCard } from '@/components/stations/exposure-card';
 import { QueryBoundary } from '@/components/query/query-boundary';
 import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
 import { useRouteId } from '@/components/query/use-route-id';
@@ -63,6 +64,7 @@ export default function StationDetailRoute() {
                 onOpenCalibration={() => open('/stations/[id]/calibrate')}
                 onOpenOnAir={() => open('/stations/[id]/on-air')}
               />
+              <ExposureCard station={data} unit={unit.data ?? null} />
               <StationDetails station={data} readOnly={readOnly} />
             </>
           );

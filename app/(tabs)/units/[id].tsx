@@ -8,6 +8,7 @@ import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation'
 import { useRouteId } from '@/components/query/use-route-id';
 import { LazyUnitDetails as UnitDetails } from '@/components/units/lazy-parts';
 import { useCopyUnitMutation, useDeletePhotoMutation, useDeleteUnitMutation, useUnitQuery } from '@/components/units/queries';
+import { FittedFilterCard } from '@/components/units/fitted-filter-card';
 import { UnitHead } from '@/components/units/unit-head';
 import { UnitPhotos } from '@/components/units/unit-photos';
 import { usePhotoUpload } from '@/components/units/use-photo-upload';
@@ -66,6 +67,7 @@ export default function UnitDetailRoute() {
                 }
                 onDelete={() => removeUnit.ask()}
               />
+              <FittedFilterCard unit={data} readOnly={readOnly} />
               <FormSection title="Photos">
                 <UnitPhotos
                   unitName={data.name}

@@ -21,9 +21,14 @@ export function toPhoto(row: UnitPhotoModel): UnitPhoto {
 
 function toUnit(row: Row): Unit {
   // Parsing fills defaults for fields added after the row was written.
-  const spec = unitInput.parse({ ...JSON.parse(row.spec), name: row.name });
+  const spec = unitInput.parse({ ...JSON.parse(row.spec), name: row.name, filterSelection: row.filterSelection });
+  const fitted = row.fittedFilterIndex;
   return {
     ...spec,
+    fittedFilter:
+      spec.filterSelection === 'hand' && fitted !== null && fitted !== undefined && fitted < spec.filters.length && row.fittedAt
+        ? { index: fitted, atUtc: row.fittedAt.toISOString() }
+        : null,
     id: row.id,
     ownerId: row.ownerId,
     ownerName: row.owner?.displayName ?? '',
@@ -55,15 +60,28 @@ export async function findById(id: number, transaction?: Transaction) {
   return row ? toUnit(row as Row) : null;
 }
 
-const specOf = ({ name: _name, ...spec }: UnitValues) => JSON.stringify(spec);
+const specOf = ({ name: _name, filterSelection: _selection, ...spec }: UnitValues) => JSON.stringify(spec);
 
 export async function insert(ownerId: number, values: UnitValues, transaction?: Transaction) {
-  const row = await UnitModel.create({ ownerId, name: values.name, spec: specOf(values) }, { transaction });
+  const row = await UnitModel.create(
+    { ownerId, name: values.name, spec: specOf(values), filterSelection: values.filterSelection },
+    { transaction },
+  );
   return (await findById(row.id, transaction))!;
 }
 
 export async function update(id: number, values: UnitValues, transaction?: Transaction) {
-  await UnitModel.update({ name: values.name, spec: specOf(values) }, { where: { id }, transaction });
+  await UnitModel.update(
+    { name: values.name, spec: specOf(values), filterSelection: values.filterSelection },
+    { where: { id }, transaction },
+  );
+  stationChangedAfter(transaction, 'all');
+  return (await findById(id, transaction))!;
+}
+
+/** Records which hand-swapped filter is fitted now; devices see the change (their ETag moves with updatedAt). */
+export async function setFittedFilter(id: number, filterIndex: number, at: Date, transaction?: Transaction) {
+  await UnitModel.update({ fittedFilterIndex: filterIndex, fittedAt: at }, { where: { id }, transaction });
   stationChangedAfter(transaction, 'all');
   return (await findById(id, transaction))!;
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import { PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
+import { fittedFilterInput, PHOTO_MAX_BYTES, PHOTO_TYPES, unitInput, unitPatch } from '@/shared/schemas';
 import type { Logger } from '../../lib/logger';
 import { parseId } from '../../lib/params';
 import { singleUpload } from '../../lib/upload';
@@ -38,6 +38,10 @@ export function unitsRouter({ sequelize, storage, logger }: { sequelize: Sequeli
     const removed = await units.remove(sequelize, currentUser(req), id(req.params.id));
     res.status(204).end();
     void photos.removeStored(storage, removed, logger);
+  });
+  router.post('/:id/fitted-filter', async (req, res) => {
+    const { filterIndex } = fittedFilterInput.parse(req.body);
+    res.json(await units.recordFittedFilter(sequelize, currentUser(req), id(req.params.id), filterIndex));
   });
   router.post('/:id/copy', async (req, res) => {
     res.status(201).json(await units.copy(sequelize, currentUser(req), id(req.params.id)));

@@ -27,7 +27,8 @@ export async function getOwnedBy(user: SessionUser, id: number): Promise<Unit> {
   return unit;
 }
 
-const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, ...values }: Unit) => values;
+const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c, updatedAt: _u, fittedFilter: _f, ...values }: Unit) =>
+  values;
 
 export function create(db: TransactionRunner, user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
   return db.transaction(async (transaction) => {
@@ -90,4 +91,39 @@ export async function remove(db: TransactionRunner, user: SessionUser, id: numbe
     );
   });
   return photos;
+}
+
+const bandList = (bands: readonly string[]) => bands.map((b) => b.replace(/m$/, ' m')).join('/');
+
+/** "I fitted the 40 m filter": for hand-swapped filters, recorded with its UTC time and audited; it changes what may be planned. */
+export async function recordFittedFilter(db: TransactionRunner, user: SessionUser, id: number, filterIndex: number, now = new Date()) {
+  const unit = await getOwnedBy(user, id);
+  if (unit.filterSelection !== 'hand') {
+    throw new AppError('conflict', `Unit ${unit.name} does not have hand-swapped filters, so there is no fitted filter to record`, {
+      filterIndex: 'Set the unit’s filter selection to “swapped by hand” first',
+    });
+  }
+  const filter = unit.filters[filterIndex];
+  if (!filter) {
+    throw new AppError('bad-request', `Unit ${unit.name} has ${unit.filters.length} filters; there is no filter ${filterIndex + 1}`, {
+      filterIndex: 'Choose one of the unit’s filters',
+    });
+  }
+  return db.transaction(async (transaction) => {
+    const updated = await repo.setFittedFilter(id, filterIndex, now, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'unit.filter-fitted',
+        entityType: 'unit',
+        entityId: id,
+        summary: `Fitted the ${bandList(filter.bands)} filter in unit ${unit.name} at ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC`,
+        before: { fittedFilter: unit.fittedFilter },
+        after: { fittedFilter: updated.fittedFilter },
+      },
+      transaction,
+    );
+    return updated;
+  });
 }

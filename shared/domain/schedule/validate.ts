@@ -4,6 +4,7 @@
  */
 import { commandForBand, producedFrequencyHz, thermalDriftHz } from '../calibration';
 import { checkTonesInWindow } from '../tones';
+import { rotationFilterProblem } from '../workshop/filter-selection';
 
 import { WARM_UP_DEG_C, stationMessages, type StationSettings, type UnitHardware } from '../workshop/on-air';
 import { dayNumber } from './dates';
@@ -24,6 +25,12 @@ export function validateSchedule(input: { schedule: ScheduleRules; station: Stat
     issues.push({ level: 'warn', message, ...(stepIndex === undefined ? {} : { stepIndex }) });
 
   if (schedule.steps.length === 0) block('Add at least one band to the rotation.');
+  const rotation = rotationFilterProblem(
+    unit,
+    schedule.steps.map((s) => s.bandId),
+    station.region,
+  );
+  if (rotation) block(rotation);
   const messages = stationMessages(station, unit);
   if (!messages.ok) block(`The station's messages cannot be built: ${messages.reason}`);
   const pair = messages.ok && messages.messages.length === 2;

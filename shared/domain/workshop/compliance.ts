@@ -7,11 +7,18 @@ import { bandFor, type BandId } from '../bands';
 import type { ScheduleRules } from '../schedule/model';
 import { validateCallsign } from '../wspr/callsign';
 import { planMessages } from '../wspr/message-plan';
-import { filterCoverage } from './coverage';
+import { rotationFilterProblem, selectFilter } from './filter-selection';
 import { bandOnAir, stationPower, type StationSettings, type UnitHardware } from './on-air';
 
 export type ComplianceCode =
-  'no-unit' | 'unfiltered-band' | 'power-over-limit' | 'not-encodable' | 'tones-outside-window' | 'not-calibrated' | 'harmonics-fail';
+  | 'no-unit'
+  | 'unfiltered-band'
+  | 'filter-selection'
+  | 'power-over-limit'
+  | 'not-encodable'
+  | 'tones-outside-window'
+  | 'not-calibrated'
+  | 'harmonics-fail';
 
 export type ComplianceFinding = { code: ComplianceCode; bandId?: BandId; message: string };
 
@@ -43,11 +50,13 @@ export function complianceFindings(input: {
     });
   }
   const scheduled = new Set(schedule?.steps.map((s) => s.bandId) ?? []);
+  const rotation = rotationFilterProblem(unit, [...scheduled], station.region);
+  if (rotation) findings.push({ code: 'filter-selection', message: rotation });
   const enabled = station.bands.filter((b) => b.enabled).map((b) => b.bandId);
   for (const bandId of new Set([...enabled, ...scheduled])) {
     const found = bandFor(bandId, station.region);
     if (!found.ok) continue;
-    const coverage = filterCoverage(unit.filters, found.band);
+    const coverage = selectFilter(unit, found.band);
     if (!coverage.covered) {
       const where = scheduled.has(bandId) ? 'scheduled' : 'enabled';
       findings.push({ code: 'unfiltered-band', bandId, message: `${found.band.name} is ${where}, but ${lowerFirst(coverage.reason)}` });

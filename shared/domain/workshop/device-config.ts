@@ -7,7 +7,9 @@ import { commandForBand } from '../calibration';
 import { expandPlan } from '../schedule/expand';
 import type { ScheduleRules } from '../schedule/model';
 import { planSynth } from '../synth';
+import { bandFor } from '../bands';
 import { bytesToHex } from '../wspr/pack';
+import { selectFilter } from './filter-selection';
 import { stationMessages } from './on-air';
 import { buildStationConfig, type ConfigStation, type ConfigUnit } from './station-config';
 
@@ -38,9 +40,13 @@ export function buildDeviceConfig(station: DeviceConfigStation, unit: ConfigUnit
     const band = station.bands.find((b) => b.bandId === tx.bandId);
     const command = commandForBand(tx.dialHz, tx.audioOffsetHz, { referenceErrorPpm: 0, bandOffsetHz: band?.calibrationOffsetHz ?? 0 });
     const synth = unit?.generatorKind === 'pll' ? planSynth({ referenceHz: unit.referenceHz, targetsHz: command.commandTonesHz }) : null;
+    // the shared filter rule: which filter to put in circuit before keying (the plan only holds bands it allows)
+    const found = bandFor(tx.bandId, station.region);
+    const choice = unit && found.ok ? selectFilter(unit, found.band) : null;
     return {
       startUtc: tx.startUtc,
       bandId: tx.bandId,
+      filter: choice?.covered ? choice.select : null,
       carrierHz: round3(tx.carrierHz),
       commandHz: round3(tx.commandHz),
       messageText: tx.messageText,
@@ -62,6 +68,11 @@ export function buildDeviceConfig(station: DeviceConfigStation, unit: ConfigUnit
   });
   return {
     ...base,
+    filters: unit && {
+      selection: unit.filterSelection,
+      fitted: unit.filterSelection === 'hand' ? unit.fittedFilter : null,
+      list: unit.filters.map((f, index) => ({ index, bands: f.bands, cutoffHz: f.cutoffHz, controlCode: f.controlCode || null })),
+    },
     identity: { stationId: station.id, callsign: station.callsign, locator: station.locator },
     status: suspended ? ('suspended' as const) : station.transmitEnabled ? ('transmit' as const) : ('off' as const),
     suspension: station.suspension && { reason: station.suspension.reason, sinceUtc: station.suspension.at },

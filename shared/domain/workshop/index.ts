@@ -1,4 +1,5 @@
 export * from './coverage';
+export * from './filter-selection';
 export * from './spurious';
 export * from './on-air';
 export * from './station-config';

@@ -5,14 +5,14 @@
 import { bandFor, type Band, type BandId, type LicenceRegion } from '../bands';
 import { commandForBand, thermalDriftHz, type BandCommand } from '../calibration';
 import { attenuationDb, FILTER_KINDS, type FilterKind } from '../filters';
-import { squareWaveHarmonics } from '../harmonics';
 import { chainOutput, dbmToMw, type PowerChainResult } from '../power';
 import { planSynth, type SynthPlan } from '../synth';
 import { checkTonesInWindow, toneFrequenciesHz, type WindowCheck } from '../tones';
 import { encodeMessage } from '../wspr/encode';
 import { planMessages } from '../wspr/message-plan';
-import { filterCoverage, type Coverage, type InstalledFilter } from './coverage';
-import { spuriousLimitFor, type SpuriousLimit } from './spurious';
+import type { Coverage } from './coverage';
+import { selectFilter, type FilterChoice, type FilterSelection, type SelectableFilter } from './filter-selection';
+import { spuriousRequirement, type SpuriousLimit } from './spurious';
 
 export type UnitHardware = {
   generatorKind: 'pll' | 'dds' | 'other';
@@ -23,7 +23,11 @@ export type UnitHardware = {
   generatorLevelDbm: number;
   attenuatorDb: number;
   amplifier: { gainDb: number; saturatedDbm: number } | null;
-  filters: readonly InstalledFilter[];
+  filters: readonly SelectableFilter[];
+  /** how the filters are put in circuit; absent = switched by the controller */
+  filterSelection?: FilterSelection;
+  /** hand-swapped filters: the one fitted now */
+  fittedFilter?: { index: number; atUtc?: string } | null;
   dutyCycle: number;
 };
 
@@ -80,11 +84,22 @@ export type HarmonicsVerdict = {
   summary: string;
 };
 
-export function harmonicsVerdict(band: Band, unit: UnitHardware, coverage: Coverage, outputDbm: number): HarmonicsVerdict {
-  const limit = spuriousLimitFor(band.region, band.dialHz, dbmToMw(outputDbm) / 1000);
+export function harmonicsVerdict(
+  band: Band,
+  unit: UnitHardware,
+  coverage: Coverage,
+  outputDbm: number,
+  carrierHz: number = band.dialHz + 1500,
+): HarmonicsVerdict {
+  const { limit, harmonics: raw } = spuriousRequirement({
+    region: band.region,
+    carrierHz,
+    powerW: dbmToMw(outputDbm) / 1000,
+    dutyCycle: unit.dutyCycle,
+  });
   const filter = coverage.covered ? coverage.filter : null;
   const modelled = filter && (FILTER_KINDS as readonly string[]).includes(filter.type) ? (filter.type as FilterKind) : null;
-  const harmonics = squareWaveHarmonics(band.dialHz + 1500, { dutyCycle: unit.dutyCycle, upTo: 9 }).map((h) => {
+  const harmonics = raw.map((h) => {
     const filterDb = !filter ? 0 : modelled ? attenuationDb(modelled, filter.order, filter.cutoffHz, h.frequencyHz) : null;
     const resultDbc = h.levelDbc === null || filterDb === null ? null : h.levelDbc - filterDb;
     return {
@@ -112,7 +127,8 @@ export function harmonicsVerdict(band: Band, unit: UnitHardware, coverage: Cover
 export type BandOnAir = {
   band: Band;
   enabled: boolean;
-  coverage: Coverage;
+  /** the filter in circuit for this band (and how to select it), or why there is none */
+  coverage: FilterChoice;
   calibrated: boolean;
   calibrationOffsetHz: number;
   command: BandCommand;
@@ -136,7 +152,7 @@ export function bandOnAir(station: StationSettings, unit: UnitHardware, bandId: 
   const setting = station.bands.find((b) => b.bandId === bandId);
   const calibrationOffsetHz = setting?.calibrationOffsetHz ?? 0;
   const command = commandForBand(band.dialHz, station.audioOffsetHz, { referenceErrorPpm: 0, bandOffsetHz: calibrationOffsetHz });
-  const coverage = filterCoverage(unit.filters, band);
+  const coverage = selectFilter(unit, band);
   const window = checkTonesInWindow(band.dialHz, command.tonesHz);
   const carrierHz = command.carrierHz;
   const warmUpDriftHz = unit.disciplined
@@ -174,6 +190,6 @@ export function bandOnAir(station: StationSettings, unit: UnitHardware, bandId: 
     driftedWindow,
     synth,
     synthProblem,
-    harmonics: harmonicsVerdict(band, unit, coverage, stationPower(unit).outputDbm),
+    harmonics: harmonicsVerdict(band, unit, coverage, stationPower(unit).outputDbm, carrierHz),
   };
 }

@@ -4,7 +4,7 @@
  * and the screen tells the operator to check the local rule.
  */
 import type { LicenceRegion } from '../bands';
-import { defaultSpuriousLimitDb } from '../harmonics';
+import { defaultSpuriousLimitDb, requiredFilterAttenuation, type FilterRequirement } from '../harmonics';
 
 export type SpuriousLimit = { limitDb: number; rule: string; source: string };
 
@@ -26,4 +26,37 @@ export function spuriousLimitFor(region: LicenceRegion, fundamentalHz: number, p
     rule: `${limitDb.toFixed(1)} dB below the carrier (43 + 10·log10 P, at most ${cap} dB)`,
     source: 'ITU Radio Regulations Appendix 3 (amateur services; from memory)',
   };
+}
+
+export type SpuriousRequirement = {
+  /** the fundamental the harmonics are counted from: the real carrier (dial + audio offset) */
+  carrierHz: number;
+  limit: SpuriousLimit;
+  harmonics: FilterRequirement[];
+};
+
+/**
+ * The one spurious check: the square-wave drive's harmonics of the real carrier, the region's limit
+ * for that carrier and power, and the attenuation a filter must add at each harmonic. The CLI's
+ * `filter` and the station's compliance verdict both call it. `limitDb` overrides the region's rule.
+ */
+export function spuriousRequirement(input: {
+  region: LicenceRegion;
+  carrierHz: number;
+  powerW: number;
+  dutyCycle?: number;
+  upTo?: number;
+  limitDb?: number;
+}): SpuriousRequirement {
+  const regional = spuriousLimitFor(input.region, input.carrierHz, input.powerW);
+  const limit =
+    input.limitDb === undefined
+      ? regional
+      : { limitDb: input.limitDb, rule: `${input.limitDb} dB below the carrier (given)`, source: 'given by the operator' };
+  const harmonics = requiredFilterAttenuation(input.carrierHz, {
+    dutyCycle: input.dutyCycle,
+    upTo: input.upTo ?? 9,
+    limitDb: limit.limitDb,
+  });
+  return { carrierHz: input.carrierHz, limit, harmonics };
 }

@@ -55,7 +55,7 @@ export function validatePlainCallsign(text: string): Result<PlainCallsign> {
   else {
     const first = [...callsign].findIndex(isDigit) + 1;
     return refuse(
-      `In '${callsign}' the first digit is character ${first}; WSPR needs a digit as the 2nd or 3rd character (K1ABC, KA1ABC).`,
+      `In '${callsign}' neither the 2nd nor the 3rd character is a digit (its first digit is character ${first}); WSPR needs the digit that ends the prefix there, as in K1ABC or KA1ABC.`,
     );
   }
   const tail = callsign.slice(digitAt + 1);
@@ -95,7 +95,9 @@ export function validateCallsign(text: string): Result<CallsignInfo> {
   const bad = [...left, ...right].find((ch) => !isAlnum(ch));
   if (bad !== undefined) return refuse(`A callsign uses only letters A–Z, digits 0–9 and one '/'; '${bad}' is not allowed.`);
 
-  const asSuffix = right.length <= 2 || (left.length > 3 && validatePlainCallsign(left).ok);
+  // The side that is a callsign by itself is the base; when both are (VE3AB/K1ABC) the right one is,
+  // so the left one is a prefix, and one of more than three characters is too long.
+  const asSuffix = right.length <= 2 || (left.length > 3 && validatePlainCallsign(left).ok && !validatePlainCallsign(right).ok);
   if (asSuffix) {
     const base = validatePlainCallsign(left);
     if (!base.ok) return refuse(`In '${callsign}': ${base.reason}`);

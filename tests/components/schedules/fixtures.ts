@@ -35,9 +35,11 @@ export const unit: Unit = {
   attenuatorDb: 0,
   amplifier: null,
   filters: [
-    { bands: ['40m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 7.8e6 },
-    { bands: ['20m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 15.6e6 },
+    { bands: ['40m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 7.8e6, controlCode: '' },
+    { bands: ['20m'], type: 'chebyshev-0.5', order: 5, cutoffHz: 15.6e6, controlCode: '' },
   ],
+  filterSelection: 'switched',
+  fittedFilter: null,
   antenna: { kind: 'dipole', bands: [], gainDbi: 2.15 },
   dutyCycle: 0.5,
   notes: '',

@@ -191,20 +191,30 @@ describe('expandPlan, properties', () => {
     );
   });
 
+  // A band's calibration is the generator's measured error in Hz, positive = it radiates high (the
+  // station's definition); a generator told f then radiates f + error, so the command must be carrier − error.
+  // Written out here rather than through the code's own correction, so a sign error there is caught.
   it('when any schedule is expanded, all four tones as radiated after calibration sit inside the window', () => {
     fc.assert(
       fc.property(scheduleArb(), stationUnitArb, (schedule, { station, unit }) =>
         expandPlan({ schedule, station, unit, ...day }).transmissions.every((t) => {
-          const cal = { referenceErrorPpm: 0, bandOffsetHz: station.bands.find((b) => b.bandId === t.bandId)?.calibrationOffsetHz ?? 0 };
-          if (Math.abs(producedFrequencyHz(t.commandHz, cal) - t.carrierHz) > 1e-6) return false;
+          const errorHz = station.bands.find((b) => b.bandId === t.bandId)?.calibrationOffsetHz ?? 0;
+          if (Math.abs(t.commandHz - (t.carrierHz - errorHz)) > 1e-6) return false;
+          const radiatedCarrier = t.commandHz + errorHz;
           return [0, 1, 2, 3].every((k) => {
-            const radiated = producedFrequencyHz(commandFrequencyHz(t.carrierHz + k * TONE_SPACING_HZ, cal), cal);
+            const radiated = radiatedCarrier + k * TONE_SPACING_HZ;
             return radiated >= t.dialHz + WINDOW_LOW_HZ && radiated <= t.dialHz + WINDOW_HIGH_HZ;
           });
         }),
       ),
       { numRuns: 1000 },
     );
+  });
+
+  it('when the generator runs 10 ppm fast, the command is the carrier divided by 1.00001 (definition of ppm)', () => {
+    // 14 097 100 Hz / (1 + 10e-6) = 14 096 959.03… Hz; a reversed sign would give 14 097 240.97 Hz
+    expect(commandFrequencyHz(14_097_100, { referenceErrorPpm: 10 })).toBeCloseTo(14_096_959.0304, 3);
+    expect(producedFrequencyHz(14_096_959.0304, { referenceErrorPpm: 10 })).toBeCloseTo(14_097_100, 3);
   });
 
   it('when a range [a, c) is split at b, expanding [a, b) then [b, c) gives the same plan', () => {

@@ -22,6 +22,8 @@ describe('validatePlainCallsign', () => {
     ['', /Enter a callsign/],
     ['KABC', /no digit/],
     ['ABCD1', /first digit is character 5/],
+    // 3DA0XY: the 2nd character 'D' and the 3rd 'A' are letters, so WSPR's six-character form cannot hold it
+    ['3DA0XY', /neither the 2nd nor the 3rd character is a digit/],
     ['K1', /at least one letter after the digit/],
     ['K1AB2', /character 5 \('2'\) is not a letter/],
     ['K1ABCD', /4 letters after the digit/],
@@ -49,6 +51,8 @@ describe('validateCallsign', () => {
     ['K1ABC/07', /from \/10 to \/99/],
     ['K1ABC/PA', /two digits/],
     ['ABCD/K1ABC', /1 to 3/],
+    // both sides are callsigns by themselves: the left one is a prefix, and five characters are too many
+    ['VE3AB/K1ABC', /prefix 'VE3AB\/' has 5 characters/],
     ['K1ABC/', /nothing on one side/],
     ['PJ4/KABC', /no digit/],
   ])('when given %s, refuses and says what to fix', (text, reason) => {
