@@ -12,6 +12,7 @@ import { myClubThingsRouter } from './features/clubs/my-club-things.router';
 import { createDeviceGateway, withDeviceFastPath, type DeviceGateway } from './features/devices/device-gateway';
 import { deviceRouter } from './features/devices/device.router';
 import { setOfflineAfter } from './features/devices/health.service';
+import { pairingDeviceRouter, pairingRouter } from './features/devices/pairing.router';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
@@ -35,6 +36,8 @@ export type AppDeps = {
   fakeSmtp?: FakeSmtp;
   /** Where uploads go; defaults to the driver named in the config. */
   storage?: FileStorage;
+  /** The clock pairing codes are timed by (tests pass a controllable one). */
+  now?: () => Date;
 };
 
 const CSP = {
@@ -56,7 +59,15 @@ const CSP = {
 };
 
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
-export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
+export function createApp({
+  config,
+  sequelize,
+  mailer,
+  logger,
+  fakeSmtp,
+  storage = createStorage(config),
+  now = () => new Date(),
+}: AppDeps) {
   const app = express();
   setOfflineAfter(config.DEVICE_OFFLINE_AFTER_S);
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
@@ -65,6 +76,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
   const deviceGateway = createDeviceGateway({ sequelize, config });
   app.locals.deviceGateway = deviceGateway;
+  app.use('/api/device/v1', pairingDeviceRouter({ config, now }));
   app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
@@ -96,6 +108,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use('/units', unitsRouter({ storage, logger }));
   api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));
   api.use(myClubThingsRouter({ sequelize }));
+  api.use('/pairing', pairingRouter({ config, now }));
   api.use(apiNotFound);
   app.use('/api', api);
 

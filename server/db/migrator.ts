@@ -4,6 +4,7 @@ import * as m0001 from './migrations/0001-accounts-and-stations';
 import * as m0002 from './migrations/0002-units-and-station-bands';
 import * as m0003 from './migrations/0003-schedules-and-clubs';
 import * as m0004 from './migrations/0004-devices';
+import * as m0007 from './migrations/0007-device-pairing';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
@@ -11,6 +12,7 @@ const migrations = [
   { name: '0002-units-and-station-bands', ...m0002 },
   { name: '0003-schedules-and-clubs', ...m0003 },
   { name: '0004-devices', ...m0004 },
+  { name: '0007-device-pairing', ...m0007 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

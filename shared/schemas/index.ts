@@ -5,3 +5,4 @@ export * from './station';
 export * from './schedule';
 export * from './club';
 export * from './device';
+export * from './pairing';
