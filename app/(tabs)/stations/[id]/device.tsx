@@ -4,6 +4,7 @@ import { Platform } from 'react-native';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { DeviceCredentials } from '@/components/devices/device-credentials';
+import { PairingCard } from '@/components/devices/pairing-card';
 import { useIssueDeviceTokenMutation, useRevokeDeviceTokenMutation } from '@/components/devices/queries';
 import { useStationHealthQuery } from '@/components/health/queries';
 import { heardWords } from '@/components/health/words';
@@ -67,6 +68,7 @@ export default function StationDeviceRoute() {
         onRotate={() => setConfirming('rotate')}
         onRevoke={() => setConfirming('revoke')}
         onHideToken={() => setFreshToken(null)}
+        pairing={station.data.ownerId === me?.id ? <PairingCard origin={origin} /> : null}
       />
     );
   }
