@@ -6,6 +6,7 @@ import { AuthShell } from '@/components/auth/auth-shell';
 import { useRegisterMutation, useSessionQuery, useSignInMutation } from '@/components/auth/queries';
 import { RegisterForm } from '@/components/auth/register-form';
 import { SignInForm } from '@/components/auth/sign-in-form';
+import { Wordmark } from '@/components/brand/faintline-mark';
 import { PairCodeFormView } from '@/components/devices/pair-code-form';
 import { PairingOutcome } from '@/components/devices/pairing-outcome';
 import { PairingReview } from '@/components/devices/pairing-review';
@@ -152,7 +153,8 @@ function SignedInPairing({ initialCode }: { initialCode: string }) {
     >
       <Stack.Screen options={{ title: TITLE }} />
       <View style={styles.head}>
-        <Text variant="title" accessibilityRole="header">
+        <Wordmark />
+        <Text variant="title" accessibilityRole="header" style={styles.title}>
           Pair a device
         </Text>
         <TextLink href="/stations" label="Back to your stations" />
@@ -164,5 +166,6 @@ function SignedInPairing({ initialCode }: { initialCode: string }) {
 
 const styles = StyleSheet.create({
   head: { gap: space.xs },
+  title: { marginTop: space.md },
   form: { gap: space.lg },
 });

@@ -1,4 +1,4 @@
-import { Stack, useFocusEffect, useLocalSearchParams } from 'expo-router';
+import { router, Stack, useFocusEffect, useLocalSearchParams } from 'expo-router';
 import { useCallback, useState } from 'react';
 import { Platform } from 'react-native';
 
@@ -68,7 +68,7 @@ export default function StationDeviceRoute() {
         onRotate={() => setConfirming('rotate')}
         onRevoke={() => setConfirming('revoke')}
         onHideToken={() => setFreshToken(null)}
-        pairing={station.data.ownerId === me?.id ? <PairingCard origin={origin} /> : null}
+        pairing={station.data.ownerId === me?.id ? <PairingCard origin={origin} onPair={() => router.push('/pair')} /> : null}
       />
     );
   }
