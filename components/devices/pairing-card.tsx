@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '../ui/card';
@@ -6,7 +6,7 @@ import { Text } from '../ui/text';
 import { Button } from '../ui/button';
 import { space } from '../ui/theme';
 
-// the QR encoder stays out of the start-up bundle: it loads with this card
+// the QR encoder stays out of the start-up bundle: it loads when the example is asked for
 const QrCode = lazy(() => import('./qr-code'));
 
 export type PairingCardProps = { origin: string; onPair: () => void };
@@ -16,6 +16,7 @@ const EXAMPLE_CODE = 'BCDF-GHJK';
 /** On the device screen: pairing by code, the way that needs no token copied; the token below stays the fallback. */
 export function PairingCard({ origin, onPair }: PairingCardProps) {
   const example = `${origin}/pair?code=${EXAMPLE_CODE}`;
+  const [showQr, setShowQr] = useState(false);
   return (
     <Card>
       <Text variant="heading" accessibilityRole="header">
@@ -27,15 +28,24 @@ export function PairingCard({ origin, onPair }: PairingCardProps) {
       </Text>
       <Button label="Pair a device" onPress={onPair} style={styles.button} />
       <View style={styles.qrRow}>
-        <Suspense fallback={<View style={styles.qrSpace} />}>
-          <QrCode value={example} sizePx={132} label={`QR code of ${example}`} />
-        </Suspense>
+        {showQr ? (
+          <Suspense fallback={<View style={styles.qrSpace} />}>
+            <QrCode value={example} sizePx={132} label={`QR code of ${example}`} />
+          </Suspense>
+        ) : null}
         <View style={styles.qrText}>
           <Text variant="label">A device with a display</Text>
           <Text variant="caption" tone="muted">
-            shows the code and a QR code of its pairing link (verification_uri_complete), like this one for the example code {EXAMPLE_CODE}.
-            A phone camera opens the pairing page with the code filled in.
+            shows the code and a QR code of its pairing link (verification_uri_complete): a phone camera opens the pairing page with the
+            code filled in.
           </Text>
+          {showQr ? (
+            <Text variant="caption" tone="muted">
+              This one is for the example code {EXAMPLE_CODE}.
+            </Text>
+          ) : (
+            <Button label="Show an example QR code" variant="ghost" onPress={() => setShowQr(true)} style={styles.button} />
+          )}
         </View>
       </View>
     </Card>

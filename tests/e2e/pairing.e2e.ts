@@ -104,6 +104,7 @@ for (const viewport of VIEWPORTS) {
         if (!phone) {
           await page.goto(`${BASE_URL}/stations/${station.id}/device`);
           await visibleText(page, 'Pair a device by code').waitFor();
+          await page.getByRole('button', { name: 'Show an example QR code' }).click();
           await page.getByRole('img', { name: /QR code of/ }).waitFor();
           await screenshot(page, `e2e-pair-device-screen-${viewport.name}`);
           await page.getByRole('button', { name: 'Pair a device' }).click();
