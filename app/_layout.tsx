@@ -69,6 +69,8 @@ function RootStack({ fontsReady }: { fontsReady: boolean }) {
       </Stack.Protected>
       {/* the invitation link works signed in and signed out (it offers sign-in and comes back) */}
       <Stack.Screen name="join" options={{ title: 'Join a club · Faintline' }} />
+      {/* where a device's pairing code is typed; signed out it offers sign-in and keeps the code */}
+      <Stack.Screen name="pair" options={{ title: 'Pair a device · Faintline' }} />
       <Stack.Screen name="+not-found" options={{ title: 'Page not found' }} />
     </Stack>
   );

@@ -16,6 +16,7 @@ import { deviceRouter } from './features/devices/device.router';
 import { clubBeaconsRouter, fleetRouter, stationDevicesRouter } from './features/devices/station-devices.router';
 import { livenessRouter } from './features/liveness/liveness.router';
 import { notificationsRouter } from './features/notifications/notifications.router';
+import { pairingDeviceRouter, pairingRouter } from './features/devices/pairing.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -37,6 +38,8 @@ export type AppDeps = {
   fakeSmtp?: FakeSmtp;
   /** Where uploads go; defaults to the driver named in the config. */
   storage?: FileStorage;
+  /** The clock pairing codes are timed by (tests pass a controllable one). */
+  now?: () => Date;
 };
 
 const CSP = {
@@ -58,7 +61,15 @@ const CSP = {
 };
 
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
-export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
+export function createApp({
+  config,
+  sequelize,
+  mailer,
+  logger,
+  fakeSmtp,
+  storage = createStorage(config),
+  now = () => new Date(),
+}: AppDeps) {
   const app = express();
   const secureCookies = config.COOKIE_SECURE === 'true' || (config.COOKIE_SECURE === 'auto' && config.WEB_ORIGIN.startsWith('https:'));
   app.disable('x-powered-by');
@@ -66,6 +77,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
   const deviceGateway = createDeviceGateway({ sequelize, config });
   app.locals.deviceGateway = deviceGateway;
+  app.use('/api/device/v1', pairingDeviceRouter({ sequelize, config, now }));
   app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
@@ -102,6 +114,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use('/offset-proposals', proposalsRouter({ sequelize }));
   api.use('/notifications', notificationsRouter());
   api.use('/audit', auditRouter());
+  api.use('/pairing', pairingRouter({ sequelize, config, now }));
   api.use(apiNotFound);
   app.use('/api', api);
 

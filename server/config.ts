@@ -34,6 +34,10 @@ const configSchema = z.object({
   /** How often each process reads the other processes' station changes (0 turns the feed off: one process only). */
   CHANGE_FEED_POLL_MS: z.coerce.number().int().min(0).default(250),
   DEVICE_CONFIG_CACHE_MB: z.coerce.number().min(1).default(64),
+  // pairing by code: wrong codes per account and per address in 15 minutes; pairing requests per address in 10 minutes
+  PAIRING_CODE_ATTEMPTS: z.coerce.number().int().min(1).default(10),
+  PAIRING_ADDRESS_ATTEMPTS: z.coerce.number().int().min(1).default(30),
+  PAIRING_REQUESTS_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),
 });

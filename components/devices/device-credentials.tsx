@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 
 import { Button } from '../ui/button';
@@ -26,6 +26,8 @@ export type DeviceCredentialsProps = {
   onRotate: () => void;
   onRevoke: () => void;
   onHideToken: () => void;
+  /** pairing by code, offered first; the token below is the fallback */
+  pairing?: ReactNode;
 };
 
 async function copyText(text: string): Promise<boolean> {
@@ -79,6 +81,7 @@ export function DeviceCredentials({
   onRotate,
   onRevoke,
   onHideToken,
+  pairing,
 }: DeviceCredentialsProps) {
   const { colors } = useAppTheme();
   return (
@@ -93,6 +96,7 @@ export function DeviceCredentials({
         </Text>
       </View>
       {error ? <Notice message={error} /> : null}
+      {freshToken ? null : pairing}
       {freshToken ? <FreshToken token={freshToken} onHide={onHideToken} /> : null}
       {!hasDevice && !freshToken ? (
         <EmptyState

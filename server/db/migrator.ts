@@ -6,6 +6,7 @@ import * as m0003 from './migrations/0003-schedules-and-clubs';
 import * as m0004 from './migrations/0004-devices';
 import * as m0005 from './migrations/0005-suspended-by';
 import * as m0006 from './migrations/0006-filter-selection';
+import * as m0007 from './migrations/0007-device-pairing';
 import * as m0008 from './migrations/0008-reception-reports';
 import * as m0011 from './migrations/0011-station-change-feed';
 
@@ -17,6 +18,7 @@ const migrations = [
   { name: '0004-devices', ...m0004 },
   { name: '0005-suspended-by', ...m0005 },
   { name: '0006-filter-selection', ...m0006 },
+  { name: '0007-device-pairing', ...m0007 },
   { name: '0008-reception-reports', ...m0008 },
   { name: '0011-station-change-feed', ...m0011 },
 ];

@@ -4,6 +4,7 @@ import { AuditEntryModel, InvitationModel, NotificationModel, OffsetProposalMode
 import { ClubModel } from './models/club.model';
 import { AlertModel, AlertSettingsModel, DeviceTokenModel, DeviceTransmissionModel, HeartbeatModel } from './models/device.model';
 import { MembershipModel } from './models/membership.model';
+import { DevicePairingModel, PairingAttemptModel } from './models/pairing.model';
 import { PasswordResetModel } from './models/password-reset.model';
 import { ScheduleModel } from './models/schedule.model';
 import { StationBandModel } from './models/station-band.model';
@@ -38,6 +39,8 @@ export function createSequelize(databaseUrl: string): Sequelize {
   ListeningPostModel.initModel(sequelize);
   for (const model of [DeviceTokenModel, HeartbeatModel, DeviceTransmissionModel, AlertSettingsModel, AlertModel])
     model.initModel(sequelize);
+  DevicePairingModel.initModel(sequelize);
+  PairingAttemptModel.initModel(sequelize);
 
   UserModel.hasMany(StationModel, { foreignKey: 'ownerId', as: 'stations' });
   StationModel.belongsTo(UserModel, { foreignKey: 'ownerId', as: 'owner' });

@@ -1,9 +1,10 @@
-import { Stack, useFocusEffect } from 'expo-router';
+import { router, Stack, useFocusEffect } from 'expo-router';
 import { useCallback, useState } from 'react';
 import { Platform } from 'react-native';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { DeviceCredentials } from '@/components/devices/device-credentials';
+import { PairingCard } from '@/components/devices/pairing-card';
 import { useIssueDeviceTokenMutation, useRevokeDeviceTokenMutation } from '@/components/devices/queries';
 import { useStationHealthQuery } from '@/components/health/queries';
 import { heardWords } from '@/components/health/words';
@@ -77,6 +78,7 @@ export default function StationDeviceRoute() {
               issuing={issue.isPending}
               error={asking ? undefined : (issue.error?.message ?? revoke.dialog.error)}
               origin={origin}
+              pairing={data.ownerId === me?.id ? <PairingCard origin={origin} onPair={() => router.push('/pair')} /> : null}
               onCreate={() => issue.mutate(undefined, { onSuccess: showToken })}
               onRotate={() => rotate.ask()}
               onRevoke={() => revoke.ask()}
