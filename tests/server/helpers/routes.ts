@@ -99,6 +99,16 @@ export const API_ROUTES: RouteSpec[] = [
     body: { transmissions: [{ startUtc: '2026-12-02T10:00:01Z', bandId: '20m', frequencyHz: 14097100, messageText: 'Q9ZZT JO22 23' }] },
   },
   { method: 'get', path: '/api/device/v1/config', device: true },
+  { method: 'post', path: '/api/device/v1/pairing', body: { model: 'Fuzz beacon', firmware: '1.0' } },
+  {
+    method: 'post',
+    path: '/api/device/v1/token',
+    body: { grant_type: 'urn:ietf:params:oauth:grant-type:device_code', device_code: 'x'.repeat(43) },
+  },
+  { method: 'get', path: '/api/pairing/:code' },
+  { method: 'post', path: '/api/pairing/:code/approve', body: { targetId: 1 } },
+  { method: 'post', path: '/api/pairing/:code/refuse' },
+  { method: 'post', path: '/api/units/:unit/fitted-filter', body: { filterIndex: 0 } },
   // Last: they take things away from the scenario.
   { method: 'delete', path: '/api/clubs/:club/stations/:station/suspension' },
   { method: 'delete', path: '/api/units/:unit/photos/:photo' },
