@@ -14,6 +14,9 @@ import { deviceRouter } from './features/devices/device.router';
 import { setOfflineAfter } from './features/devices/health.service';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
+import { deviceReceptionsRouter } from './features/receptions/device-receptions.router';
+import { listeningPostsRouter } from './features/receptions/listening-posts.router';
+import { receptionsRouter } from './features/receptions/receptions.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -65,6 +68,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
   const deviceGateway = createDeviceGateway({ sequelize, config });
   app.locals.deviceGateway = deviceGateway;
+  app.use('/api/device/v1/receptions', deviceReceptionsRouter({ sequelize, config }));
   app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
@@ -89,6 +93,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   );
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
+  api.use(receptionsRouter({ sequelize }));
+  api.use('/listening-posts', listeningPostsRouter({ sequelize }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations/:id', stationDevicesRouter({ sequelize }));
   api.use(fleetHealthRouter());

@@ -7,6 +7,7 @@ import type { CalibrationInput, MeasurementInput, Station, StationBandInput, Sta
 import { inTransaction } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
+import { forgetStation as forgetReceptionAggregates } from '../receptions/receptions.service';
 import { adminSharesClubWith } from '../clubs/clubs.repo';
 import * as unitsRepo from '../units/units.repo';
 import * as repo from './stations.repo';
@@ -100,6 +101,7 @@ export async function remove(user: SessionUser, id: number) {
   const before = await getOwnedBy(user, id);
   await inTransaction(async (transaction) => {
     await repo.remove(id, transaction);
+    await forgetReceptionAggregates(id, transaction);
     await audit.record(
       {
         actor: user,
