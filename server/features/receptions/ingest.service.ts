@@ -5,14 +5,12 @@
 import type { Sequelize } from 'sequelize';
 import { pathBetweenLocators } from '@/shared/domain/path';
 import { expectedHeardHz, slotStartMs, SLOT_MS } from '@/shared/domain/reception';
-import { expandCompiled } from '@/shared/domain/schedule';
 import type { ReceptionIngestResult, RejectedReport } from '@/shared/api/receptions';
 import { receptionReportInput, type ReceptionReportValues } from '@/shared/schemas';
-import { stationPlans, type StationPlan } from './plan-cache';
+import { PlanMemo, stationPlans } from './plan-cache';
 import { storeReports, type BatchOrigin, type StorableReport, type StoreResult } from './reports.repo';
 import { candidatesFor, type MatchCandidate } from './station-match.repo';
 
-const DAY_MS = 86_400_000;
 /** A heard frequency further than this from a station's planned centre is not taken as that station's (our rule). */
 export const MATCH_TOLERANCE_HZ = 25;
 /** The nearest station must be at least this much nearer than the next one to be told apart (our rule). */
@@ -24,27 +22,6 @@ function pathOf(report: ReportToIngest) {
   if (!report.txLocator) return { distanceKm: null, bearingDeg: null };
   const path = pathBetweenLocators(report.txLocator, report.rxLocator);
   return path.ok ? { distanceKm: path.distanceKm, bearingDeg: path.bearingDeg } : { distanceKm: null, bearingDeg: null };
-}
-
-/** The planned carriers of one station, a UTC day expanded at a time and only for days the batch touches. */
-class PlannedCarriers {
-  private readonly days = new Map<number, Map<string, number>>();
-  constructor(private readonly plan: StationPlan['plan']) {}
-
-  /** Tone 0's planned frequency in that slot on that band, or null when the plan has nothing there. */
-  carrierAt(slotMs: number, bandId: string): number | null {
-    if (!this.plan) return null;
-    const day = Math.floor(slotMs / DAY_MS);
-    let byKey = this.days.get(day);
-    if (!byKey) {
-      byKey = new Map();
-      for (const t of expandCompiled(this.plan, day * DAY_MS, (day + 1) * DAY_MS).transmissions) {
-        byKey.set(`${slotStartMs(t.startMs)}|${t.bandId}`, t.carrierHz);
-      }
-      this.days.set(day, byKey);
-    }
-    return byKey.get(`${slotMs}|${bandId}`) ?? null;
-  }
 }
 
 type Match = { stationId: number | null; ambiguous: boolean; frequencyErrorHz: number | null };
@@ -59,7 +36,7 @@ export function matchReport(
   report: { txCallsign: string; bandId: string; frequencyHz: number },
   slotMs: number,
   candidates: MatchCandidate[],
-  carriers: (stationId: number) => PlannedCarriers,
+  carriers: (stationId: number) => Pick<PlanMemo, 'carrierAt'>,
 ): Match {
   const fitting = candidates.filter(
     (c) => c.callsign === report.txCallsign && c.bandId === report.bandId && c.createdAtMs <= slotMs + SLOT_MS,
@@ -90,12 +67,8 @@ export async function ingestReports(sequelize: Sequelize, reports: ReportToInges
   if (reports.length === 0) return { accepted: 0, duplicates: 0 };
   const candidates = await candidatesFor(sequelize, [...new Set(reports.map((r) => r.txCallsign))]);
   const plans = await stationPlans(sequelize, [...new Set(candidates.map((c) => c.stationId))], now.getTime());
-  const carriersByStation = new Map<number, PlannedCarriers>();
-  const carriers = (stationId: number) => {
-    let found = carriersByStation.get(stationId);
-    if (!found) carriersByStation.set(stationId, (found = new PlannedCarriers(plans.get(stationId)?.plan ?? null)));
-    return found;
-  };
+  const none = new PlanMemo(null);
+  const carriers = (stationId: number) => plans.get(stationId)?.memo ?? none;
   const rows: StorableReport[] = reports.map((report) => {
     const slotMs = slotStartMs(Date.parse(report.slotUtc));
     return {

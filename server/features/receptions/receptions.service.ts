@@ -4,7 +4,6 @@ import type { SessionUser } from '@/shared/api/contracts';
 import type { Reach, ReachReceiver, ReceptionPage, StationAtAGlance } from '@/shared/api/receptions';
 import type { BandId } from '@/shared/domain/bands';
 import { locatorToLatLon } from '@/shared/domain/locator';
-import { expandCompiled, type CompiledPlan } from '@/shared/domain/schedule';
 import type { ReceptionQuery } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import { ownerInClubs, stationIdsOf, stationOwner } from './access.repo';
@@ -116,10 +115,7 @@ export async function reach(
     stationPlans(sequelize, [stationId], nowMs),
   ]);
   const stationLatLon = locatorToLatLon(station.locator);
-  const compiled = plans.get(stationId)?.plan ?? null;
-  const planned = compiled
-    ? expandCompiled(compiled, period.fromMs, period.toMs).transmissions.filter((t) => !period.bandId || t.bandId === period.bandId).length
-    : 0;
+  const planned = plans.get(stationId)?.memo.plannedCount(period.fromMs, period.toMs, period.bandId) ?? 0;
   const heardSlots = slots.hourBand.reduce((sum, h) => sum + h.slots, 0);
   const reports = slots.hourBand.reduce((sum, h) => sum + h.reports, 0);
 
@@ -191,16 +187,6 @@ export async function reach(
   };
 }
 
-/** The next planned transmission within a week, from the cached compiled plan. */
-function nextFrom(plan: CompiledPlan, nowMs: number) {
-  if (plan.blocked.length) return undefined;
-  for (let day = 0; day < 8; day++) {
-    const found = expandCompiled(plan, nowMs + day * DAY_MS, nowMs + (day + 1) * DAY_MS).transmissions[0];
-    if (found) return found;
-  }
-  return undefined;
-}
-
 /** The overview line for each of the caller's stations: on the air, next transmission, last heard, last 24 hours. */
 export async function atAGlance(sequelize: Sequelize, user: SessionUser, nowMs: number): Promise<StationAtAGlance[]> {
   const ids = await stationIdsOf(sequelize, user.id);
@@ -212,12 +198,12 @@ export async function atAGlance(sequelize: Sequelize, user: SessionUser, nowMs: 
   ]);
   return ids.map((stationId) => {
     const plan = plans.get(stationId);
-    const next = plan?.plan ? nextFrom(plan.plan, nowMs) : undefined;
+    const next = plan?.memo.next(nowMs);
     const figures = recent.get(stationId)!;
     return {
       stationId,
       transmitting: Boolean(plan?.source.transmitEnabled && plan.plan && plan.plan.blocked.length === 0 && plan.plan.steps.length > 0),
-      nextTransmission: next ? { startUtc: next.startUtc, bandId: next.bandId } : null,
+      nextTransmission: next ? { startUtc: new Date(next.startMs).toISOString(), bandId: next.bandId as BandId } : null,
       lastHeard: heard.get(stationId) ?? null,
       last24h: { reports: figures.reports, receivers: figures.receivers, furthestKm: figures.furthestKm },
     };
