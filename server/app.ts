@@ -17,6 +17,9 @@ import { clubBeaconsRouter, fleetRouter, stationDevicesRouter } from './features
 import { livenessRouter } from './features/liveness/liveness.router';
 import { notificationsRouter } from './features/notifications/notifications.router';
 import { pairingDeviceRouter, pairingRouter } from './features/devices/pairing.router';
+import { deviceReceptionsRouter } from './features/receptions/device-receptions.router';
+import { listeningPostsRouter } from './features/receptions/listening-posts.router';
+import { receptionsRouter } from './features/receptions/receptions.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -77,6 +80,7 @@ export function createApp({
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
   const deviceGateway = createDeviceGateway({ sequelize, config });
   app.locals.deviceGateway = deviceGateway;
+  app.use('/api/device/v1/receptions', deviceReceptionsRouter({ sequelize, config }));
   app.use('/api/device/v1', pairingDeviceRouter({ sequelize, config, now }));
   app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
@@ -103,6 +107,8 @@ export function createApp({
   api.use(passport.session());
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
+  api.use(receptionsRouter({ sequelize }));
+  api.use('/listening-posts', listeningPostsRouter({ sequelize }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations/:id', stationDevicesRouter({ sequelize, offlineAfterS }));
   api.use('/stations', stationsRouter({ sequelize }));

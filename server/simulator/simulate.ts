@@ -3,11 +3,14 @@
  * Runs N simulated beacons against a running Faintline server with the demo devices' tokens
  * (or tokens from --tokens a,b,c). Ctrl-C stops it and prints what each device did.
  * npm run simulate -- --pair: one new beacon pairs by code first (RFC 8628), then runs with its token.
+ * npm run simulate -- --receivers N: N simulated listening posts hear the fleet and post their decodes.
  */
 import { Command } from 'commander';
 import { DEMO_DEVICES } from '../db/seed/demo-devices';
+import { DEMO_SIM_POSTS } from '../db/seed/demo-receivers';
 import { SimulatedDevice } from './device-sim';
 import { firstConfiguration, pairDevice } from './pairing';
+import { SimulatedReceivers } from './receiver-sim';
 
 const program = new Command('simulate')
   .description('Simulated beacons against a running Faintline server')
@@ -19,6 +22,7 @@ const program = new Command('simulate')
   .option('--pair', 'one new device: show a pairing code, wait for the owner to approve it, then run with the token it receives')
   .option('--model <text>', 'the model a pairing device reports', 'Faintline simulated beacon')
   .option('--firmware <text>', 'the firmware version a pairing device reports', 'sim-1.0')
+  .option('--receivers <n>', `simulated listening posts that hear the fleet (0–${DEMO_SIM_POSTS.length})`, '0')
   .parse();
 
 const opts = program.opts<{
@@ -30,6 +34,7 @@ const opts = program.opts<{
   pair?: boolean;
   model: string;
   firmware: string;
+  receivers: string;
 }>();
 
 async function pairedToken() {
@@ -77,6 +82,20 @@ function run(tokens: { name: string; token: string }[]) {
     `Simulating ${count} device(s) against ${opts.url}, reporting every ${(60 / Number(opts.speed)).toFixed(1)} s. Ctrl-C stops.`,
   );
   for (const device of devices) device.start();
+  const receiverCount = Math.max(0, Math.min(Number(opts.receivers) || 0, DEMO_SIM_POSTS.length));
+  const receivers =
+    receiverCount > 0
+      ? new SimulatedReceivers({
+          baseUrl: opts.url,
+          fleet: tokens.slice(0, count),
+          posts: DEMO_SIM_POSTS.slice(0, receiverCount),
+          log: (line) => console.log(line),
+        })
+      : null;
+  if (receivers) {
+    console.log(`and ${receiverCount} listening post(s) hearing them, posting each slot's decodes once it is over.`);
+    receivers.start();
+  }
 
   const summary = setInterval(() => {
     const total = devices.reduce(
@@ -89,13 +108,17 @@ function run(tokens: { name: string; token: string }[]) {
       { polls: 0, heartbeats: 0, transmissions: 0, errors: 0 },
     );
     console.log(
-      `${new Date().toISOString().slice(11, 19)} UTC  polls ${total.polls}  heartbeats ${total.heartbeats}  transmissions ${total.transmissions}  errors ${total.errors}  silent ${devices.filter((d) => d.silent).length}`,
+      `${new Date().toISOString().slice(11, 19)} UTC  polls ${total.polls}  heartbeats ${total.heartbeats}  transmissions ${total.transmissions}  errors ${total.errors}  silent ${devices.filter((d) => d.silent).length}` +
+        (receivers
+          ? `  reports accepted ${receivers.stats.accepted} (repeats ${receivers.stats.duplicates}, errors ${receivers.stats.errors})`
+          : ''),
     );
   }, 15_000);
 
   function stop() {
     clearInterval(summary);
     for (const device of devices) device.stop();
+    receivers?.stop();
     process.exit(0);
   }
   process.on('SIGINT', stop);

@@ -7,6 +7,7 @@ import { ScheduleModel } from '../models/schedule.model';
 import { DeviceTokenModel } from '../models/device.model';
 import { hashToken } from '../../features/devices/tokens.service';
 import { DEMO_DEVICES } from './demo-devices';
+import { DEMO_REPORT_DAYS, seedDemoReceptions } from './demo-receptions';
 import { ClubModel } from '../models/club.model';
 import { MembershipModel } from '../models/membership.model';
 import { StationBandModel } from '../models/station-band.model';
@@ -265,7 +266,8 @@ export async function seedDemoIfEmpty(sequelize: Sequelize, bcryptCost: number):
             steps: s.schedule.steps,
             cadence: { kind: 'every-nth', nth: s.schedule.nth },
             stagger: { stepHz: s.schedule.stepHz ?? 0, spanHz: s.schedule.spanHz ?? 0 },
-            startDate: new Date().toISOString().slice(0, 10),
+            // started a few days ago, so the demo's reception reports fall inside the plan
+            startDate: new Date(Date.now() - (DEMO_REPORT_DAYS + 1) * 86_400_000).toISOString().slice(0, 10),
           });
           await ScheduleModel.create({ stationId: row.id, spec: JSON.stringify(rules) }, { transaction });
         }
@@ -274,6 +276,7 @@ export async function seedDemoIfEmpty(sequelize: Sequelize, bcryptCost: number):
       }
     }
   });
+  await seedDemoReceptions(sequelize, Date.now());
   return true;
 }
 

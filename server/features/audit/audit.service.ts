@@ -20,7 +20,8 @@ export type AuditRecord = {
     | 'invitation'
     | 'proposal'
     | 'suspension'
-    | 'photo';
+    | 'photo'
+    | 'listening-post';
   entityId?: number | null;
   summary: string;
   before?: unknown;

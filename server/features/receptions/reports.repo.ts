@@ -100,12 +100,13 @@ async function updateAggregates(sequelize: Sequelize, batchId: number, transacti
   );
   await sequelize.query(
     `INSERT INTO reception_receiver_days
-       (stationId, day, bandId, rxCallsign, rxLocator, distanceKm, bearingDeg, reports, bestSnrDb, bestSnrPerWattDb, lastSlotStart)
+       (stationId, day, bandId, rxCallsign, rxLocator, distanceKm, bearingDeg, reports, bestSnrDb, bestSnrPerWattDb, bestKmPerWatt, lastSlotStart)
        SELECT stationId, DATE(slotStart), bandId, rxCallsign, MAX(rxLocator), MAX(distanceKm), MAX(bearingDeg), COUNT(*), MAX(snrDb),
-              MAX(snrDb - (txPowerDbm - 30)), MAX(slotStart)
+              MAX(snrDb - (txPowerDbm - 30)), MAX(distanceKm / POW(10, (txPowerDbm - 30) / 10)), MAX(slotStart)
        FROM reception_reports WHERE batchId = ? AND stationId IS NOT NULL GROUP BY stationId, DATE(slotStart), bandId, rxCallsign
      ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb)),
        bestSnrPerWattDb = GREATEST(COALESCE(bestSnrPerWattDb, VALUES(bestSnrPerWattDb)), COALESCE(VALUES(bestSnrPerWattDb), bestSnrPerWattDb)),
+       bestKmPerWatt = GREATEST(COALESCE(bestKmPerWatt, VALUES(bestKmPerWatt)), COALESCE(VALUES(bestKmPerWatt), bestKmPerWatt)),
        lastSlotStart = GREATEST(lastSlotStart, VALUES(lastSlotStart)), rxLocator = VALUES(rxLocator),
        distanceKm = VALUES(distanceKm), bearingDeg = VALUES(bearingDeg)`,
     { replacements: [batchId], transaction },

@@ -9,6 +9,7 @@ import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import { adminSharesClubWith } from '../clubs/access';
 import { unitById } from '../units/units.service';
+import { forgetStation as forgetReceptionAggregates } from '../receptions/receptions.service';
 import * as repo from './stations.repo';
 
 const notFound = (id: number) => new AppError('not-found', `Station ${id} does not exist`);
@@ -107,6 +108,7 @@ export async function remove(db: TransactionRunner, user: SessionUser, id: numbe
   const before = await getOwnedBy(user, id);
   await db.transaction(async (transaction) => {
     await repo.remove(id, transaction);
+    await forgetReceptionAggregates(id, transaction);
     await audit.record(
       {
         actor: user,
