@@ -47,7 +47,10 @@ const sharedPurity = {
         selector: "CallExpression[callee.object.name='Date'][callee.property.name='now']",
         message: 'shared/ reads no clock: take the time as a parameter.',
       },
-      { selector: "NewExpression[callee.name='Date'][arguments.length=0]", message: 'shared/ reads no clock: take the time as a parameter.' },
+      {
+        selector: "NewExpression[callee.name='Date'][arguments.length=0]",
+        message: 'shared/ reads no clock: take the time as a parameter.',
+      },
       {
         selector: "CallExpression[callee.object.name='performance'][callee.property.name='now']",
         message: 'shared/ reads no clock: take the time as a parameter.',

@@ -12,7 +12,7 @@ module.exports = {
     {
       displayName: 'node',
       testEnvironment: 'node',
-      roots: ['<rootDir>/tests/shared', '<rootDir>/tests/server'],
+      roots: ['<rootDir>/tests/shared', '<rootDir>/tests/server', '<rootDir>/tests/lint'],
       testMatch: ['**/*.test.ts'],
       moduleNameMapper,
       transform: {

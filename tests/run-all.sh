@@ -23,6 +23,9 @@ stop_db() { [ "$db_was_running" = 1 ] || bash server/scripts/db.sh stop >/dev/nu
 trap stop_db EXIT
 
 failed=0
+check_failed=0
+echo "[test] check: typecheck, lint, format (npm run check)"
+bash tests/check.sh || { failed=1; check_failed=1; }
 echo "[test] unit and API tests (shared/, server/ on MariaDB)"
 npx jest --ci --selectProjects node --runInBand --json --outputFile=.cache/jest-node.json || failed=1
 echo "[test] component tests (jest-expo)"
@@ -35,7 +38,8 @@ node --import tsx --test --test-concurrency=1 --test-reporter=spec --test-report
 
 node -e '
 const fs = require("fs");
-let passed = 0, failedCount = 0;
+// The check (typecheck, lint, format) counts as one failure when it finds anything.
+let passed = 0, failedCount = Number(process.argv[2]);
 for (const f of [".cache/jest-node.json", ".cache/jest-client.json"]) {
   try { const r = JSON.parse(fs.readFileSync(f, "utf8")); passed += r.numPassedTests; failedCount += r.numFailedTests + r.numRuntimeErrorTestSuites; } catch { failedCount += 1; }
 }
@@ -46,5 +50,5 @@ try {
 } catch { failedCount += 1; }
 console.log(`\nAll suites (${Math.round((Date.now() / 1000) - Number(process.argv[1]))} s):`);
 console.log(`tests: ${passed} passed, ${failedCount} failed`);
-' "$start_s"
+' "$start_s" "$check_failed"
 exit $failed

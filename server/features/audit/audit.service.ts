@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { AuditEntry } from '@/shared/api/answers';
 import type { SessionUser } from '@/shared/api/contracts';
+import type { TransactionRunner } from '../../db/transaction';
 import * as repo from './audit.repo';
 
 export type AuditRecord = {
@@ -87,4 +88,18 @@ export function toCsv(entries: AuditEntry[]) {
     [e.atUtc, e.actorName, e.action, e.entityType, e.entityId, e.summary, e.before, e.after].map(csvCell).join(','),
   );
   return [header.join(','), ...lines].join('\r\n') + '\r\n';
+}
+
+/** An owner's change to their own things and its log entry, in one transaction; `entry` may read what the write returned. */
+export function ownChange<T>(
+  db: TransactionRunner,
+  user: AuditRecord['actor'],
+  write: (transaction: Transaction) => Promise<T>,
+  entry: (result: T) => Omit<AuditRecord, 'actor' | 'ownerId'>,
+): Promise<T> {
+  return db.transaction(async (transaction) => {
+    const result = await write(transaction);
+    await record({ actor: user, ownerId: user.id, ...entry(result) }, transaction);
+    return result;
+  });
 }

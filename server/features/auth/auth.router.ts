@@ -89,11 +89,9 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
     const { email } = resetRequestInput.parse(req.body);
     const reset = await auth.createPasswordReset(email);
     // The same answer whether or not the account exists; the mail goes out after the write.
-    res
-      .status(202)
-      .json({
-        message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.',
-      } satisfies MessageAnswer);
+    res.status(202).json({
+      message: 'If an account uses this e-mail, a reset link is on its way. It works once, for 30 minutes.',
+    } satisfies MessageAnswer);
     if (reset) {
       const link = `${config.WEB_ORIGIN}/reset-password?token=${encodeURIComponent(reset.token)}`;
       mailer

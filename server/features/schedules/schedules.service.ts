@@ -79,43 +79,29 @@ export async function update(db: TransactionRunner, user: SessionUser, stationId
         ? 'Paused the schedule'
         : 'Resumed the schedule'
       : `Changed ${Object.keys(patch).join(', ')} of the schedule`;
-  return db.transaction(async (transaction) => {
-    const updated = await repo.update(stationId, values, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'schedule.update',
-        entityType: 'schedule',
-        entityId: stationId,
-        summary,
-        before,
-        after: values,
-      },
-      transaction,
-    );
-    return updated;
-  });
+  return audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.update(stationId, values, transaction),
+    () => ({ action: 'schedule.update', entityType: 'schedule', entityId: stationId, summary, before, after: values }),
+  );
 }
 
 export async function remove(db: TransactionRunner, user: SessionUser, stationId: number) {
   await getOwnStation(user, stationId);
   const before = await getFor(user, stationId);
-  await db.transaction(async (transaction) => {
-    await repo.remove(stationId, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'schedule.delete',
-        entityType: 'schedule',
-        entityId: stationId,
-        summary: `Deleted the schedule ${before.name}`,
-        before,
-      },
-      transaction,
-    );
-  });
+  await audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.remove(stationId, transaction),
+    () => ({
+      action: 'schedule.delete',
+      entityType: 'schedule',
+      entityId: stationId,
+      summary: `Deleted the schedule ${before.name}`,
+      before,
+    }),
+  );
 }
 
 export async function planRange(user: SessionUser, stationId: number, fromMs: number, toMs: number): Promise<StationPlan> {

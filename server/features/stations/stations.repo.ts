@@ -73,16 +73,11 @@ export async function findById(id: number, transaction?: Transaction) {
   return row ? toStation(row as Row) : null;
 }
 
-export type StationValues = {
-  name: string;
-  callsign: string;
-  locator: string;
-  notes: string;
-  unitId: number | null;
-  region: LicenceRegion;
-  audioOffsetHz: number;
-  transmitEnabled: boolean;
-};
+/** What an owner sets on a station (the rest is the server's: ids, owner, calibration, suspension, stamps). */
+export type StationValues = Pick<
+  Station,
+  'name' | 'callsign' | 'locator' | 'notes' | 'unitId' | 'region' | 'audioOffsetHz' | 'transmitEnabled'
+>;
 
 export async function insert(ownerId: number, values: StationValues, transaction?: Transaction) {
   const row = await StationModel.create(

@@ -64,64 +64,55 @@ const settingsOf = (s: Station) => ({
 
 export async function create(db: TransactionRunner, user: SessionUser, input: Required<StationInput>) {
   await ownUnit(user, input.unitId);
-  return db.transaction(async (transaction) => {
-    const station = await repo.insert(user.id, input as repo.StationValues, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'station.create',
-        entityType: 'station',
-        entityId: station.id,
-        summary: `Created station ${station.name} (${station.callsign})`,
-        after: settingsOf(station),
-      },
-      transaction,
-    );
-    return station;
-  });
+  return audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.insert(user.id, input as repo.StationValues, transaction),
+    (station) => ({
+      action: 'station.create',
+      entityType: 'station',
+      entityId: station.id,
+      summary: `Created station ${station.name} (${station.callsign})`,
+      after: settingsOf(station),
+    }),
+  );
 }
 
 export async function update(db: TransactionRunner, user: SessionUser, id: number, patch: StationPatch) {
   const before = await getOwnedBy(user, id);
   if (patch.unitId !== undefined) await ownUnit(user, patch.unitId);
-  return db.transaction(async (transaction) => {
-    const after = await repo.update(id, patch, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'station.update',
-        entityType: 'station',
-        entityId: id,
-        summary: `Changed ${Object.keys(patch).join(', ')} of ${after.name}`,
-        before: settingsOf(before),
-        after: settingsOf(after),
-      },
-      transaction,
-    );
-    return after;
-  });
+  return audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.update(id, patch, transaction),
+    (after) => ({
+      action: 'station.update',
+      entityType: 'station',
+      entityId: id,
+      summary: `Changed ${Object.keys(patch).join(', ')} of ${after.name}`,
+      before: settingsOf(before),
+      after: settingsOf(after),
+    }),
+  );
 }
 
 export async function remove(db: TransactionRunner, user: SessionUser, id: number) {
   const before = await getOwnedBy(user, id);
-  await db.transaction(async (transaction) => {
-    await repo.remove(id, transaction);
-    await forgetReceptionAggregates(id, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'station.delete',
-        entityType: 'station',
-        entityId: id,
-        summary: `Deleted station ${before.name}`,
-        before: settingsOf(before),
-      },
-      transaction,
-    );
-  });
+  await audit.ownChange(
+    db,
+    user,
+    async (transaction) => {
+      await repo.remove(id, transaction);
+      await forgetReceptionAggregates(id, transaction);
+    },
+    () => ({
+      action: 'station.delete',
+      entityType: 'station',
+      entityId: id,
+      summary: `Deleted station ${before.name}`,
+      before: settingsOf(before),
+    }),
+  );
 }
 
 function bandOrRefuse(bandId: BandId, station: Station) {

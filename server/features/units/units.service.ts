@@ -31,36 +31,30 @@ const specOf = ({ id: _i, ownerId: _o, ownerName: _n, photos: _p, createdAt: _c,
   values;
 
 export function create(db: TransactionRunner, user: SessionUser, values: UnitValues, summary = `Registered unit ${values.name}`) {
-  return db.transaction(async (transaction) => {
-    const unit = await repo.insert(user.id, values, transaction);
-    await audit.record(
-      { actor: user, ownerId: user.id, action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values },
-      transaction,
-    );
-    return unit;
-  });
+  return audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.insert(user.id, values, transaction),
+    (unit) => ({ action: 'unit.create', entityType: 'unit', entityId: unit.id, summary, after: values }),
+  );
 }
 
 export async function update(db: TransactionRunner, user: SessionUser, id: number, patch: Partial<UnitValues>) {
   const before = specOf(await getOwnedBy(user, id));
   const values = unitInput.parse({ ...before, ...patch });
-  return db.transaction(async (transaction) => {
-    const unit = await repo.update(id, values, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'unit.update',
-        entityType: 'unit',
-        entityId: id,
-        summary: `Changed ${Object.keys(patch).join(', ')} of unit ${unit.name}`,
-        before,
-        after: values,
-      },
-      transaction,
-    );
-    return unit;
-  });
+  return audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.update(id, values, transaction),
+    (unit) => ({
+      action: 'unit.update',
+      entityType: 'unit',
+      entityId: id,
+      summary: `Changed ${Object.keys(patch).join(', ')} of unit ${unit.name}`,
+      before,
+      after: values,
+    }),
+  );
 }
 
 /** A new unit with the same hardware (photos stay with the original). */
@@ -75,21 +69,12 @@ export async function copy(db: TransactionRunner, user: SessionUser, id: number)
 export async function remove(db: TransactionRunner, user: SessionUser, id: number) {
   const unit = await getOwnedBy(user, id);
   const photos = await repo.photosOf(id);
-  await db.transaction(async (transaction) => {
-    await repo.remove(id, transaction);
-    await audit.record(
-      {
-        actor: user,
-        ownerId: user.id,
-        action: 'unit.delete',
-        entityType: 'unit',
-        entityId: id,
-        summary: `Deleted unit ${unit.name}`,
-        before: specOf(unit),
-      },
-      transaction,
-    );
-  });
+  await audit.ownChange(
+    db,
+    user,
+    (transaction) => repo.remove(id, transaction),
+    () => ({ action: 'unit.delete', entityType: 'unit', entityId: id, summary: `Deleted unit ${unit.name}`, before: specOf(unit) }),
+  );
   return photos;
 }
 
