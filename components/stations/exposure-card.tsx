@@ -47,7 +47,8 @@ export function ExposureCard({ station, unit }: { station: Station; unit: Unit |
         duty,
       }),
     }));
-    const first = rows.flatMap((r) => (r.estimate.ok ? [r.estimate] : []))[0];
+    // the lowest band has the largest near field: its cautions cover every band
+    const first = rows.flatMap((r) => (r.estimate.ok ? [r.estimate] : [])).sort((a, b) => b.nearFieldM - a.nearFieldM)[0];
     body = (
       <>
         <TextField
