@@ -21,7 +21,8 @@ export function ExposureCard({ station, unit }: { station: Station; unit: Unit |
   const schedule = useScheduleQuery(station.id);
   const [lossText, setLossText] = useState('0');
   const lossDb = parseNumberText(lossText);
-  const duty = schedule.data ? cadencePercent(schedule.data.cadence) / 100 : 1;
+  const cadence = schedule.data?.cadence;
+  const duty = cadence ? cadencePercent(cadence) / 100 : 1;
   const bands = useMemo(() => {
     const ids = [
       ...new Set([...station.bands.filter((b) => b.enabled).map((b) => b.bandId), ...(schedule.data?.steps ?? []).map((s) => s.bandId)]),
