@@ -22,7 +22,8 @@ export function ExposureCard({ station, unit }: { station: Station; unit: Unit |
   const schedule = useScheduleQuery(station.id);
   const [lossText, setLossText] = useState('0');
   const lossDb = parseNumberText(lossText);
-  const duty = schedule.data ? cadencePercent(schedule.data.cadence) / 100 : 1;
+  const cadence = schedule.data?.cadence;
+  const duty = cadence ? cadencePercent(cadence) / 100 : 1;
   const bands = useMemo(() => {
     const ids = [
       ...new Set([...station.bands.filter((b) => b.enabled).map((b) => b.bandId), ...(schedule.data?.steps ?? []).map((s) => s.bandId)]),
@@ -48,7 +49,8 @@ export function ExposureCard({ station, unit }: { station: Station; unit: Unit |
         duty,
       }),
     }));
-    const first = rows.flatMap((r) => (r.estimate.ok ? [r.estimate] : []))[0];
+    // the lowest band has the largest near field: its cautions cover every band
+    const first = rows.flatMap((r) => (r.estimate.ok ? [r.estimate] : [])).sort((a, b) => b.nearFieldM - a.nearFieldM)[0];
     body = (
       <>
         <TextField

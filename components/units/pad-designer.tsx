@@ -24,7 +24,8 @@ export type PadDesignerProps = {
   onUse?: (attenuationDb: number) => void;
 };
 
-const ohm = (value: number) => `${value < 10 ? value.toFixed(2) : value < 100 ? value.toFixed(1) : value.toFixed(0)} Ω`;
+const ohm = (value: number) =>
+  `${Number.isInteger(value) ? value : value < 10 ? value.toFixed(2) : value < 100 ? value.toFixed(1) : value.toFixed(0)} Ω`;
 const watts = (w: number) => (w >= 1 ? `${w.toFixed(2)} W` : `${(w * 1000).toFixed(w >= 0.01 ? 0 : 1)} mW`);
 
 /** Works out the attenuator a chain needs and designs it as a matched resistive pad. */
@@ -202,11 +203,12 @@ function PadCard({
       <Text variant="label">{title}</Text>
       {exact.map(([role, value], i) => (
         <View key={role} style={styles.line}>
-          <Text style={styles.role}>{role}</Text>
-          <Text variant="mono" tone="muted">
-            {ohm(value)}
+          <Text variant="caption" tone="muted">
+            {role}
           </Text>
-          <Text variant="mono">→ E24 {ohm(chosen[i][1])}</Text>
+          <Text variant="mono">
+            {ohm(value)} → E24 {ohm(chosen[i][1])}
+          </Text>
         </View>
       ))}
       <Text variant="caption">
@@ -231,6 +233,5 @@ const styles = StyleSheet.create({
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   pads: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   card: { flexGrow: 1, flexBasis: 260, borderWidth: 1, borderRadius: radius.md, padding: space.md, gap: space.xs },
-  line: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.sm },
-  role: { minWidth: 130 },
+  line: { gap: 2 },
 });
