@@ -6,3 +6,4 @@ export * from './schedule';
 export * from './club';
 export * from './device';
 export * from './reception';
+export * from './reception-import';
