@@ -5,6 +5,7 @@ import * as m0002 from './migrations/0002-units-and-station-bands';
 import * as m0003 from './migrations/0003-schedules-and-clubs';
 import * as m0004 from './migrations/0004-devices';
 import * as m0008 from './migrations/0008-reception-reports';
+import * as m0010 from './migrations/0010-reception-imports';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
@@ -13,6 +14,7 @@ const migrations = [
   { name: '0003-schedules-and-clubs', ...m0003 },
   { name: '0004-devices', ...m0004 },
   { name: '0008-reception-reports', ...m0008 },
+  { name: '0010-reception-imports', ...m0010 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {
