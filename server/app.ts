@@ -14,6 +14,7 @@ import { deviceRouter } from './features/devices/device.router';
 import { setOfflineAfter } from './features/devices/health.service';
 import { fleetHealthRouter, stationDevicesRouter } from './features/devices/stations-devices.router';
 import { healthRouter } from './features/health/health.router';
+import { importsRouter } from './features/receptions/imports.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -96,6 +97,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use('/units', unitsRouter({ storage, logger }));
   api.use('/clubs', clubsRouter({ sequelize, mailer, logger, config }));
   api.use(myClubThingsRouter({ sequelize }));
+  api.use(importsRouter({ sequelize, logger, maxBytes: config.IMPORT_MAX_MB * 1024 * 1024 }));
   api.use(apiNotFound);
   app.use('/api', api);
 

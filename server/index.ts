@@ -2,6 +2,7 @@ import { Cron } from 'croner';
 import { createServer } from 'node:http';
 import { createApp, createHttpHandler } from './app';
 import { evaluateAlerts } from './features/devices/alerts.service';
+import { watchImports } from './features/receptions/imports.service';
 import { sendLater } from './mail/send-later';
 import { loadConfig } from './config';
 import { migrateToLatest } from './db/migrator';
@@ -25,6 +26,8 @@ async function main() {
   const seeded = process.env.FAINTLINE_SEED_DEMO === '0' ? false : await seedDemoIfEmpty(sequelize, config.BCRYPT_COST);
   const mailer = createMailer(config);
   const app = createApp({ config, sequelize, mailer, logger, fakeSmtp });
+  // Imports left running by a stopped server process end as failed with what they stored.
+  watchImports(sequelize, logger);
 
   const server = createServer(createHttpHandler(app, logger));
   server.on('error', (error) => {
