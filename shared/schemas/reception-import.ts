@@ -1,7 +1,8 @@
 /** File imports of reception reports: the mapping a user confirms, saved mappings, and one mapped row's check. */
 import type { ImportMapping } from '../api/receptions';
 import { columnOfField, type MappedReport, type RowProblem } from '../domain/reception/import-mapping';
-import { locatorField } from './fields';
+import { isBandId } from '../domain/bands';
+import { LOCATOR_PATTERN, locatorField } from './fields';
 import { receptionReportInput } from './reception';
 import { z } from './zod-setup';
 
@@ -72,11 +73,53 @@ const receiverCallsign = z
 export const importedReportInput = receptionReportInput.extend({ rxCallsign: receiverCallsign, rxLocator: locatorField });
 export type ImportedReport = z.output<typeof importedReportInput>;
 
+const EARLIEST_MS = Date.UTC(2000, 0, 1);
+const LATEST_MS = Date.UTC(2100, 0, 1);
+const DECODED_CALL = /^(<\.\.\.>|[A-Z0-9/]{1,12})$/;
+const RECEIVER_CALL = /^[A-Z0-9/]{1,12}$/;
+const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/;
+const whole = (n: number, low: number, high: number) => Number.isInteger(n) && n >= low && n <= high;
+
+/**
+ * The common case of `importedReportInput` without zod's per-field machinery (a large import checks millions of
+ * rows): a report that passes every rule comes back as the schema would give it; anything else is null and goes
+ * through the schema for its message. A property test holds the two to the same answers.
+ */
+export function quickImportedReport(r: MappedReport): ImportedReport | null {
+  if (!ISO_UTC.test(r.slotUtc)) return null;
+  const ms = Date.parse(r.slotUtc);
+  if (!(ms >= EARLIEST_MS && ms < LATEST_MS)) return null;
+  const txCallsign = r.txCallsign.trim().toUpperCase();
+  const rxCallsign = r.rxCallsign.trim().toUpperCase();
+  const rxLocator = r.rxLocator.trim().toUpperCase();
+  const txLocator = r.txLocator === null ? null : r.txLocator.trim().toUpperCase();
+  if (!isBandId(r.bandId) || !DECODED_CALL.test(txCallsign) || !RECEIVER_CALL.test(rxCallsign) || !LOCATOR_PATTERN.test(rxLocator))
+    return null;
+  if (txLocator !== null && !LOCATOR_PATTERN.test(txLocator)) return null;
+  if (r.txPowerDbm !== null && !whole(r.txPowerDbm, 0, 60)) return null;
+  if (!(r.snrDb >= -60 && r.snrDb <= 60) || !(r.frequencyHz > 0 && r.frequencyHz <= 500_000_000) || !whole(r.driftHz, -100, 100))
+    return null;
+  return {
+    slotUtc: r.slotUtc,
+    bandId: r.bandId,
+    txCallsign,
+    txLocator,
+    txPowerDbm: r.txPowerDbm,
+    snrDb: r.snrDb,
+    frequencyHz: r.frequencyHz,
+    driftHz: r.driftHz,
+    rxCallsign,
+    rxLocator,
+  };
+}
+
 /** Checks a mapped row with the shared schema; a problem names the file's column. */
 export function checkMappedReport(
   report: MappedReport,
   mapping: ImportMapping,
 ): { ok: true; report: ImportedReport } | { ok: false; problem: RowProblem } {
+  const quick = quickImportedReport(report);
+  if (quick) return { ok: true, report: quick };
   const parsed = importedReportInput.safeParse(report);
   if (parsed.success) return { ok: true, report: parsed.data };
   const issue = parsed.error.issues[0];

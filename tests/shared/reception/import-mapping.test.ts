@@ -12,7 +12,7 @@ import {
   type ReportCsvRow,
 } from '@/shared/domain/reception';
 import type { ImportMapping } from '@/shared/api/receptions';
-import { checkMappedReport } from '@/shared/schemas';
+import { checkMappedReport, importedReportInput, quickImportedReport } from '@/shared/schemas';
 
 const roleOf = (mapping: ImportMapping, header: string) => mapping.columns.find((c) => c.header === header)?.role;
 
@@ -322,6 +322,39 @@ describe('export then import', () => {
         });
       }),
       { numRuns: 200 },
+    );
+  });
+});
+
+describe('the quick check of a mapped row', () => {
+  const cell = (...values: string[]) => fc.constantFrom(...values);
+  const mapped = fc.record({
+    slotUtc: cell('2026-12-02T10:04:00.000Z', '1999-12-31T23:58:00.000Z', '2100-01-01T00:00:00.000Z', '2026-12-02T10:04:00Z', 'soon'),
+    bandId: cell('20m', '40m', '11m', ''),
+    txCallsign: cell('Q1ABC', 'q1abc', ' Q1ABC ', '<...>', 'Q1#A', '', 'Q1ABCDEFGHIJKL', 'QQQ'),
+    txLocator: fc.constantFrom(null, 'JO22', 'jo22ab', 'ZZ99', 'JO2', ''),
+    txPowerDbm: fc.constantFrom(null, 0, 23, 60, 61, -1, 23.5),
+    rxCallsign: cell('Q2XYZ', 'q2xyz', '<...>', '', 'Q/2'),
+    rxLocator: cell('FN31pr', 'FN31', 'FN31PR', 'SS00', 'FN31p', ''),
+    snrDb: fc.constantFrom(-60, -21, 0, 60, 61, -61, 3.5, Number.NaN),
+    frequencyHz: fc.constantFrom(14_097_102, 0.5, 0, -1, 500_000_000, 500_000_001, Number.NaN),
+    driftHz: fc.constantFrom(0, -100, 100, 101, 1.5),
+  });
+
+  it('accepts exactly what the shared schema accepts and gives the same values', () => {
+    fc.assert(
+      fc.property(mapped, (report) => {
+        const quick = quickImportedReport(report);
+        const schema = importedReportInput.safeParse(report);
+        if (quick) {
+          expect(schema.success).toBe(true);
+          expect(quick).toEqual(schema.data);
+        } else if (schema.success) {
+          // Only spellings the quick check leaves to the schema (a time without milliseconds) may differ.
+          expect(report.slotUtc).toBe('2026-12-02T10:04:00Z');
+        }
+      }),
+      { numRuns: 3000 },
     );
   });
 });
