@@ -30,6 +30,8 @@ async function main() {
   watchImports(sequelize, logger);
 
   const server = createServer(createHttpHandler(app, logger));
+  // A 200 MB report file is read as fast as it can be stored: allow its upload more than Node's 5 minutes.
+  server.requestTimeout = 60 * 60_000;
   server.on('error', (error) => {
     logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
     process.exit(1);

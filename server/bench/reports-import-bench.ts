@@ -214,26 +214,30 @@ async function main() {
     const [serverCpu0, dbCpu0] = [cpuSeconds(pid), cpuSeconds(dbPid())];
     const loadBefore = loadAverage();
     const started = performance.now();
-    const uploading = upload(cookie);
+    // The job is listed from its first 64 KB on; the 202 comes once the whole upload has been read.
+    let accepted: { status: number; text: string } | null = null;
+    const uploading = upload(cookie).then((r) => (accepted = r));
     let id = 0;
     let lastPrint = 0;
     let status: Record<string, number | string | null> = {};
-    // The 202 may come before the upload ends; either way poll until the job has ended.
-    const accepted = await uploading;
-    if (accepted.status !== 202) throw new Error(`upload: ${accepted.status} ${accepted.text}`);
-    id = (JSON.parse(accepted.text) as { id: number }).id;
     for (;;) {
-      status = JSON.parse((await call('GET', `/api/reception-imports/${id}`, { cookie })).text) as typeof status;
-      if (performance.now() - lastPrint > 5000) {
+      const done = accepted as { status: number; text: string } | null;
+      if (done && done.status !== 202) throw new Error(`upload: ${done.status} ${done.text}`);
+      if (!id) {
+        const list = JSON.parse((await call('GET', '/api/reception-imports', { cookie })).text) as { id: number }[];
+        id = list[0]?.id ?? 0;
+      } else status = JSON.parse((await call('GET', `/api/reception-imports/${id}`, { cookie })).text) as typeof status;
+      if (id && performance.now() - lastPrint > 5000) {
         lastPrint = performance.now();
         console.log(
-          `  ${((performance.now() - started) / 1000).toFixed(0)} s: ${Number(status.rowsRead).toLocaleString('en')} rows, ` +
-            `${(Number(status.bytesRead) / 1024 / 1024).toFixed(0)} MB read, RSS ${statusOf(pid).rss.toFixed(0)} MB`,
+          `  ${((performance.now() - started) / 1000).toFixed(0)} s: ${Number(status.rowsRead ?? 0).toLocaleString('en')} rows, ` +
+            `${(Number(status.bytesRead ?? 0) / 1024 / 1024).toFixed(0)} MB read, RSS ${statusOf(pid).rss.toFixed(0)} MB${done ? ' (upload answered 202)' : ''}`,
         );
       }
-      if (status.status !== 'running') break;
+      if (done && id && status.status && status.status !== 'running') break;
       await new Promise((r) => setTimeout(r, 250));
     }
+    await uploading;
     const seconds = (performance.now() - started) / 1000;
     const rowsPerS = Number(status.rowsRead) / seconds;
     const hwm = statusOf(pid).hwm;

@@ -133,8 +133,11 @@ export function importsRouter({ sequelize, logger, maxBytes }: Deps) {
       }
       const declared = Number(fields.fileSize ?? req.headers['content-length'] ?? 0);
       const bytesTotal = Number.isFinite(declared) && declared > 0 ? Math.min(declared, maxBytes) : 0;
-      const { id } = await imports.startImport({ sequelize, logger }, user.id, { fileName, bytesTotal, maxBytes, mapping: given, file });
-      res.status(202).json({ id });
+      const job = await imports.startImport({ sequelize, logger }, user.id, { fileName, bytesTotal, maxBytes, mapping: given, file });
+      // Answered once the whole upload has been read: an HTTP/1.1 answer sent earlier stops clients from sending the
+      // rest. The job is listed (running, with its progress) from its first 64 KB on; storing goes on after the answer.
+      await job.received;
+      res.status(202).json({ id: job.id });
     });
   });
 

@@ -170,9 +170,14 @@ const drain = (file: Readable) => {
 
 /**
  * Checks the start of the upload, creates the job and returns its id; the rest of the file is imported in the
- * background (`finished` settles when the job has ended, for tests and the benchmark).
+ * background. `received` settles when the whole upload has been read (or the job has ended), `finished` when the
+ * job has ended.
  */
-export async function startImport(deps: Deps, ownerId: number, upload: ImportUpload): Promise<{ id: number; finished: Promise<void> }> {
+export async function startImport(
+  deps: Deps,
+  ownerId: number,
+  upload: ImportUpload,
+): Promise<{ id: number; received: Promise<void>; finished: Promise<void> }> {
   const now = deps.now ?? (() => new Date());
   const { head, complete } = await readHead(upload.file);
   let inspected: Inspected;
@@ -187,10 +192,17 @@ export async function startImport(deps: Deps, ownerId: number, upload: ImportUpl
     { ownerId, fileName: upload.fileName.slice(0, 255), bytesTotal: upload.bytesTotal, mapping: inspected.mapping, processId: PROCESS_ID },
     now(),
   );
+  const received = complete
+    ? Promise.resolve()
+    : new Promise<void>((resolve) => {
+        upload.file.once('end', resolve);
+        upload.file.once('close', resolve);
+        upload.file.once('error', () => resolve());
+      });
   const finished = runImport(deps, ownerId, id, inspected.mapping, head, upload).catch((error: unknown) =>
     deps.logger.error({ err: error, importId: id }, 'import could not record its end'),
   );
-  return { id, finished };
+  return { id, received: Promise.race([received, finished]), finished };
 }
 
 class JobEnded extends Error {}
@@ -222,13 +234,22 @@ async function runImport(deps: Deps, ownerId: number, id: number, mapping: Impor
 
   let good: ImportedReport[] = [];
   let rejections: repo.Rejection[] = [];
+  const store = async (reports: ImportedReport[], rejected: repo.Rejection[], bytes: number) => {
+    const stored = await ingestReports(deps.sequelize, reports, { importerId: ownerId, importId: id }, now());
+    const rowsRead = reports.length + rejected.length;
+    const going = await repo.recordChunk(deps.sequelize, id, { ...stored, rejections: rejected, rowsRead, bytesRead: bytes }, now());
+    if (!going) throw new JobEnded();
+  };
+  // One chunk is stored while the next is read (the database and the parser work side by side); chunks are
+  // still stored and counted one after the other, in file order.
+  let storing: Promise<void> | null = null;
   const flush = async () => {
-    const stored = await ingestReports(deps.sequelize, good, { importerId: ownerId, importId: id }, now());
-    const rowsRead = good.length + rejections.length;
-    const going = await repo.recordChunk(deps.sequelize, id, { ...stored, rejections, rowsRead, bytesRead }, now());
+    const [reports, rejected] = [good, rejections];
     good = [];
     rejections = [];
-    if (!going) throw new JobEnded();
+    if (storing) await storing;
+    storing = store(reports, rejected, bytesRead);
+    storing.catch(() => undefined);
   };
 
   try {
@@ -245,9 +266,11 @@ async function runImport(deps: Deps, ownerId: number, id: number, mapping: Impor
     if (truncated)
       throw new AppError('payload-too-large', `The file is larger than the import limit of ${Math.round(maxBytes / 1024 / 1024)} MB`);
     if (good.length + rejections.length > 0) await flush();
+    if (storing) await storing;
     await repo.finishImport(deps.sequelize, id, { status: 'done', error: null, bytesRead, bytesTotal: bytesRead }, now());
   } catch (error) {
     drain(file);
+    await (storing as Promise<void> | null)?.catch(() => undefined);
     if (error instanceof JobEnded) return;
     const reason =
       error instanceof AppError
