@@ -20,6 +20,7 @@ import { pairingDeviceRouter, pairingRouter } from './features/devices/pairing.r
 import { deviceReceptionsRouter } from './features/receptions/device-receptions.router';
 import { listeningPostsRouter } from './features/receptions/listening-posts.router';
 import { receptionsRouter } from './features/receptions/receptions.router';
+import { importsRouter } from './features/receptions/imports.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
 import { unitsRouter } from './features/units/units.router';
@@ -121,6 +122,7 @@ export function createApp({
   api.use('/notifications', notificationsRouter());
   api.use('/audit', auditRouter());
   api.use('/pairing', pairingRouter({ sequelize, config, now }));
+  api.use(importsRouter({ sequelize, logger, maxBytes: config.IMPORT_MAX_MB * 1024 * 1024 }));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -21,6 +21,7 @@ const configSchema = z.object({
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
   SIGN_IN_ATTEMPTS: z.coerce.number().int().min(1).default(10),
   JSON_LIMIT: z.string().default('100kb'),
+  IMPORT_MAX_MB: z.coerce.number().min(1).default(200),
   STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
   UPLOAD_DIR: z.string().default('.data/uploads'),
   S3_ENDPOINT: z.string().default(''),

@@ -2,6 +2,7 @@ import { Cron } from 'croner';
 import { createServer } from 'node:http';
 import { createApp, createHttpHandler } from './app';
 import { evaluateAlerts } from './features/devices/alerts.service';
+import { watchImports } from './features/receptions/imports.service';
 import { sendLater } from './mail/send-later';
 import { loadConfig } from './config';
 import { migrateToLatest } from './db/migrator';
@@ -29,8 +30,12 @@ async function main() {
   // Several processes share one database: each follows the others' station changes (device caches drop them).
   const changeFeed =
     config.CHANGE_FEED_POLL_MS > 0 ? followChangesAcrossProcesses({ sequelize, logger, pollMs: config.CHANGE_FEED_POLL_MS }) : null;
+  // Imports left running by a stopped server process end as failed with what they stored.
+  watchImports(sequelize, logger);
 
   const server = createServer(createHttpHandler(app, logger));
+  // A 200 MB report file is read as fast as it can be stored: allow its upload more than Node's 5 minutes.
+  server.requestTimeout = 60 * 60_000;
   server.on('error', (error) => {
     logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
     process.exit(1);

@@ -9,6 +9,7 @@ import * as m0006 from './migrations/0006-filter-selection';
 import * as m0007 from './migrations/0007-device-pairing';
 import * as m0008 from './migrations/0008-reception-reports';
 import * as m0008b from './migrations/0008-b-reach-per-watt';
+import * as m0010 from './migrations/0010-reception-imports';
 import * as m0011 from './migrations/0011-station-change-feed';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
@@ -22,6 +23,7 @@ const migrations = [
   { name: '0007-device-pairing', ...m0007 },
   { name: '0008-b-reach-per-watt', ...m0008b },
   { name: '0008-reception-reports', ...m0008 },
+  { name: '0010-reception-imports', ...m0010 },
   { name: '0011-station-change-feed', ...m0011 },
 ];
 

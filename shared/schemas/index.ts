@@ -7,3 +7,4 @@ export * from './club';
 export * from './device';
 export * from './reception';
 export * from './pairing';
+export * from './reception-import';

@@ -1,2 +1,3 @@
 export * from './reception';
 export * from './csv';
+export * from './import-mapping';
