@@ -1,6 +1,7 @@
 import compression from 'compression';
 import connectSessionSequelize from 'connect-session-sequelize';
-import express from 'express';
+import express, { type Request, type Response } from 'express';
+import type { IncomingMessage, ServerResponse } from 'node:http';
 import session from 'express-session';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
@@ -65,13 +66,23 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   // Devices first: bearer tokens only, no cookies or sessions, and the fewest layers on the hottest path.
   const deviceGateway = createDeviceGateway({ sequelize, config });
   app.locals.deviceGateway = deviceGateway;
-  app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
+  const devices = deviceRouter({ gateway: deviceGateway, config });
+  app.locals.drainWrites = devices.drainWrites;
+  app.use('/api/device/v1', devices);
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
   app.use('/api/health', healthRouter(sequelize));
 
   const SessionStore = connectSessionSequelize(session.Store);
   const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });
+  // Refreshing a session's expiry happens after the answer is sent; if the database is down then, the
+  // failure is logged, not handed to the next middleware (which would cut the already-answered connection).
+  const touch = store.touch.bind(store);
+  store.touch = (sid, data, callback) =>
+    touch(sid, data, (error?: unknown) => {
+      if (error) logger.warn({ err: error }, 'could not refresh a session expiry');
+      callback?.(undefined);
+    });
   const passport = configurePassport();
   const api = express.Router();
   api.use(originCheck([config.WEB_ORIGIN]));
@@ -109,7 +120,17 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
 
 /** The app behind node:http, with device configuration polls answered on the fast path. */
 export function createHttpHandler(app: ReturnType<typeof createApp>, logger: Logger) {
-  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, app, (error) =>
+  const handleError = errorHandler(logger);
+  // Express's final handler, for an error that arrives after the error handler already answered (a
+  // middleware calling next(error) late): logged; a connection whose answer is complete is kept.
+  const routed = (req: IncomingMessage, res: ServerResponse) =>
+    app(req as Request, res as Response, (error?: unknown) => {
+      if (!error) return;
+      if (!res.headersSent) return handleError(error, req as Request, res as Response, () => undefined);
+      logger.warn({ err: error, method: req.method, url: req.url }, 'error after the answer was sent');
+      if (!res.writableEnded) res.destroy();
+    });
+  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, routed, (error) =>
     logger.error({ err: error }, 'device config failed'),
   );
 }

@@ -33,6 +33,7 @@ const configSchema = z.object({
   DEVICE_CACHE_MS: z.coerce.number().int().min(0).default(2000),
   DEVICE_CONFIG_CACHE_MB: z.coerce.number().min(1).default(64),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).default(10_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),
 });
 

@@ -26,7 +26,13 @@ async function main() {
   const mailer = createMailer(config);
   const app = createApp({ config, sequelize, mailer, logger, fakeSmtp });
 
-  const server = createServer(createHttpHandler(app, logger));
+  const handler = createHttpHandler(app, logger);
+  let stopping = false;
+  // While stopping, every answer closes its connection, so keep-alive clients move to the next server.
+  const server = createServer((req, res) => {
+    if (stopping) res.setHeader('Connection', 'close');
+    handler(req, res);
+  });
   server.on('error', (error) => {
     logger.fatal({ err: error }, `cannot listen on ${config.HOST}:${config.PORT}`);
     process.exit(1);
@@ -50,14 +56,19 @@ async function main() {
     },
   );
 
-  let stopping = false;
+  // Graceful: stop taking connections, let requests in flight finish (each answers only after its
+  // write), drain the heartbeat group writer, then close the pool. Nothing acknowledged is lost.
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'stopping');
     alertJob.stop();
-    server.close();
-    server.closeAllConnections();
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    server.closeIdleConnections();
+    const forced = setTimeout(() => server.closeAllConnections(), config.SHUTDOWN_GRACE_MS);
+    await closed;
+    clearTimeout(forced);
+    await (app.locals.drainWrites as () => Promise<void>)();
     mailer.close();
     await fakeSmtp?.close();
     await sequelize.close();

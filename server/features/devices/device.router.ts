@@ -5,6 +5,7 @@ import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { DeviceTransmissionModel, HeartbeatModel } from '../../db/models/device.model';
 import { AppError } from '../../lib/app-error';
+import { isDatabaseUnavailable } from '../../lib/db-errors';
 import { createGroupWriter } from '../../lib/group-writer';
 import { RATE_WINDOW_MS, sendConfig, type DeviceGateway } from './device-gateway';
 import type { DeviceIdentity } from './tokens.service';
@@ -18,8 +19,10 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
 export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
   const router = Router();
   // Heartbeats from many devices at once are stored a group per INSERT; each is acknowledged once written.
-  const storeHeartbeat = createGroupWriter((rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) =>
-    HeartbeatModel.bulkCreate(rows, { validate: false }),
+  // A database outage fails the whole group at once (503 to each device), so nothing unsaved is acknowledged.
+  const storeHeartbeat = createGroupWriter(
+    (rows: Omit<InferCreationAttributes<HeartbeatModel>, 'id'>[]) => HeartbeatModel.bulkCreate(rows, { validate: false }),
+    { isUnavailable: isDatabaseUnavailable },
   );
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
@@ -82,5 +85,6 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
   router.use((req, res) => {
     res.status(404).json({ error: { code: 'not-found', message: `No device route ${req.method} ${req.originalUrl}` } });
   });
-  return router;
+  // For a graceful shutdown: resolves once every heartbeat handed in is stored or refused.
+  return Object.assign(router, { drainWrites: storeHeartbeat.drain });
 }
