@@ -56,6 +56,14 @@ const CSP = {
   },
 };
 
+const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|::ffff:127\.\d+\.\d+\.\d+)$/;
+
+/** Only requests from this machine (after a loopback proxy, the client it names) get past; others see nothing there. */
+function loopbackOnly(req: Request, res: Response, next: () => void) {
+  if (LOOPBACK.test(req.ip ?? '')) return next();
+  res.status(404).json({ error: { code: 'not-found', message: 'Not found' } });
+}
+
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
 export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage = createStorage(config) }: AppDeps) {
   const app = express();
@@ -83,7 +91,7 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
       if (error) logger.warn({ err: error }, 'could not refresh a session expiry');
       callback?.(undefined);
     });
-  const passport = configurePassport();
+  const passport = configurePassport(config.BCRYPT_COST);
   const api = express.Router();
   api.use(originCheck([config.WEB_ORIGIN]));
   api.use(express.json({ limit: config.JSON_LIMIT }));
@@ -99,6 +107,11 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
     }),
   );
   api.use(passport.session());
+  // Answers for a signed-in person are never kept by a browser or proxy cache.
+  api.use((req, res, next) => {
+    if (req.user) res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations/:id', stationDevicesRouter({ sequelize }));
@@ -110,7 +123,8 @@ export function createApp({ config, sequelize, mailer, logger, fakeSmtp, storage
   api.use(apiNotFound);
   app.use('/api', api);
 
-  if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', inboxRouter(fakeSmtp));
+  // The local test inbox: development only, and only for requests from this machine.
+  if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', loopbackOnly, inboxRouter(fakeSmtp));
   // The web app's bundle and fonts travel compressed (they are most of what a first visit downloads).
   app.use(compression());
   app.use(webAppRouter(config.WEB_DIST_DIR));

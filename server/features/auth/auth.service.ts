@@ -8,14 +8,25 @@ import { inTransaction } from '../../db/transaction';
 import { UserModel } from '../../db/models/user.model';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
-import { findByEmail } from './users.repo';
+import { endSessionsOf, findByEmail } from './users.repo';
 
 export const RESET_TOKEN_LIFETIME_MIN = 30;
 
+/** The one spelling of an e-mail used for look-ups and rate-limit keys: trimmed, lower case. */
+export const normaliseEmail = (email: unknown) =>
+  String(email ?? '')
+    .trim()
+    .toLowerCase();
+
 const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
 
-// Compared against when the e-mail is unknown, so both paths cost one bcrypt.
-const NO_USER_HASH = bcrypt.hashSync('no user has this password', 4);
+// Compared against when the e-mail is unknown, so both paths cost one bcrypt of the same work factor
+// (an unknown address takes as long to refuse as a wrong password).
+const noUserHashes = new Map<number, string>();
+const noUserHash = (cost: number) => {
+  if (!noUserHashes.has(cost)) noUserHashes.set(cost, bcrypt.hashSync('no user has this password', cost));
+  return noUserHashes.get(cost)!;
+};
 
 export async function register(input: RegisterInput, bcryptCost: number): Promise<number> {
   const passwordHash = await bcrypt.hash(input.password, bcryptCost);
@@ -38,9 +49,9 @@ export async function register(input: RegisterInput, bcryptCost: number): Promis
 }
 
 /** The user's id when e-mail and password match, otherwise null. */
-export async function verifyCredentials(email: string, password: string): Promise<number | null> {
-  const user = await findByEmail(email.trim().toLowerCase());
-  const matches = await bcrypt.compare(password, user?.passwordHash ?? NO_USER_HASH);
+export async function verifyCredentials(email: string, password: string, bcryptCost: number): Promise<number | null> {
+  const user = await findByEmail(normaliseEmail(email));
+  const matches = await bcrypt.compare(password, user?.passwordHash ?? noUserHash(bcryptCost));
   return user && matches ? user.id : null;
 }
 
@@ -75,6 +86,8 @@ export async function confirmPasswordReset(sequelize: Sequelize, input: ResetCon
     await UserModel.update({ passwordHash }, { where: { id: reset.userId }, transaction });
     // Any other outstanding links for this account stop working too.
     await PasswordResetModel.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: null }, transaction });
+    // Whoever knew the old password is signed out everywhere.
+    await endSessionsOf(reset.userId, undefined, transaction);
   });
 }
 
@@ -97,5 +110,24 @@ export async function updateProfile(user: SessionUser, input: ProfileInput) {
       },
       transaction,
     );
+  });
+}
+
+/** Ends every session of the user but the given one; recorded in the person's own log. */
+export async function endOtherSessions(user: SessionUser, keepSid: string) {
+  return inTransaction(async (transaction) => {
+    const ended = await endSessionsOf(user.id, keepSid, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'sessions.end-others',
+        entityType: 'user',
+        entityId: user.id,
+        summary: `Signed out everywhere else (${ended} other session${ended === 1 ? '' : 's'})`,
+      },
+      transaction,
+    );
+    return ended;
   });
 }
