@@ -1,6 +1,7 @@
 import compression from 'compression';
 import connectSessionSequelize from 'connect-session-sequelize';
-import express from 'express';
+import express, { type Request, type Response } from 'express';
+import type { IncomingMessage, ServerResponse } from 'node:http';
 import session from 'express-session';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
@@ -64,6 +65,14 @@ const CSP = {
   },
 };
 
+const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|::ffff:127\.\d+\.\d+\.\d+)$/;
+
+/** Only requests from this machine (after a loopback proxy, the client it names) get past; others see nothing there. */
+function loopbackOnly(req: Request, res: Response, next: () => void) {
+  if (LOOPBACK.test(req.ip ?? '')) return next();
+  res.status(404).json({ error: { code: 'not-found', message: 'Not found' } });
+}
+
 /** The whole HTTP app without listen(), so tests drive it with supertest. */
 export function createApp({
   config,
@@ -83,14 +92,24 @@ export function createApp({
   app.locals.deviceGateway = deviceGateway;
   app.use('/api/device/v1/receptions', deviceReceptionsRouter({ sequelize, config }));
   app.use('/api/device/v1', pairingDeviceRouter({ sequelize, config, now }));
-  app.use('/api/device/v1', deviceRouter({ gateway: deviceGateway, config }));
+  const devices = deviceRouter({ gateway: deviceGateway, config });
+  app.locals.drainWrites = devices.drainWrites;
+  app.use('/api/device/v1', devices);
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));
 
   app.use('/api/health', livenessRouter(sequelize));
 
   const SessionStore = connectSessionSequelize(session.Store);
   const store = new SessionStore({ db: sequelize, checkExpirationInterval: 15 * 60_000, expiration: 14 * 24 * 3600_000 });
-  const passport = configurePassport();
+  // Refreshing a session's expiry happens after the answer is sent; if the database is down then, the
+  // failure is logged, not handed to the next middleware (which would cut the already-answered connection).
+  const touch = store.touch.bind(store);
+  store.touch = (sid, data, callback) =>
+    touch(sid, data, (error?: unknown) => {
+      if (error) logger.warn({ err: error }, 'could not refresh a session expiry');
+      callback?.(undefined);
+    });
+  const passport = configurePassport(config.BCRYPT_COST);
   const api = express.Router();
   api.use(originCheck([config.WEB_ORIGIN]));
   api.use(express.json({ limit: config.JSON_LIMIT }));
@@ -106,6 +125,11 @@ export function createApp({
     }),
   );
   api.use(passport.session());
+  // Answers for a signed-in person are never kept by a browser or proxy cache.
+  api.use((req, res, next) => {
+    if (req.user) res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
   api.use(receptionsRouter({ sequelize }));
@@ -126,7 +150,8 @@ export function createApp({
   api.use(apiNotFound);
   app.use('/api', api);
 
-  if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', inboxRouter(fakeSmtp));
+  // The local test inbox: development only, and only for requests from this machine.
+  if (fakeSmtp && config.NODE_ENV !== 'production') app.use('/dev/inbox', loopbackOnly, inboxRouter(fakeSmtp));
   // The web app's bundle and fonts travel compressed (they are most of what a first visit downloads).
   app.use(compression());
   app.use(webAppRouter(config.WEB_DIST_DIR));
@@ -136,7 +161,17 @@ export function createApp({
 
 /** The app behind node:http, with device configuration polls answered on the fast path. */
 export function createHttpHandler(app: ReturnType<typeof createApp>, logger: Logger) {
-  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, app, (error) =>
+  const handleError = errorHandler(logger);
+  // Express's final handler, for an error that arrives after the error handler already answered (a
+  // middleware calling next(error) late): logged; a connection whose answer is complete is kept.
+  const routed = (req: IncomingMessage, res: ServerResponse) =>
+    app(req as Request, res as Response, (error?: unknown) => {
+      if (!error) return;
+      if (!res.headersSent) return handleError(error, req as Request, res as Response, () => undefined);
+      logger.warn({ err: error, method: req.method, url: req.url }, 'error after the answer was sent');
+      if (!res.writableEnded) res.destroy();
+    });
+  return withDeviceFastPath(app.locals.deviceGateway as DeviceGateway, routed, (error) =>
     logger.error({ err: error }, 'device config failed'),
   );
 }

@@ -40,6 +40,7 @@ const configSchema = z.object({
   PAIRING_ADDRESS_ATTEMPTS: z.coerce.number().int().min(1).default(30),
   PAIRING_REQUESTS_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
   ALERTS_CRON: z.string().default('*/1 * * * *'),
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).default(10_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'silent']).default('info'),
 });
 

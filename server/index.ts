@@ -33,7 +33,13 @@ async function main() {
   // Imports left running by a stopped server process end as failed with what they stored.
   watchImports(sequelize, logger);
 
-  const server = createServer(createHttpHandler(app, logger));
+  const handler = createHttpHandler(app, logger);
+  let stopping = false;
+  // While stopping, every answer closes its connection, so keep-alive clients move to the next server.
+  const server = createServer((req, res) => {
+    if (stopping) res.setHeader('Connection', 'close');
+    handler(req, res);
+  });
   // A 200 MB report file is read as fast as it can be stored: allow its upload more than Node's 5 minutes.
   server.requestTimeout = 60 * 60_000;
   server.on('error', (error) => {
@@ -59,15 +65,20 @@ async function main() {
     },
   );
 
-  let stopping = false;
+  // Graceful: stop taking connections, let requests in flight finish (each answers only after its
+  // write), drain the heartbeat group writer, then close the pool. Nothing acknowledged is lost.
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'stopping');
     alertJob.stop();
     await changeFeed?.stop();
-    server.close();
-    server.closeAllConnections();
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    server.closeIdleConnections();
+    const forced = setTimeout(() => server.closeAllConnections(), config.SHUTDOWN_GRACE_MS);
+    await closed;
+    clearTimeout(forced);
+    await (app.locals.drainWrites as () => Promise<void>)();
     mailer.close();
     await fakeSmtp?.close();
     await sequelize.close();

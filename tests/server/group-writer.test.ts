@@ -44,4 +44,31 @@ describe('createGroupWriter', () => {
     await Promise.all(Array.from({ length: 10 }, (_, i) => write(i)));
     expect(sizes).toEqual([4, 4, 2]);
   });
+
+  it('when the database is unreachable, every row of the group is refused at once (no row-by-row retry, nothing acknowledged)', async () => {
+    let calls = 0;
+    const down = Object.assign(new Error('connect ECONNREFUSED'), { code: 'ECONNREFUSED' });
+    const write = createGroupWriter(
+      async () => {
+        calls += 1;
+        throw down;
+      },
+      { isUnavailable: (e) => e === down },
+    );
+    const results = await Promise.allSettled([write(1), write(2), write(3)]);
+    expect(results.map((r) => r.status)).toEqual(['rejected', 'rejected', 'rejected']);
+    expect(calls).toBe(1);
+  });
+
+  it('drain() resolves only after every row handed in is written', async () => {
+    const written: number[] = [];
+    const write = createGroupWriter(async (rows: number[]) => {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      written.push(...rows);
+    });
+    void write(1);
+    void write(2);
+    await write.drain();
+    expect(written).toEqual([1, 2]);
+  });
 });

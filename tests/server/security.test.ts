@@ -8,6 +8,20 @@ beforeAll(async () => {
 afterAll(() => server.close());
 beforeEach(() => truncateAll(server.sequelize));
 
+// Before the baseline: its last test rebinds the models to a closed, unreachable database.
+// Routes added for account safety: who may call them. Anonymous callers get 401 and change nothing.
+describe('authorization walk: account routes', () => {
+  it('when anonymous, POST /api/auth/sessions/end-others answers 401; signed in, it ends only that account’s other sessions', async () => {
+    expect((await request(server.app).post('/api/auth/sessions/end-others')).status).toBe(401);
+    const a = await signedInAgent(server.app, { displayName: 'First Person' });
+    const b = await signedInAgent(server.app, { displayName: 'Second Person' });
+    const res = await a.agent.post('/api/auth/sessions/end-others');
+    expect(res.status).toBe(200);
+    expect(res.body.ended).toBe(0);
+    expect((await b.agent.get('/api/auth/me')).status).toBe(200);
+  });
+});
+
 describe('security baseline', () => {
   it('when any page is served, sends a Content-Security-Policy and nosniff', async () => {
     const res = await request(server.app).get('/api/health');

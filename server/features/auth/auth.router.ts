@@ -31,7 +31,9 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
     skipSuccessfulRequests: true,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}:${String(req.body?.email ?? '').toLowerCase()}`,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}:${auth.normaliseEmail(req.body?.email)}`,
+    // A 503 (database down) is not a failed guess.
+    requestWasSuccessful: (_req, res) => res.statusCode < 400 || res.statusCode >= 500,
     handler: tooMany('Too many failed sign-ins. Wait 15 minutes, or reset your password.'),
   });
   const resetLimiter = rateLimit({
@@ -73,6 +75,12 @@ export function authRouter({ config, sequelize, mailer, logger }: Deps) {
         res.status(204).end();
       });
     });
+  });
+
+  /** "Sign out everywhere else": every other session of this account ends; this one stays. */
+  router.post('/sessions/end-others', async (req, res) => {
+    const user = currentUser(req);
+    res.json({ ended: await auth.endOtherSessions(sequelize, user, req.sessionID) });
   });
 
   router.get('/me', (req, res) => {

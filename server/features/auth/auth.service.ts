@@ -11,10 +11,21 @@ import * as users from './users.repo';
 
 export const RESET_TOKEN_LIFETIME_MIN = 30;
 
+/** The one spelling of an e-mail used for look-ups and rate-limit keys: trimmed, lower case. */
+export const normaliseEmail = (email: unknown) =>
+  String(email ?? '')
+    .trim()
+    .toLowerCase();
+
 const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
 
-// Compared against when the e-mail is unknown, so both paths cost one bcrypt.
-const NO_USER_HASH = bcrypt.hashSync('no user has this password', 4);
+// Compared against when the e-mail is unknown, so both paths cost one bcrypt of the same work factor
+// (an unknown address takes as long to refuse as a wrong password).
+const noUserHashes = new Map<number, string>();
+const noUserHash = (cost: number) => {
+  if (!noUserHashes.has(cost)) noUserHashes.set(cost, bcrypt.hashSync('no user has this password', cost));
+  return noUserHashes.get(cost)!;
+};
 
 export async function register(input: RegisterInput, bcryptCost: number): Promise<number> {
   const passwordHash = await bcrypt.hash(input.password, bcryptCost);
@@ -36,9 +47,9 @@ export async function register(input: RegisterInput, bcryptCost: number): Promis
 }
 
 /** The user's id when e-mail and password match, otherwise null. */
-export async function verifyCredentials(email: string, password: string): Promise<number | null> {
-  const user = await users.findByEmail(email.trim().toLowerCase());
-  const matches = await bcrypt.compare(password, user?.passwordHash ?? NO_USER_HASH);
+export async function verifyCredentials(email: string, password: string, bcryptCost: number): Promise<number | null> {
+  const user = await users.findByEmail(normaliseEmail(email));
+  const matches = await bcrypt.compare(password, user?.passwordHash ?? noUserHash(bcryptCost));
   return user && matches ? user.id : null;
 }
 
@@ -67,6 +78,8 @@ export async function confirmPasswordReset(db: TransactionRunner, input: ResetCo
     await users.update(reset.userId, { passwordHash }, transaction);
     // This link and any other outstanding ones for the account stop working.
     await resets.useAllOf(reset.userId, now, transaction);
+    // Whoever knew the old password is signed out everywhere.
+    await users.endSessionsOf(reset.userId, undefined, transaction);
   });
 }
 
@@ -99,4 +112,23 @@ export const sessionUserOf = (id: number) => users.findSessionUser(id);
 export async function contactOf(userId: number, transaction?: Transaction) {
   const user = await users.findById(userId, transaction);
   return user && { id: user.id, email: user.email, displayName: user.displayName };
+}
+
+/** Ends every session of the user but the given one; recorded in the person's own log. */
+export async function endOtherSessions(db: TransactionRunner, user: SessionUser, keepSid: string) {
+  return db.transaction(async (transaction) => {
+    const ended = await users.endSessionsOf(user.id, keepSid, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        action: 'sessions.end-others',
+        entityType: 'user',
+        entityId: user.id,
+        summary: `Signed out everywhere else (${ended} other session${ended === 1 ? '' : 's'})`,
+      },
+      transaction,
+    );
+    return ended;
+  });
 }

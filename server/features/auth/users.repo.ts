@@ -1,7 +1,7 @@
-import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import { ClubModel } from '../../db/models/club.model';
 import { MembershipModel } from '../../db/models/membership.model';
+import { Op, type Transaction } from 'sequelize';
 import { UserModel } from '../../db/models/user.model';
 
 export async function findByEmail(email: string) {
@@ -41,4 +41,21 @@ export async function update(
   transaction?: Transaction,
 ) {
   await UserModel.update(values, { where: { id }, transaction });
+}
+
+/**
+ * Ends every stored session of a user (the session store keeps `{"passport":{"user":<id>}}` in its
+ * data column), except `keepSid` when given. Returns how many ended.
+ */
+export async function endSessionsOf(userId: number, keepSid?: string, transaction?: Transaction): Promise<number> {
+  const sequelize = UserModel.sequelize!;
+  const sessions = sequelize.models.Session;
+  if (!sessions) return 0;
+  return sessions.destroy({
+    where: {
+      data: { [Op.like]: `%"passport":{"user":${Math.trunc(userId)}}%` },
+      ...(keepSid ? { sid: { [Op.ne]: keepSid } } : {}),
+    },
+    transaction,
+  });
 }

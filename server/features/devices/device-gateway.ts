@@ -9,6 +9,7 @@ import { AppError, statusOf } from '../../lib/app-error';
 import { onStationChanged } from '../../lib/change-feed';
 import { planInputsOf } from '../schedules/schedules.service';
 import { stationById } from '../stations/stations.service';
+import { isDatabaseUnavailable, UNAVAILABLE_MESSAGE } from '../../lib/db-errors';
 import {
   acceptsGzip,
   etagsFor,
@@ -126,9 +127,15 @@ export function sendConfig(res: ServerResponse, answer: ConfigAnswer) {
 }
 
 function sendError(res: ServerResponse, error: unknown) {
-  const appError = error instanceof AppError ? error : new AppError('internal', 'Something went wrong on the server. It has been logged.');
+  const appError =
+    error instanceof AppError
+      ? error
+      : isDatabaseUnavailable(error)
+        ? new AppError('unavailable', UNAVAILABLE_MESSAGE)
+        : new AppError('internal', 'Something went wrong on the server. It has been logged.');
   const body = JSON.stringify({ error: { code: appError.code, message: appError.message } } satisfies ApiErrorBody);
   res.writeHead(statusOf[appError.code], {
+    ...(appError.code === 'unavailable' ? { 'Retry-After': '5' } : {}),
     'Content-Type': 'application/json; charset=utf-8',
     'Content-Length': Buffer.byteLength(body),
     'X-Content-Type-Options': 'nosniff',
@@ -157,7 +164,7 @@ export function withDeviceFastPath(
         });
         sendConfig(res, answer);
       } catch (error) {
-        if (!(error instanceof AppError)) onError(error);
+        if (!(error instanceof AppError) && !isDatabaseUnavailable(error)) onError(error);
         sendError(res, error);
       }
     })();

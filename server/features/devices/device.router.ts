@@ -62,5 +62,6 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
   router.use((req, res) => {
     res.status(404).json({ error: { code: 'not-found', message: `No device route ${req.method} ${req.originalUrl}` } });
   });
-  return router;
+  // For a graceful shutdown: resolves once every heartbeat handed in is stored or refused.
+  return Object.assign(router, { drainWrites: reports.drain });
 }

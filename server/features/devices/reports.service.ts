@@ -1,4 +1,5 @@
 import type { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
+import { isDatabaseUnavailable } from '../../lib/db-errors';
 import { createGroupWriter } from '../../lib/group-writer';
 import * as heartbeats from './heartbeats.repo';
 import * as transmissions from './transmissions.repo';
@@ -9,9 +10,12 @@ type SentTransmissions = ReturnType<typeof transmissionLogInput.parse>['transmis
 /** What devices report: heartbeats (written a group per INSERT) and the transmissions they made. */
 export function createReportStore() {
   // Heartbeats from many devices at once are stored a group per INSERT; each is acknowledged once written.
-  const writeHeartbeat = createGroupWriter(heartbeats.insertMany);
+  // A database outage fails the whole group at once (503 to each device), so nothing unsaved is acknowledged.
+  const writeHeartbeat = createGroupWriter(heartbeats.insertMany, { isUnavailable: isDatabaseUnavailable });
 
   return {
+    /** For a graceful shutdown: resolves once every heartbeat handed in is stored or refused. */
+    drain: () => writeHeartbeat.drain(),
     heartbeat: (stationId: number, report: Heartbeat, receivedAt = new Date()) =>
       writeHeartbeat({
         stationId,

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import type Sharp from 'sharp';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
@@ -10,24 +11,55 @@ import { getFor, getOwnedBy } from './units.service';
 
 const EXTENSIONS: Record<string, string> = { jpeg: 'jpg', png: 'png', webp: 'webp' };
 
+/** A phone photo is 12–50 MP; anything larger is refused before it is decoded (50 MP RGBA is 200 MB raw). */
+export const PHOTO_MAX_PIXELS = 50_000_000;
+/** Decodes running at once in this process; further uploads wait their turn. */
+const DECODES_AT_ONCE = 2;
+let decoding = 0;
+const waiting: (() => void)[] = [];
+async function oneDecodeAtATime<T>(work: () => Promise<T>): Promise<T> {
+  if (decoding >= DECODES_AT_ONCE) await new Promise<void>((resolve) => waiting.push(resolve));
+  decoding += 1;
+  try {
+    return await work();
+  } finally {
+    decoding -= 1;
+    waiting.shift()?.();
+  }
+}
+
 /** Re-encodes the photo (which drops EXIF data such as a GPS position) and makes a thumbnail. */
 async function process(buffer: Buffer) {
   // Loaded on the first upload, so servers that never see one do not carry the image library.
   const sharp = (await import('sharp')).default;
   let format: string | undefined;
+  let pixels = 0;
   try {
-    format = (await sharp(buffer).metadata()).format;
+    const meta = await sharp(buffer).metadata();
+    format = meta.format;
+    pixels = (meta.width ?? 0) * (meta.height ?? 0);
   } catch {
     format = undefined;
   }
   if (!format || !EXTENSIONS[format]) {
     throw new AppError('bad-request', 'This file is not a JPEG, PNG or WebP image', { photo: 'Choose a JPEG, PNG or WebP photo' });
   }
-  const base = sharp(buffer).rotate().resize({ width: 2000, height: 2000, fit: 'inside', withoutEnlargement: true });
+  if (pixels > PHOTO_MAX_PIXELS) {
+    const mp = Math.round(PHOTO_MAX_PIXELS / 1e6);
+    throw new AppError('payload-too-large', `The photo has ${Math.round(pixels / 1e6)} megapixels; at most ${mp} are accepted`, {
+      photo: `Choose a photo of at most ${mp} megapixels`,
+    });
+  }
+  return oneDecodeAtATime(() => encode(sharp, buffer, format));
+}
+
+async function encode(sharp: typeof Sharp, buffer: Buffer, format: string) {
+  const options = { limitInputPixels: PHOTO_MAX_PIXELS, sequentialRead: true };
+  const base = sharp(buffer, options).rotate().resize({ width: 2000, height: 2000, fit: 'inside', withoutEnlargement: true });
   const main = await (
     format === 'png' ? base.png() : format === 'webp' ? base.webp({ quality: 85 }) : base.jpeg({ quality: 85 })
   ).toBuffer();
-  const thumb = await sharp(buffer).rotate().resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
+  const thumb = await sharp(buffer, options).rotate().resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
   return { main, thumb, contentType: `image/${format}`, extension: EXTENSIONS[format] };
 }
 

@@ -54,7 +54,7 @@ export function unitsRouter({ sequelize, storage, logger }: { sequelize: Sequeli
   for (const which of ['main', 'thumb'] as const) {
     router.get(which === 'main' ? '/:id/photos/:photoId' : '/:id/photos/:photoId/thumb', async (req, res) => {
       const stored = await photos.readPhoto(storage, currentUser(req), id(req.params.id), parseId(req.params.photoId, 'Photo'), which);
-      res.setHeader('Cache-Control', 'private, max-age=3600');
+      res.setHeader('Cache-Control', 'no-store');
       res.type(stored.contentType).send(stored.body);
     });
   }

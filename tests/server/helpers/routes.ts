@@ -29,6 +29,7 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'post', path: '/api/auth/sign-in', body: { email: 'fuzz@test.faintline.example', password: 'long-enough-pass' } },
   { method: 'get', path: '/api/auth/me' },
   { method: 'post', path: '/api/auth/sign-out' },
+  { method: 'post', path: '/api/auth/sessions/end-others' },
   { method: 'patch', path: '/api/auth/me', body: { displayName: 'Fuzz Operator', callsign: 'Q9ZZT' } },
   { method: 'post', path: '/api/auth/password-reset', body: { email: 'fuzz@test.faintline.example' } },
   { method: 'post', path: '/api/auth/password-reset/confirm', body: { token: 'x'.repeat(40), password: 'long-enough-pass' } },
