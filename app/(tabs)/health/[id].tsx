@@ -6,6 +6,7 @@ import { StationHealthView } from '@/components/health/station-health-view';
 import { useStationQuery } from '@/components/stations/queries';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
 import { ApiError } from '@/shared/api/client';
 
 export default function StationHealthRoute() {
@@ -46,6 +47,12 @@ export default function StationHealthRoute() {
   return (
     <Screen>
       <Stack.Screen options={{ title: health.data ? `${health.data.stationName} · health` : 'Station health' }} />
+      {Number.isInteger(stationId) && stationId > 0 ? (
+        <TextLink
+          href={{ pathname: '/stations/[id]/results', params: { id: String(stationId) } }}
+          label="Who heard it: reception results"
+        />
+      ) : null}
       {body}
     </Screen>
   );

@@ -11,6 +11,7 @@ import { LazyStationWorkshop as StationWorkshop } from '@/components/workshop/la
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
 import { ApiError } from '@/shared/api/client';
 
 export default function StationDetailRoute() {
@@ -45,6 +46,10 @@ export default function StationDetailRoute() {
           station={station.data}
           onEdit={readOnly ? undefined : () => router.push({ pathname: '/stations/[id]/edit', params: { id: String(stationId) } })}
           onDelete={readOnly ? undefined : () => setConfirming(true)}
+        />
+        <TextLink
+          href={{ pathname: '/stations/[id]/results', params: { id: String(stationId) } }}
+          label="Who heard it: reception results"
         />
         <StationDeviceLinks stationId={stationId} readOnly={readOnly} />
         <StationWorkshop
