@@ -27,6 +27,13 @@ function busiestHour(counts: number[]): number {
   return counts.reduce((best, value, hour) => (value > counts[best]! ? hour : best), 0);
 }
 
+/** `20 m: 500 reports, busiest 14–15 UTC`: the strip in words, for screen readers and the caption. */
+function stripSummary(band: BandId, hours: number[]): string {
+  const total = hours.reduce((a, b) => a + b, 0);
+  const peak = busiestHour(hours);
+  return `${bandName(band)}: ${formatCount(total)} reports, busiest ${hh(peak)}–${hh((peak + 1) % 24)} UTC`;
+}
+
 export function HourBandChart({ hourBand, width }: { hourBand: HourBandCount[]; width: number }) {
   const { colors } = useAppTheme();
   const bands = sortBands(hourBand.map((c) => c.bandId));
@@ -35,6 +42,7 @@ export function HourBandChart({ hourBand, width }: { hourBand: HourBandCount[]; 
   const max = Math.max(1, ...hourBand.map((c) => c.reports));
   const cellW = Math.max(6, (width - LABEL_W - TOTAL_W) / 24);
   const height = bands.length * (STRIP_H + STRIP_GAP) + 22;
+  const summary = bands.map((band) => stripSummary(band, counts.get(band)!)).join('; ');
   return (
     <View style={styles.chart}>
       <Text variant="heading" accessibilityRole="header">
@@ -43,17 +51,13 @@ export function HourBandChart({ hourBand, width }: { hourBand: HourBandCount[]; 
       <Text variant="caption" tone="muted">
         One strip per band; the deeper the colour, the more reports in that hour.
       </Text>
-      <Svg width={width} height={height} accessibilityLabel="Reports by UTC hour and band">
+      <Svg width={width} height={height} accessibilityRole="image" accessibilityLabel={`Reports by UTC hour and band. ${summary}`}>
         {bands.map((band, row) => {
           const hours = counts.get(band)!;
           const total = hours.reduce((a, b) => a + b, 0);
-          const peak = busiestHour(hours);
           const y = row * (STRIP_H + STRIP_GAP);
           return (
-            <G
-              key={band}
-              accessibilityLabel={`${bandName(band)}: ${formatCount(total)} reports, busiest ${hh(peak)}–${hh((peak + 1) % 24)} UTC`}
-            >
+            <G key={band}>
               <SvgText x={0} y={y + STRIP_H - 6} fontSize={13} fontFamily={fonts.medium} fill={colors.text}>
                 {bandName(band)}
               </SvgText>
@@ -102,6 +106,9 @@ export function HourBandChart({ hourBand, width }: { hourBand: HourBandCount[]; 
           </G>
         ))}
       </Svg>
+      <Text variant="caption" tone="muted">
+        {summary}
+      </Text>
     </View>
   );
 }
