@@ -3,7 +3,7 @@ const expoPreset = require('jest-expo/jest-preset');
 
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 // Append to jest-expo's own allow-list rather than replacing it.
-const clientIgnore = (expoPreset.transformIgnorePatterns || []).map((pattern) => pattern.replace('(?!(', '(?!(victory|'));
+const clientIgnore = (expoPreset.transformIgnorePatterns || []).map((pattern) => pattern.replace('(?!(', '(?!(victory|d3-geo|d3-array|'));
 
 module.exports = {
   testTimeout: 30000,
@@ -26,6 +26,8 @@ module.exports = {
       testMatch: ['**/*.test.tsx'],
       moduleNameMapper,
       transformIgnorePatterns: clientIgnore,
+      // d3-geo and d3-array ship ES modules as .mjs only; jest-expo's transform does not cover that extension
+      transform: { '^.+\\.mjs$': 'babel-jest' },
     },
   ],
 };

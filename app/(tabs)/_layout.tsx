@@ -32,10 +32,11 @@ export default function TabsLayoutRoute() {
       {/* every operator may start a club, so the tab is always there */}
       <Tabs.Screen name="club" options={{ title: 'Club · Faintline' }} />
       <Tabs.Screen name="settings" options={{ title: 'Settings · Faintline' }} />
-      {/* no tab of their own (not in shellTabs): reached from the notice bell and the Club tab */}
+      {/* no tab of their own (not in shellTabs): reached from the notice bell, the Club tab, Stations and the overview */}
       <Tabs.Screen name="notices" options={{ title: 'Notices · Faintline' }} />
       <Tabs.Screen name="proposals" options={{ title: 'Offset proposals · Faintline' }} />
       <Tabs.Screen name="activity" options={{ title: 'Your activity log · Faintline' }} />
+      <Tabs.Screen name="receivers" options={{ title: 'Listening posts · Faintline' }} />
     </Tabs>
   );
 }

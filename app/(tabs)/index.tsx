@@ -4,6 +4,8 @@ import { StyleSheet, View } from 'react-native';
 import { useSessionQuery } from '@/components/auth/queries';
 import { SafetyCard } from '@/components/overview/safety-card';
 import { StationCountCard } from '@/components/overview/station-count-card';
+import { StationGlance } from '@/components/overview/station-glance';
+import { useStationsAtAGlanceQuery } from '@/components/receptions/queries';
 import { useStationsQuery } from '@/components/stations/queries';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -15,6 +17,7 @@ export default function OverviewRoute() {
   const router = useRouter();
   const user = useSessionQuery().data;
   const stations = useStationsQuery();
+  const glances = useStationsAtAGlanceQuery();
   return (
     <Screen>
       <Stack.Screen options={{ title: 'Overview · Faintline' }} />
@@ -39,9 +42,19 @@ export default function OverviewRoute() {
           <View style={styles.linkButtons}>
             <Button label="Add a station" onPress={() => router.push('/stations/new')} />
             <Button label="Your stations" variant="secondary" onPress={() => router.push('/stations')} />
+            <Button label="Listening posts" variant="secondary" onPress={() => router.push('/receivers')} />
           </View>
         </Card>
       </View>
+      {stations.data?.length ? (
+        <>
+          <Text variant="heading" accessibilityRole="header">
+            Your stations at a glance
+          </Text>
+          {glances.isError ? <Text tone="muted">Reception figures are not available right now.</Text> : null}
+          <StationGlance stations={stations.data} glances={glances.data ?? []} />
+        </>
+      ) : null}
       <SafetyCard />
     </Screen>
   );

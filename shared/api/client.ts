@@ -20,6 +20,9 @@ export function setApiBaseUrl(url: string) {
 
 type ApiOptions = { method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE'; body?: unknown };
 
+/** A multipart body goes as it is (the runtime sets its boundary); anything else is sent as JSON. */
+const isFormData = (body: unknown): body is FormData => typeof FormData !== 'undefined' && body instanceof FormData;
+
 export async function api<T>(path: string, options: ApiOptions = {}): Promise<T> {
   let response: Response;
   try {
@@ -27,8 +30,10 @@ export async function api<T>(path: string, options: ApiOptions = {}): Promise<T>
       method: options.method ?? 'GET',
       credentials: 'include',
       headers:
-        options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        options.body === undefined || isFormData(options.body)
+          ? { Accept: 'application/json' }
+          : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: options.body === undefined ? undefined : isFormData(options.body) ? options.body : JSON.stringify(options.body),
     });
   } catch {
     throw new ApiError(0, 'network', 'Faintline cannot reach its server. Check your connection and try again.');

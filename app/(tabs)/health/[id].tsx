@@ -7,6 +7,7 @@ import { QueryBoundary } from '@/components/query/query-boundary';
 import { useRouteId } from '@/components/query/use-route-id';
 import { useStationQuery } from '@/components/stations/queries';
 import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
 
 export default function StationHealthRoute() {
   const router = useRouter();
@@ -21,6 +22,12 @@ export default function StationHealthRoute() {
   return (
     <Screen>
       <Stack.Screen options={{ title: health.data ? `${health.data.stationName} · health` : 'Station health' }} />
+      {valid ? (
+        <TextLink
+          href={{ pathname: '/stations/[id]/results', params: { id: String(stationId) } }}
+          label="Who heard it: reception results"
+        />
+      ) : null}
       <QueryBoundary
         query={health}
         noun="station"

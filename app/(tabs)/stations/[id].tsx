@@ -13,6 +13,7 @@ import { useUnitQuery } from '@/components/units/queries';
 import { LazyStationWorkshop as StationWorkshop } from '@/components/workshop/lazy-parts';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
 
 export default function StationDetailRoute() {
   const router = useRouter();
@@ -54,6 +55,10 @@ export default function StationDetailRoute() {
                 onDelete={readOnly ? undefined : () => remove.ask()}
               />
               <StationDeviceLinks stationId={stationId} readOnly={readOnly} />
+              <TextLink
+                href={{ pathname: '/stations/[id]/results', params: { id: String(stationId) } }}
+                label="Who heard it: reception results"
+              />
               <StationWorkshop
                 station={data}
                 unit={unit.data ?? null}

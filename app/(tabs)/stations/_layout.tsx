@@ -15,6 +15,7 @@ export default function StationsLayoutRoute() {
       <Stack.Screen name="[id]/bands" options={{ title: 'Station · bands' }} />
       <Stack.Screen name="[id]/calibrate" options={{ title: 'Station · calibration' }} />
       <Stack.Screen name="[id]/on-air" options={{ title: 'Station · on the air' }} />
+      <Stack.Screen name="[id]/results" options={{ title: 'Station · results' }} />
     </Stack>
   );
 }

@@ -7,6 +7,7 @@ import { useBreakpoints } from '@/components/ui/breakpoints';
 import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
 
@@ -42,6 +43,7 @@ export default function StationsRoute() {
         {stations.data?.length ? <Button label="Add station" onPress={addStation} /> : null}
       </View>
       {body}
+      <TextLink href="/receivers" label="Listening posts and report imports" />
     </Screen>
   );
 }
