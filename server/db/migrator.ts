@@ -21,8 +21,8 @@ const migrations = [
   { name: '0005-suspended-by', ...m0005 },
   { name: '0006-filter-selection', ...m0006 },
   { name: '0007-device-pairing', ...m0007 },
-  { name: '0008-b-reach-per-watt', ...m0008b },
   { name: '0008-reception-reports', ...m0008 },
+  { name: '0008-b-reach-per-watt', ...m0008b },
   { name: '0010-reception-imports', ...m0010 },
   { name: '0011-station-change-feed', ...m0011 },
 ];
