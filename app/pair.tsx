@@ -3,9 +3,8 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { AuthShell } from '@/components/auth/auth-shell';
-import { useRegisterMutation, useSessionQuery, useSignInMutation } from '@/components/auth/queries';
-import { RegisterForm } from '@/components/auth/register-form';
-import { SignInForm } from '@/components/auth/sign-in-form';
+import { SignInOrRegister } from '@/components/auth/sign-in-or-register';
+import { useSessionQuery } from '@/components/auth/queries';
 import { Wordmark } from '@/components/brand/faintline-mark';
 import { PairCodeFormView } from '@/components/devices/pair-code-form';
 import { PairingOutcome } from '@/components/devices/pairing-outcome';
@@ -19,7 +18,6 @@ import {
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
-import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { layout, space } from '@/components/ui/theme';
@@ -35,9 +33,6 @@ export default function PairRoute() {
   const { code } = useLocalSearchParams<{ code?: string }>();
   const initialCode = typeof code === 'string' && isUserCode(code) ? formatUserCode(code) : typeof code === 'string' ? code : '';
   const user = useSessionQuery().data ?? null;
-  const signIn = useSignInMutation();
-  const register = useRegisterMutation();
-  const [mode, setMode] = useState<'sign-in' | 'register'>('sign-in');
 
   if (!user) {
     return (
@@ -47,16 +42,7 @@ export default function PairRoute() {
           title="Pair a device"
           intro={`Sign in to give the device one of your stations. You come straight back here${initialCode ? `, with the code ${initialCode} kept` : ''}.`}
         >
-          <SegmentedChoice
-            label="Have an account?"
-            value={mode}
-            onChange={setMode}
-            options={[
-              { value: 'sign-in', label: 'Sign in' },
-              { value: 'register', label: 'Create account' },
-            ]}
-          />
-          {mode === 'sign-in' ? <SignInForm onSubmit={signIn.mutateAsync} /> : <RegisterForm onSubmit={register.mutateAsync} />}
+          <SignInOrRegister />
         </AuthShell>
       </>
     );
