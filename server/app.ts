@@ -7,6 +7,7 @@ import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import { auditRouter } from './features/audit/audit.router';
+import { accountRouter } from './features/auth/account.router';
 import { authRouter } from './features/auth/auth.router';
 import { configurePassport } from './features/auth/passport';
 import { clubsRouter } from './features/clubs/clubs.router';
@@ -131,6 +132,7 @@ export function createApp({
     next();
   });
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
+  api.use('/auth', accountRouter({ config, sequelize, mailer, logger, storage }));
   const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
   api.use(receptionsRouter({ sequelize }));
   api.use('/listening-posts', listeningPostsRouter({ sequelize }));

@@ -11,6 +11,7 @@ import * as m0008 from './migrations/0008-reception-reports';
 import * as m0008b from './migrations/0008-b-reach-per-watt';
 import * as m0010 from './migrations/0010-reception-imports';
 import * as m0011 from './migrations/0011-station-change-feed';
+import * as m0014 from './migrations/0014-email-changes';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
@@ -25,6 +26,7 @@ const migrations = [
   { name: '0008-b-reach-per-watt', ...m0008b },
   { name: '0010-reception-imports', ...m0010 },
   { name: '0011-station-change-feed', ...m0011 },
+  { name: '0014-email-changes', ...m0014 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

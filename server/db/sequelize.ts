@@ -6,6 +6,7 @@ import { AlertModel, AlertSettingsModel, DeviceTokenModel, DeviceTransmissionMod
 import { MembershipModel } from './models/membership.model';
 import { DevicePairingModel, PairingAttemptModel } from './models/pairing.model';
 import { PasswordResetModel } from './models/password-reset.model';
+import { EmailChangeModel } from './models/email-change.model';
 import { ScheduleModel } from './models/schedule.model';
 import { StationBandModel } from './models/station-band.model';
 import { StationModel } from './models/station.model';
@@ -30,6 +31,7 @@ export function createSequelize(databaseUrl: string): Sequelize {
   MembershipModel.initModel(sequelize);
   StationModel.initModel(sequelize);
   PasswordResetModel.initModel(sequelize);
+  EmailChangeModel.initModel(sequelize);
   UnitModel.initModel(sequelize);
   UnitPhotoModel.initModel(sequelize);
   StationBandModel.initModel(sequelize);

@@ -41,6 +41,31 @@ export type {
 /** POST /api/auth/password-reset and …/confirm: a sentence to show. */
 export type MessageAnswer = { message: string };
 
+/** POST /api/auth/sessions/end-others and POST /api/auth/password: how many other sessions ended. */
+export type SessionsEndedAnswer = { ended: number };
+
+/** GET /api/auth/email-change: the address waiting for its confirmation link to be opened, if any. */
+export type PendingEmailChange = { newEmail: string; expiresAtUtc: string } | null;
+
+/** What happens to one of the person's clubs when the account is deleted. */
+export type ClubOnDeletion = {
+  clubId: number;
+  clubName: string;
+  /** leave: the membership ends; delete-club: the person is its only member; hand-over: the only admin of a club with other members */
+  outcome: 'leave' | 'delete-club' | 'hand-over';
+};
+
+/** GET /api/auth/account/deletion: what deleting the account would take with it. */
+export type AccountDeletionPreview = {
+  stations: number;
+  deviceTokens: number;
+  units: number;
+  listeningPosts: number;
+  clubs: ClubOnDeletion[];
+  /** false while a club still needs another admin */
+  allowed: boolean;
+};
+
 /** GET /api/audit and GET /api/clubs/:clubId/audit (newest first; CSV with ?format=csv). */
 export type AuditEntry = {
   id: number;

@@ -27,3 +27,25 @@ export const resetConfirmInput = z.object({
   password: passwordField,
 });
 export type ResetConfirmInput = z.infer<typeof resetConfirmInput>;
+
+const currentPasswordField = z.string().min(1, 'Enter your current password').max(200);
+
+/** A new password for a signed-in person, who proves it is them with the current one. */
+export const passwordChangeInput = z
+  .object({ currentPassword: currentPasswordField, newPassword: passwordField })
+  .refine((v) => v.newPassword !== v.currentPassword, {
+    message: 'Choose a password that differs from the current one',
+    path: ['newPassword'],
+  });
+export type PasswordChangeInput = z.infer<typeof passwordChangeInput>;
+
+/** A new sign-in address; it takes effect only when the link mailed to it is opened. */
+export const emailChangeInput = z.object({ newEmail: emailField, password: currentPasswordField });
+export type EmailChangeInput = z.infer<typeof emailChangeInput>;
+
+export const emailConfirmInput = z.object({ token: z.string().min(20, 'The confirmation link is incomplete').max(200) });
+export type EmailConfirmInput = z.infer<typeof emailConfirmInput>;
+
+/** Deleting an account is confirmed by typing its password. */
+export const accountDeleteInput = z.object({ password: currentPasswordField });
+export type AccountDeleteInput = z.infer<typeof accountDeleteInput>;

@@ -38,3 +38,8 @@ export const findForOwner = (ownerId: number) => newestWhere({ ownerId });
 /** A club's own actions and changes to its members' things, newest first. */
 export const findForClub = (clubId: number, memberIds: number[]) =>
   newestWhere({ [Op.or]: [{ clubId }, { ownerId: { [Op.in]: memberIds }, clubId: null }] });
+
+/** Deletes an owner's own log (entries about no club); club logs keep theirs. */
+export async function removeOwnLog(ownerId: number, transaction: Transaction) {
+  await AuditEntryModel.destroy({ where: { ownerId, clubId: null }, transaction });
+}

@@ -65,6 +65,9 @@ function toEntry(row: Awaited<ReturnType<typeof repo.findForOwner>>[number]): Au
   };
 }
 
+/** A deleted account's own log goes with it; what its clubs' logs recorded stays there. */
+export const forgetOwnLog = (ownerId: number, transaction: Transaction) => repo.removeOwnLog(ownerId, transaction);
+
 /** An operator's own log: changes to their things, by anyone. */
 export async function listForOwner(ownerId: number) {
   return (await repo.findForOwner(ownerId)).map(toEntry);

@@ -30,6 +30,18 @@ export async function findSessionUser(id: number): Promise<SessionUser | null> {
 
 export const findById = (id: number, transaction?: Transaction) => UserModel.findByPk(id, { transaction });
 
+/** The account row, locked for the rest of the transaction. */
+export const findByIdForUpdate = (id: number, transaction: Transaction) =>
+  UserModel.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+
+export const emailTaken = async (email: string, transaction?: Transaction) =>
+  (await UserModel.count({ where: { email }, transaction })) > 0;
+
+/** Deletes the account row; the database removes what hangs off it (memberships, notifications, resets, imports). */
+export async function remove(id: number, transaction: Transaction) {
+  await UserModel.destroy({ where: { id }, transaction });
+}
+
 /** Creates an account; a taken e-mail fails with Sequelize's UniqueConstraintError. */
 export async function insert(values: { email: string; displayName: string; callsign: string | null; passwordHash: string }) {
   return (await UserModel.create(values)).id;
@@ -37,7 +49,7 @@ export async function insert(values: { email: string; displayName: string; calls
 
 export async function update(
   id: number,
-  values: { displayName?: string; callsign?: string | null; passwordHash?: string },
+  values: { displayName?: string; callsign?: string | null; passwordHash?: string; email?: string },
   transaction?: Transaction,
 ) {
   await UserModel.update(values, { where: { id }, transaction });

@@ -57,3 +57,26 @@ export async function adminSharesClubWith(adminId: number, adminOfClubIds: numbe
   const shared = await MembershipModel.count({ where: { userId: ownerId, clubId: { [Op.in]: adminOfClubIds } } });
   return shared > 0 || adminId === ownerId;
 }
+
+/** Every membership of the clubs the user belongs to (theirs and the others'), with club names, locked for the transaction. */
+export async function membershipsAroundForUpdate(userId: number, transaction?: Transaction) {
+  const own = await MembershipModel.findAll({ where: { userId }, attributes: ['clubId'], transaction });
+  if (own.length === 0) return [];
+  const rows = await MembershipModel.findAll({
+    where: { clubId: { [Op.in]: own.map((m) => m.clubId) } },
+    include: [{ model: ClubModel, as: 'club', attributes: ['id', 'name'] }],
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  return rows.map((m) => ({
+    clubId: m.clubId,
+    clubName: (m as MembershipModel & { club: ClubModel }).club.name,
+    userId: m.userId,
+    role: m.role,
+  }));
+}
+
+/** Deletes a club; its memberships, invitations and proposals go with it, its log entries lose the club. */
+export async function removeClub(clubId: number, transaction: Transaction) {
+  await ClubModel.destroy({ where: { id: clubId }, transaction });
+}

@@ -1,7 +1,8 @@
 import type { SessionUser } from '@/shared/api/contracts';
+import type { ClubOnDeletion } from '@/shared/api/answers';
 import type { ClubDetail } from '@/shared/schemas';
 import type { MembershipRole } from './clubs.repo';
-import type { TransactionRunner } from '../../db/transaction';
+import type { Transaction, TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import { requireAdmin, requireMember } from './access';
@@ -125,4 +126,63 @@ export async function setRole(db: TransactionRunner, user: SessionUser, clubId: 
       transaction,
     );
   });
+}
+
+/** What deleting the user's account does to each of their clubs (read inside the deletion's transaction, rows locked). */
+export async function clubsOnDeletion(userId: number, transaction?: Transaction): Promise<ClubOnDeletion[]> {
+  const rows = await repo.membershipsAroundForUpdate(userId, transaction);
+  const mine = rows.filter((r) => r.userId === userId);
+  return mine
+    .map(({ clubId, clubName, role }) => {
+      const others = rows.filter((r) => r.clubId === clubId && r.userId !== userId);
+      const outcome: ClubOnDeletion['outcome'] =
+        others.length === 0 ? 'delete-club' : role === 'admin' && !others.some((r) => r.role === 'admin') ? 'hand-over' : 'leave';
+      return { clubId, clubName, outcome };
+    })
+    .sort((a, b) => a.clubName.localeCompare(b.clubName));
+}
+
+/** The refusal when a club would be left without an admin. */
+export function handOverFirst(blocked: ClubOnDeletion[]) {
+  const names = blocked.map((c) => c.clubName).join(', ');
+  return new AppError(
+    'conflict',
+    `You are the only admin of ${names}. Make another member an admin there (Club → Members) or remove the other members, then delete your account.`,
+  );
+}
+
+/**
+ * An account being deleted leaves its clubs: each club's log records it; a club with no other member is deleted.
+ * Refused while the person is the only admin of a club with other members.
+ */
+export async function leaveAllOnDeletion(user: SessionUser, stationCount: number, transaction: Transaction) {
+  const outcomes = await clubsOnDeletion(user.id, transaction);
+  const blocked = outcomes.filter((c) => c.outcome === 'hand-over');
+  if (blocked.length) throw handOverFirst(blocked);
+  const stations =
+    stationCount === 0
+      ? 'they had no stations'
+      : stationCount === 1
+        ? 'their station was deleted'
+        : `their ${stationCount} stations were deleted`;
+  for (const { clubId, clubName, outcome } of outcomes) {
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId,
+        action: outcome === 'delete-club' ? 'club.delete' : 'member.account-deleted',
+        entityType: outcome === 'delete-club' ? 'club' : 'membership',
+        entityId: outcome === 'delete-club' ? clubId : user.id,
+        summary:
+          outcome === 'delete-club'
+            ? `Deleted their account; the club ${clubName} had no other member and was deleted`
+            : `${user.displayName} deleted their account and left the club; ${stations}`,
+      },
+      transaction,
+    );
+    if (outcome === 'delete-club') await repo.removeClub(clubId, transaction);
+    else await repo.removeMembership(user.id, clubId, transaction);
+  }
+  return outcomes;
 }

@@ -68,6 +68,13 @@ export async function remove(id: number, transaction: Transaction) {
   await ListeningPostModel.destroy({ where: { id }, transaction });
 }
 
+/** Deletes every post of an owner and returns their ids. */
+export async function removeAllOfOwner(ownerId: number, transaction: Transaction) {
+  const rows = await ListeningPostModel.findAll({ where: { ownerId }, attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
+  await ListeningPostModel.destroy({ where: { ownerId }, transaction });
+  return rows.map((row) => row.id);
+}
+
 export type PostIdentity = { postId: number; ownerId: number; callsign: string; locator: string; tokenHash: string };
 
 /** The post a token belongs to (one indexed lookup on the token's hash). */

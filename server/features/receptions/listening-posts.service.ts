@@ -1,4 +1,4 @@
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { SessionUser } from '@/shared/api/contracts';
 import type { ListeningPost } from '@/shared/api/receptions';
 import type { ListeningPostInput } from '@/shared/schemas';
@@ -91,4 +91,11 @@ export async function remove(sequelize: Sequelize, user: SessionUser, id: number
     );
     transaction.afterCommit(() => forgetPostTokens(id));
   });
+}
+
+/** Deletes every post of an owner (their tokens stop on commit); the reports they sent stay. For account deletion. */
+export async function removeAllOwnedBy(ownerId: number, transaction: Transaction) {
+  const ids = await repo.removeAllOfOwner(ownerId, transaction);
+  transaction.afterCommit(() => ids.forEach((id) => forgetPostTokens(id)));
+  return ids.length;
 }

@@ -68,6 +68,12 @@ export const findByOwner = (ownerId: number) => findAllWhere({ ownerId });
 export const findByOwners = (ownerIds: number[]) => findAllWhere({ ownerId: { [Op.in]: ownerIds } });
 export const findByUnit = (unitId: number) => findAllWhere({ unitId });
 
+/** Ids of an owner's stations, locked for the rest of the transaction. */
+export async function idsOfOwnerForUpdate(ownerId: number, transaction: Transaction) {
+  const rows = await StationModel.findAll({ where: { ownerId }, attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
+  return rows.map((row) => row.id);
+}
+
 export async function findById(id: number, transaction?: Transaction) {
   const row = await StationModel.findByPk(id, { include, transaction });
   return row ? toStation(row as Row) : null;

@@ -115,6 +115,19 @@ export async function remove(db: TransactionRunner, user: SessionUser, id: numbe
   );
 }
 
+/**
+ * Deletes every station of an owner with what goes with a station (schedule, bands, calibration, device token,
+ * heartbeats, alerts, reception aggregates); devices' caches drop them on commit. For account deletion.
+ */
+export async function removeAllOwnedBy(ownerId: number, transaction: Transaction) {
+  const ids = await repo.idsOfOwnerForUpdate(ownerId, transaction);
+  for (const id of ids) {
+    await repo.remove(id, transaction);
+    await forgetReceptionAggregates(id, transaction);
+  }
+  return ids.length;
+}
+
 function bandOrRefuse(bandId: BandId, station: Station) {
   const found = bandFor(bandId, station.region);
   if (!found.ok) throw new AppError('bad-request', found.reason, { bandId: found.reason });

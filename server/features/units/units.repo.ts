@@ -99,6 +99,14 @@ export async function insertPhoto(
 }
 
 export const findPhoto = (unitId: number, photoId: number) => UnitPhotoModel.findOne({ where: { id: photoId, unitId } });
+/** Deletes every unit of an owner (their photo rows go with them) and returns the photos' stored files. */
+export async function removeAllOfOwner(ownerId: number, transaction: Transaction) {
+  const units = await UnitModel.findAll({ where: { ownerId }, attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
+  const photos = await UnitPhotoModel.findAll({ where: { unitId: units.map((u) => u.id) }, transaction });
+  await UnitModel.destroy({ where: { ownerId }, transaction });
+  return { count: units.length, photos: photos.map((p) => ({ storageKey: p.storageKey, thumbKey: p.thumbKey })) };
+}
+
 export const photosOf = (unitId: number) => UnitPhotoModel.findAll({ where: { unitId } });
 export async function removePhoto(id: number, transaction?: Transaction) {
   await UnitPhotoModel.destroy({ where: { id }, transaction });

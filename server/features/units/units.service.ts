@@ -1,6 +1,6 @@
 import type { SessionUser } from '@/shared/api/contracts';
 import { unitInput, type Unit, type UnitValues } from '@/shared/schemas';
-import type { TransactionRunner } from '../../db/transaction';
+import type { Transaction, TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import * as audit from '../audit/audit.service';
 import { adminSharesClubWith } from '../clubs/access';
@@ -77,6 +77,9 @@ export async function remove(db: TransactionRunner, user: SessionUser, id: numbe
   );
   return photos;
 }
+
+/** Deletes every unit of an owner; returns the stored photo files to delete once the transaction has committed. */
+export const removeAllOwnedBy = (ownerId: number, transaction: Transaction) => repo.removeAllOfOwner(ownerId, transaction);
 
 const bandList = (bands: readonly string[]) => bands.map((b) => b.replace(/m$/, ' m')).join('/');
 

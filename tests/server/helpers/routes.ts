@@ -33,6 +33,13 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'patch', path: '/api/auth/me', body: { displayName: 'Fuzz Operator', callsign: 'Q9ZZT' } },
   { method: 'post', path: '/api/auth/password-reset', body: { email: 'fuzz@test.faintline.example' } },
   { method: 'post', path: '/api/auth/password-reset/confirm', body: { token: 'x'.repeat(40), password: 'long-enough-pass' } },
+  // Account routes check the current password; a wrong one keeps the scenario's account as it is.
+  { method: 'post', path: '/api/auth/password', body: { currentPassword: 'not-the-password', newPassword: 'another-long-pass' } },
+  { method: 'get', path: '/api/auth/email-change' },
+  { method: 'post', path: '/api/auth/email-change', body: { newEmail: 'moved@test.faintline.example', password: 'not-the-password' } },
+  { method: 'post', path: '/api/auth/email-change/confirm', body: { token: 'x'.repeat(40) } },
+  { method: 'get', path: '/api/auth/account/deletion' },
+  { method: 'post', path: '/api/auth/account/delete', body: { password: 'not-the-password' } },
   { method: 'get', path: '/api/stations' },
   { method: 'post', path: '/api/stations', body: { name: 'Loft', callsign: 'Q9ZZT', locator: 'JO22ab', notes: '' } },
   { method: 'get', path: '/api/stations/:station' },
@@ -149,6 +156,7 @@ export const API_ROUTES: RouteSpec[] = [
     body: { name: 'Shed files', mapping: { delimiter: ',', hasHeader: true, columns: [], timeFormat: 'iso', frequencyUnit: 'hz' } },
   },
   // Last: they take things away from the scenario.
+  { method: 'delete', path: '/api/auth/email-change' },
   { method: 'delete', path: '/api/reception-mappings/:mapping' },
   { method: 'delete', path: '/api/listening-posts/:post' },
   { method: 'delete', path: '/api/clubs/:club/stations/:station/suspension' },
