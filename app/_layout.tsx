@@ -71,6 +71,8 @@ function RootStack({ fontsReady }: { fontsReady: boolean }) {
       <Stack.Screen name="join" options={{ title: 'Join a club · Faintline' }} />
       {/* where a device's pairing code is typed; signed out it offers sign-in and keeps the code */}
       <Stack.Screen name="pair" options={{ title: 'Pair a device · Faintline' }} />
+      {/* the link mailed to a new sign-in address works signed in and signed out */}
+      <Stack.Screen name="confirm-email" options={{ title: 'Confirm your new e-mail · Faintline' }} />
       <Stack.Screen name="+not-found" options={{ title: 'Page not found' }} />
     </Stack>
   );

@@ -1,13 +1,15 @@
-import { Stack } from 'expo-router';
+import { Stack, useLocalSearchParams } from 'expo-router';
 
 import { AuthShell } from '@/components/auth/auth-shell';
+import { DevInboxLink } from '@/components/auth/dev-inbox-link';
 import { ForgotPasswordForm } from '@/components/auth/forgot-password-form';
 import { useResetRequestMutation } from '@/components/auth/queries';
-import { DEV_INBOX_PATH, env } from '@/components/env';
-import { ServerPageLink, TextLink } from '@/components/ui/text-link';
+import { TextLink } from '@/components/ui/text-link';
 
 export default function ForgotPasswordRoute() {
   const request = useResetRequestMutation();
+  // the address typed on the sign-in screen comes along
+  const { email } = useLocalSearchParams<{ email?: string }>();
   return (
     <>
       <Stack.Screen options={{ title: 'Reset password · Faintline' }} />
@@ -17,17 +19,15 @@ export default function ForgotPasswordRoute() {
         footer={
           <>
             <TextLink href="/sign-in" label="Back to sign in" />
-            {env.showDevInbox ? (
-              <ServerPageLink
-                path={DEV_INBOX_PATH}
-                label="Open the local test inbox"
-                hint="Opens the development mail inbox of the local server in a new tab"
-              />
-            ) : null}
+            <DevInboxLink />
           </>
         }
       >
-        <ForgotPasswordForm onSubmit={request.mutateAsync} sentMessage={request.data?.message} />
+        <ForgotPasswordForm
+          initialEmail={typeof email === 'string' ? email : ''}
+          onSubmit={request.mutateAsync}
+          sentMessage={request.data?.message}
+        />
       </AuthShell>
     </>
   );

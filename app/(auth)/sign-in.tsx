@@ -1,6 +1,7 @@
 import { Stack } from 'expo-router';
 
 import { AuthShell } from '@/components/auth/auth-shell';
+import { DevInboxLink } from '@/components/auth/dev-inbox-link';
 import { useSignInMutation } from '@/components/auth/queries';
 import { SignInForm } from '@/components/auth/sign-in-form';
 import { TextLink } from '@/components/ui/text-link';
@@ -14,8 +15,8 @@ export default function SignInRoute() {
         title="Sign in"
         footer={
           <>
-            <TextLink href="/forgot-password" label="Forgot your password?" />
             <TextLink href="/register" label="New here? Create an account" />
+            <DevInboxLink />
           </>
         }
       >

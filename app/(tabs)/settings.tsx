@@ -1,10 +1,17 @@
 import { StyleSheet, View } from 'react-native';
 
+import { useState } from 'react';
+
+import { DeleteAccountCard, SignInCards } from '@/components/account/account-cards';
+import { deletionWords } from '@/components/account/deletion-words';
+import { endedSessionsWords } from '@/components/account/password-form';
+import { useDeleteAccountMutation, useDeletionPreviewQuery, useEndOtherSessionsMutation } from '@/components/account/queries';
+import { SessionsCard } from '@/components/account/sessions-card';
 import { ProfileForm } from '@/components/auth/profile-form';
 import { useSessionQuery, useSignOutMutation, useUpdateProfileMutation } from '@/components/auth/queries';
-import { Button } from '@/components/ui/button';
+import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Card } from '@/components/ui/card';
-import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { Text } from '@/components/ui/text';
@@ -23,8 +30,32 @@ export default function SettingsRoute() {
   const signOut = useSignOutMutation();
   const updateProfile = useUpdateProfileMutation();
   const { preference, setPreference } = useAppTheme();
+  const endOthers = useConfirmedMutation(useEndOtherSessionsMutation());
+  const [ended, setEnded] = useState<string>();
+  const deletion = useConfirmedMutation(useDeleteAccountMutation(), null as { password: string } | null);
+  const preview = useDeletionPreviewQuery().data;
   return (
-    <Screen>
+    <Screen
+      overlay={
+        <>
+          <ConfirmDialog
+            {...endOthers.dialog}
+            title="Sign out everywhere else?"
+            message="Every other browser or phone signed in to your account is signed out and must sign in again. This one stays signed in."
+            confirmLabel="Sign out the others"
+            onConfirm={() => endOthers.confirm(undefined, ({ ended: n }) => setEnded(endedSessionsWords(n)))}
+          />
+          <ConfirmDialog
+            {...deletion.dialog}
+            destructive
+            title="Delete your account for good?"
+            message={`${preview ? deletionWords(preview).join(' ') : ''} This cannot be undone.`}
+            confirmLabel="Delete my account"
+            onConfirm={() => deletion.asking && deletion.confirm(deletion.asking)}
+          />
+        </>
+      }
+    >
       <Text variant="title" accessibilityRole="header">
         Settings
       </Text>
@@ -40,16 +71,23 @@ export default function SettingsRoute() {
           />
         ) : null}
       </Card>
+      {user ? <SignInCards user={user} /> : null}
       <Card>
         <Text variant="heading">Appearance</Text>
         <Text tone="muted">“System” follows your device’s light or dark setting.</Text>
         <SegmentedChoice label="Theme" options={themeOptions} value={preference} onChange={setPreference} />
       </Card>
-      <Card>
-        <Text variant="heading">Session</Text>
-        {signOut.isError ? <Notice message={signOut.error.message} /> : null}
-        <Button label="Sign out" variant="secondary" busy={signOut.isPending} onPress={() => signOut.mutate()} style={styles.signOut} />
-      </Card>
+      <SessionsCard
+        onSignOut={() => signOut.mutate()}
+        signingOut={signOut.isPending}
+        signOutError={signOut.error?.message}
+        onEndOthers={() => {
+          setEnded(undefined);
+          endOthers.ask();
+        }}
+        endedMessage={ended}
+      />
+      <DeleteAccountCard onAsk={(values) => deletion.ask(values)} />
     </Screen>
   );
 }
@@ -69,5 +107,4 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, paddingVertical: 2 },
   rowLabel: { width: 80 },
   rowValue: { flexShrink: 1 },
-  signOut: { alignSelf: 'flex-start' },
 });

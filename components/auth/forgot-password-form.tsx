@@ -10,14 +10,16 @@ import { Notice } from '../ui/notice';
 
 export type ForgotPasswordFormProps = {
   onSubmit: (values: ResetRequestInput) => Promise<unknown>;
+  /** What was typed on the sign-in screen. */
+  initialEmail?: string;
   /** The server's answer once the request went through. */
   sentMessage?: string;
 };
 
-export function ForgotPasswordForm({ onSubmit, sentMessage }: ForgotPasswordFormProps) {
+export function ForgotPasswordForm({ onSubmit, sentMessage, initialEmail = '' }: ForgotPasswordFormProps) {
   const form = useForm<ResetRequestInput>({
     resolver: zodResolver(resetRequestInput),
-    defaultValues: { email: '' },
+    defaultValues: { email: initialEmail.slice(0, 190) },
   });
   const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);

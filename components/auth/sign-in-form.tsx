@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 
 import { signInInput, type SignInInput } from '@/shared/schemas';
 
@@ -7,6 +7,7 @@ import { serverMessage, submitWithServerErrors } from '../form/apply-server-erro
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
+import { TextLink } from '../ui/text-link';
 
 export type SignInFormProps = { onSubmit: (values: SignInInput) => Promise<unknown> };
 
@@ -18,6 +19,7 @@ export function SignInForm({ onSubmit }: SignInFormProps) {
   // the session cache updates, and the guard shows the signed-in screens
   const submit = submitWithServerErrors(form, onSubmit);
   const message = serverMessage(form.formState.errors);
+  const email = useWatch({ control: form.control, name: 'email' }).trim();
   return (
     <>
       {message ? <Notice message={message} /> : null}
@@ -39,6 +41,8 @@ export function SignInForm({ onSubmit }: SignInFormProps) {
         onSubmitEditing={submit}
       />
       <Button label="Sign in" onPress={submit} busy={form.formState.isSubmitting} />
+      {/* the address typed so far comes along to the reset screen */}
+      <TextLink href={email ? `/forgot-password?email=${encodeURIComponent(email)}` : '/forgot-password'} label="Forgot your password?" />
     </>
   );
 }

@@ -6,6 +6,7 @@ import type { z } from 'zod';
 
 import { invitationInput } from '@/shared/schemas';
 
+import { enterSubmits } from '../form/enter-submits';
 import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
@@ -29,6 +30,7 @@ export function InviteForm({ onSubmit }: InviteFormProps) {
       applyServerErrors(form, error);
     }
   });
+  enterSubmits(form.control, submit);
   const rootError = serverMessage(form.formState.errors);
   return (
     <View style={styles.form}>

@@ -5,6 +5,7 @@ import { useForm } from 'react-hook-form';
 import { ApiError } from '@/shared/api/client';
 import { pairCodeForm, type PairCodeForm } from '@/shared/schemas';
 
+import { enterSubmits } from '../form/enter-submits';
 import { serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
@@ -34,6 +35,7 @@ export function PairCodeFormView({ initialCode, onLookup }: PairCodeFormProps) {
         });
     }
   });
+  enterSubmits(form.control, submit);
   // arriving from the device's link (or QR code), the code is looked up at once
   const looked = useRef(false);
   useEffect(() => {

@@ -2,6 +2,8 @@ import type { FieldValues, Path, UseFormReturn } from 'react-hook-form';
 
 import { ApiError } from '@/shared/api/client';
 
+import { enterSubmits } from './enter-submits';
+
 /**
  * Puts a failed request's messages where the operator looks: a 400's `fields` beside their inputs
  * (flat names like `email` or nested paths like `filters.0.cutoffHz`), everything else (and fields
@@ -57,11 +59,14 @@ export function submitWithServerErrors<TFields extends FieldValues, TValues>(
   form: UseFormReturn<TFields, unknown, TValues>,
   send: (values: TValues) => Promise<unknown>,
 ) {
-  return form.handleSubmit(async (values) => {
-    try {
-      await send(values);
-    } catch (error) {
-      applyServerErrors(form, error);
-    }
-  });
+  return enterSubmits(
+    form.control,
+    form.handleSubmit(async (values) => {
+      try {
+        await send(values);
+      } catch (error) {
+        applyServerErrors(form, error);
+      }
+    }),
+  );
 }

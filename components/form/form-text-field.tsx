@@ -1,6 +1,7 @@
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 
 import { TextField, type TextFieldProps } from '../ui/text-field';
+import { submitOnEnterOf } from './enter-submits';
 
 export type FormTextFieldProps<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'error'> & {
   control: Control<T>;
@@ -23,6 +24,7 @@ export function FormTextField<T extends FieldValues>({ control, name, upperCase 
       }}
       error={fieldState.error?.message}
       autoCapitalize={upperCase ? 'characters' : rest.autoCapitalize}
+      onSubmitEditing={rest.multiline ? undefined : submitOnEnterOf(control)}
       {...rest}
     />
   );

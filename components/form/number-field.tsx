@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 
 import { TextField, type TextFieldProps } from '../ui/text-field';
+import { submitOnEnterOf } from './enter-submits';
 import { parseNumberText } from './number-text';
 
 export type NumberFieldProps<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'error'> & {
@@ -55,6 +56,7 @@ export function NumberField<T extends FieldValues>({ control, name, scale = 1, e
         onBlur?.(event);
       }}
       error={fieldState.error?.message ?? error}
+      onSubmitEditing={submitOnEnterOf(control)}
       {...rest}
     />
   );

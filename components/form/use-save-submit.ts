@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { FieldValues, UseFormReturn } from 'react-hook-form';
 
 import { applyServerErrors } from './apply-server-errors';
+import { enterSubmits } from './enter-submits';
 
 /**
  * The submit handler of a form that edits saved values: a refusal's messages go beside their
@@ -26,5 +27,6 @@ export function useSaveSubmit<TFields extends FieldValues, TValues>(
       applyServerErrors(form, error);
     }
   });
+  enterSubmits(form.control, submit);
   return { submit, saved: saved && !form.formState.isDirty };
 }

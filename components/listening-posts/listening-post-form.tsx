@@ -5,6 +5,7 @@ import type { z } from 'zod';
 
 import { listeningPostInput } from '@/shared/schemas/reception';
 
+import { enterSubmits } from '../form/enter-submits';
 import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
@@ -28,6 +29,7 @@ export function ListeningPostForm({ onSubmit, onCancel }: ListeningPostFormProps
       applyServerErrors(form, error);
     }
   });
+  enterSubmits(form.control, submit);
   const message = serverMessage(form.formState.errors);
   return (
     <View style={styles.form}>

@@ -8,6 +8,7 @@ import { ApiError } from '@/shared/api/client';
 import { validateSchedule, type ScheduleIssue } from '@/shared/domain/schedule';
 import { scheduleInput, type ScheduleValues, type Station, type Unit } from '@/shared/schemas';
 
+import { enterSubmits } from '../form/enter-submits';
 import { FormTextField } from '../form/form-text-field';
 import { NumberField } from '../form/number-field';
 import { numberFieldErrors } from '../form/number-text';
@@ -114,6 +115,7 @@ export function ScheduleEditor({
       if (leftover.length || Object.keys(error.fields).length === 0) setFormMessage(leftover.join(' ') || error.message);
     }
   });
+  enterSubmits(form.control, submit);
 
   const firstUsable = choices.find((c) => c.usable);
   const addStep = () => steps.append({ bandId: firstUsable?.bandId ?? '20m', slots: 1, activeHoursUtc: null });

@@ -6,6 +6,7 @@ import type { z } from 'zod';
 import { LICENCE_REGIONS, type LicenceRegion } from '@/shared/domain/bands';
 import { regionLabels, stationInput, type Unit } from '@/shared/schemas';
 
+import { enterSubmits } from '../form/enter-submits';
 import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { Button } from '../ui/button';
@@ -54,6 +55,7 @@ export function StationForm({ defaultValues, submitLabel = 'Save station', onSub
       applyServerErrors(form, error);
     }
   });
+  enterSubmits(form.control, submit);
   const message = serverMessage(form.formState.errors);
   return (
     <View style={styles.form}>

@@ -17,7 +17,7 @@ export type TextFieldProps = Omit<TextInputProps, 'style'> & {
 
 /** The app's only text input: a label above, the input, and a hint or the field's error below it. */
 export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField(
-  { label, error, hint, mono, multiline, style, onFocus, onBlur, ...rest },
+  { label, error, hint, mono, multiline, style, onFocus, onBlur, secureTextEntry, autoCapitalize, autoCorrect, spellCheck, ...rest },
   ref,
 ) {
   const { colors } = useAppTheme();
@@ -50,6 +50,11 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
             fontFamily: mono ? fonts.mono : fonts.regular,
           },
         ]}
+        secureTextEntry={secureTextEntry}
+        // a password is typed exactly: no spell-check, correction or capitals
+        autoCapitalize={autoCapitalize ?? (secureTextEntry ? 'none' : undefined)}
+        autoCorrect={autoCorrect ?? (secureTextEntry ? false : undefined)}
+        spellCheck={spellCheck ?? (secureTextEntry ? false : undefined)}
         {...rest}
       />
       <FieldMessage error={error} hint={hint} />

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { bandFor, type BandId, type LicenceRegion } from '@/shared/domain';
 import { calibrationInput, measurementInput, type CalibrationInput, type MeasurementInput } from '@/shared/schemas';
 
+import { enterSubmits } from '../form/enter-submits';
 import { applyServerErrors, serverMessage } from '../form/apply-server-errors';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
@@ -81,6 +82,7 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
       applyServerErrors(form, error);
     }
   });
+  enterSubmits(form.control, propose);
 
   const accept = async () => {
     if (!proposal) return;
