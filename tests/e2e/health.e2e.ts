@@ -173,7 +173,7 @@ for (const viewport of VIEWPORTS) {
         await screenshot(page, `e2e-station-health-${viewport.name}`);
 
         await page.goto(`${BASE_URL}/settings`);
-        await page.getByRole('button', { name: 'Sign out' }).click();
+        await page.getByRole('button', { name: 'Sign out', exact: true }).click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
         await signIn(page, 'admin@faintline.example');
         await visibleText(page, /Hanne Stoll/).waitFor();

@@ -49,7 +49,7 @@ for (const viewport of VIEWPORTS) {
         await callsign.fill('Q1IMW'); // the demo operator as the other tests expect her
         await page.getByRole('button', { name: 'Save account' }).click();
         await visibleText(page, 'Saved.').waitFor();
-        await page.getByRole('button', { name: 'Sign out' }).click();
+        await page.getByRole('button', { name: 'Sign out', exact: true }).click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
         const me = await page.evaluate(async () => (await fetch('/api/auth/me')).status);
         assert.equal(me, 401);

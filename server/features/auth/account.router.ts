@@ -7,7 +7,7 @@ import type { Config } from '../../config';
 import { AppError } from '../../lib/app-error';
 import type { Logger } from '../../lib/logger';
 import type { Mailer } from '../../mail/mailer';
-import { currentUser } from '../../middleware/auth';
+import { currentUser, requireSignedIn } from '../../middleware/auth';
 import type { FileStorage } from '../../storage';
 import { removeStored } from '../units/photos.service';
 import * as account from './account.service';
@@ -34,7 +34,7 @@ export function accountRouter({ config, sequelize, mailer, logger, storage }: De
     handler: (_req, _res, next) => next(new AppError('rate-limited', 'Too many wrong passwords. Wait 15 minutes and try again.')),
   });
 
-  router.post('/password', passwordGuesses, async (req, res) => {
+  router.post('/password', requireSignedIn, passwordGuesses, async (req, res) => {
     const user = currentUser(req);
     const ended = await account.changePassword(sequelize, user, passwordChangeInput.parse(req.body), config.BCRYPT_COST, req.sessionID);
     res.json({ ended } satisfies SessionsEndedAnswer);
@@ -49,7 +49,7 @@ export function accountRouter({ config, sequelize, mailer, logger, storage }: De
     res.json(await account.pendingEmailChange(currentUser(req)));
   });
 
-  router.post('/email-change', passwordGuesses, async (req, res) => {
+  router.post('/email-change', requireSignedIn, passwordGuesses, async (req, res) => {
     const user = currentUser(req);
     const change = await account.requestEmailChange(sequelize, user, emailChangeInput.parse(req.body));
     res.status(202).json({
@@ -83,7 +83,7 @@ export function accountRouter({ config, sequelize, mailer, logger, storage }: De
     res.json(await account.deletionPreview(sequelize, currentUser(req)));
   });
 
-  router.post('/account/delete', passwordGuesses, async (req, res) => {
+  router.post('/account/delete', requireSignedIn, passwordGuesses, async (req, res) => {
     const user = currentUser(req);
     const deleted = await account.deleteAccount(sequelize, user, accountDeleteInput.parse(req.body));
     // The session's row is already gone with the others; this request's session and cookie go too.
