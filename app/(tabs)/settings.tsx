@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useState } from 'react';
 
 import { DeleteAccountCard, SignInCards } from '@/components/account/account-cards';
-import { deletionWords } from '@/components/account/deletion-words';
+import { deletionSummary } from '@/components/account/deletion-words';
 import { endedSessionsWords } from '@/components/account/password-form';
 import { useDeleteAccountMutation, useDeletionPreviewQuery, useEndOtherSessionsMutation } from '@/components/account/queries';
 import { SessionsCard } from '@/components/account/sessions-card';
@@ -49,7 +49,7 @@ export default function SettingsRoute() {
             {...deletion.dialog}
             destructive
             title="Delete your account for good?"
-            message={`${preview ? deletionWords(preview).join(' ') : ''} This cannot be undone.`}
+            message={deletionSummary(preview)}
             confirmLabel="Delete my account"
             onConfirm={() => deletion.asking && deletion.confirm(deletion.asking)}
           />
@@ -61,7 +61,6 @@ export default function SettingsRoute() {
       </Text>
       <Card>
         <Text variant="heading">Account</Text>
-        <Row label="E-mail" value={user?.email ?? '—'} />
         <Row label="Clubs" value={user?.clubs.length ? user.clubs.map((club) => club.clubName).join(', ') : 'None'} />
         {user ? (
           <ProfileForm

@@ -49,7 +49,8 @@ export function DeleteAccountForm({ preview, onAsk }: DeleteAccountFormProps) {
 }
 
 const styles = StyleSheet.create({
-  form: { gap: space.lg },
+  // long lines of input are hard to read on a wide screen
+  form: { gap: space.lg, maxWidth: 640 },
   list: { gap: space.xs },
   button: { alignSelf: 'flex-start' },
 });

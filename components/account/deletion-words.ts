@@ -1,14 +1,19 @@
 import type { AccountDeletionPreview } from '@/shared/api/answers';
 
-const count = (n: number, one: string, many: string) => `${n === 0 ? 'no' : n} ${n === 1 ? one : many}`;
+const things = (n: number, one: string, many: string) => (n === 1 ? `1 ${one}` : `${n} ${many}`);
 
-/** What deleting the account does, item by item, in the words the card and the dialog show. */
+/** What deleting the account does, item by item, in the words the card shows. */
 export function deletionWords(preview: AccountDeletionPreview): string[] {
+  const { stations, deviceTokens, units, listeningPosts } = preview;
   const lines = [
-    `Your ${count(preview.stations, 'station', 'stations')} go, with their schedules, bands, calibration, heartbeats and alerts` +
-      (preview.deviceTokens ? `; ${count(preview.deviceTokens, 'device token stops', 'device tokens stop')} working at once.` : '.'),
-    `Your ${count(preview.units, 'unit', 'units')} and their photos go.`,
-    `Your ${count(preview.listeningPosts, 'listening post', 'listening posts')} go; their tokens stop working.`,
+    stations === 0
+      ? 'You have no stations.'
+      : `Your ${stations === 1 ? 'station goes' : `${stations} stations go`}, with schedules, bands, calibration, heartbeats and alerts` +
+        (deviceTokens ? `; ${deviceTokens === 1 ? 'its device token stops' : `${deviceTokens} device tokens stop`} working at once.` : '.'),
+    units === 0 ? 'You have no units.' : `Your ${units === 1 ? 'unit and its photos go' : `${units} units and their photos go`}.`,
+    listeningPosts === 0
+      ? 'You have no listening posts.'
+      : `Your ${listeningPosts === 1 ? 'listening post goes' : `${listeningPosts} listening posts go`}; their tokens stop working.`,
     'Reception reports stay in the shared record of what was heard, without your name.',
   ];
   for (const club of preview.clubs) {
@@ -19,4 +24,16 @@ export function deletionWords(preview: AccountDeletionPreview): string[] {
   }
   lines.push('Your own change log and notices go; club logs keep their entries. You are signed out everywhere.');
   return lines;
+}
+
+/** The last question's short form: what goes, and that it cannot be undone. */
+export function deletionSummary(preview: AccountDeletionPreview | undefined): string {
+  if (!preview) return 'Your account and everything in it go. This cannot be undone.';
+  const goes = [
+    things(preview.stations, 'station', 'stations'),
+    things(preview.units, 'unit', 'units'),
+    things(preview.listeningPosts, 'listening post', 'listening posts'),
+  ].join(', ');
+  const clubs = preview.clubs.length ? ` You leave ${things(preview.clubs.length, 'club', 'clubs')}.` : '';
+  return `Your account goes with ${goes}.${clubs} Reception reports stay. This cannot be undone.`;
 }

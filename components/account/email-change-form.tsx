@@ -34,9 +34,7 @@ export function EmailChangeForm({ currentEmail, pending, sentMessage, onSubmit, 
   const message = serverMessage(form.formState.errors);
   return (
     <View style={styles.form}>
-      <Text>
-        You sign in with <Text variant="label">{currentEmail}</Text>. Mail about your account goes there.
-      </Text>
+      <Text>{`You sign in with ${currentEmail}. Mail about your account goes there.`}</Text>
       {sentMessage ? <Notice tone="success" message={sentMessage} /> : null}
       {pending ? (
         <View style={styles.pending}>
@@ -74,7 +72,8 @@ export function EmailChangeForm({ currentEmail, pending, sentMessage, onSubmit, 
 }
 
 const styles = StyleSheet.create({
-  form: { gap: space.lg },
+  // long lines of input are hard to read on a wide screen
+  form: { gap: space.lg, maxWidth: 640 },
   pending: { gap: space.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.lg },
   button: { alignSelf: 'flex-start' },

@@ -56,6 +56,7 @@ export function PasswordForm({ onSubmit }: PasswordFormProps) {
 }
 
 const styles = StyleSheet.create({
-  form: { gap: space.lg },
+  // long lines of input are hard to read on a wide screen
+  form: { gap: space.lg, maxWidth: 640 },
   button: { alignSelf: 'flex-start' },
 });
