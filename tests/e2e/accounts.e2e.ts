@@ -118,8 +118,10 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, `You sign in with ${moved}`).waitFor();
 
         // — "Forgot password" carries the typed e-mail over
-        await Promise.all([page.waitForResponse((r) => r.url().endsWith('/api/auth/sign-out')), button(page, 'Sign out').click()]);
-        await page.goto(`${BASE_URL}/sign-in`);
+        // (a fresh load, so signing out lands on the sign-in screen rather than the confirmation page below in the stack)
+        await page.goto(`${BASE_URL}/settings`);
+        await button(page, 'Sign out').click();
+        await page.getByRole('button', { name: 'Sign in' }).waitFor();
         await emailField(page).fill(moved);
         await page.getByRole('link', { name: 'Forgot your password?' }).click();
         await page.waitForURL(/\/forgot-password/);

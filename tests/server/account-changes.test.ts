@@ -79,6 +79,8 @@ describe('change e-mail', () => {
     expect((await agent.get('/api/auth/me')).body.email).toBe(email);
     expect((await signIn(newEmail, PASSWORD)).status).toBe(401);
 
+    await request(server.app).post('/api/auth/password-reset').send({ email });
+    const resetMail = await server.smtp.waitFor((m) => m.to.includes(email) && /Reset/.test(m.subject));
     const mail = await server.smtp.waitFor((m) => m.to.includes(newEmail));
     expect(mail.text).toContain('/confirm-email?token=');
     const confirmed = await request(server.app)
@@ -91,6 +93,11 @@ describe('change e-mail', () => {
     const notice = await server.smtp.waitFor((m) => m.to.includes(email) && /e-mail was changed/.test(m.subject));
     expect(notice.text).toContain(newEmail);
     expect((await agent.get('/api/auth/email-change')).body).toBeNull();
+    // A reset link mailed to the old address no longer works.
+    const reset = await request(server.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token: tokenIn(resetMail.text), password: 'taken-over-password' });
+    expect(reset.status).toBe(400);
 
     // The link works once.
     const again = await request(server.app)

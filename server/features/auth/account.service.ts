@@ -120,6 +120,8 @@ export async function confirmEmailChange(db: TransactionRunner, input: EmailConf
       const oldEmail = user.email;
       await users.update(user.id, { email: change.newEmail }, transaction);
       await emailChanges.useAllOf(user.id, now, transaction);
+      // Reset links mailed to the old address stop working.
+      await resets.useAllOf(user.id, now, transaction);
       await audit.record(
         {
           actor: user,
