@@ -171,7 +171,14 @@ async function main() {
   execSync(`bash server/scripts/db.sh reset ${DB}`, { cwd: ROOT, stdio: 'ignore' });
   const server = spawn(
     process.execPath,
-    [`--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`, '--import', 'tsx', 'server/index.ts'],
+    [
+      `--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`,
+      // e.g. BENCH_SERVER_NODE_ARGS="--cpu-prof --cpu-prof-dir=.cache/prof" to profile the server
+      ...(process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean),
+      '--import',
+      'tsx',
+      'server/index.ts',
+    ],
     {
       cwd: ROOT,
       env: {
