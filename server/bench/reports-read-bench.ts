@@ -188,9 +188,13 @@ async function scene() {
  */
 async function generate(sequelize: Sequelize, ownerId: number, firstStationId: number, startMs: number) {
   const started = Date.now();
-  await sequelize.query('INSERT INTO reception_batches (id, importerId, accepted, duplicates, receivedAt) VALUES (1, ?, 0, 0, NOW())', {
-    replacements: [ownerId],
-  });
+  const [batchId] = await sequelize.query(
+    'INSERT INTO reception_batches (importerId, accepted, duplicates, receivedAt) VALUES (?, 0, 0, NOW())',
+    {
+      replacements: [ownerId],
+      type: QueryTypes.INSERT,
+    },
+  );
   const start = new Date(startMs).toISOString().slice(0, 19).replace('T', ' ');
   const step = 1_000_000;
   await sequelize.query('SET SESSION unique_checks = 0');
@@ -209,7 +213,7 @@ async function generate(sequelize: Sequelize, ownerId: number, firstStationId: n
               IF(x.t % 2 = 0, 14097100, 7040100) + (x.n % 7) - 3,
               0,
               200 + (x.s * 31 + x.r * 97) % 14000, (x.s * 13 + x.r * 53) % 360, (x.n % 7) - 3,
-              ${firstStationId} + x.s, 0, ${ownerId}, 1
+              ${firstStationId} + x.s, 0, ${ownerId}, ${Number(batchId)}
          FROM (SELECT y.n, y.n % ${STATIONS} AS s, y.t,
                       ((y.n % ${STATIONS}) * 7 + IF(y.k % 2 = 0, y.t % ${RECEIVERS_PER_STATION},
                           (y.t % ${RECEIVERS_PER_STATION} + 1 + FLOOR(y.t / ${RECEIVERS_PER_STATION}) % ${RECEIVERS_PER_STATION - 1}) % ${RECEIVERS_PER_STATION}))
@@ -380,6 +384,8 @@ async function main() {
         DEVICE_RATE_LIMIT: '100000000',
         ALERTS_CRON: '0 0 1 1 *',
         BCRYPT_COST: '4',
+        // the bench's own scene only: no demo stations or reports beside it
+        FAINTLINE_SEED_DEMO: '0',
       },
       stdio: ['ignore', 'ignore', 'inherit'],
     },
