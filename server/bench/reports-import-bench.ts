@@ -117,7 +117,15 @@ function cpuSeconds(pid: number) {
     return 0;
   }
 }
-const dbPid = () => Number(readFileSync(path.join(ROOT, '.data/mariadb/mysqld.pid'), 'utf8').trim()) || 0;
+const DB_DIR = process.env.FAINTLINE_DB_DIR ?? path.join(ROOT, '.data/mariadb');
+const dbPid = () => Number(readFileSync(path.join(DB_DIR, 'mysqld.pid'), 'utf8').trim()) || 0;
+/** As root over the private socket: settings the app's user may not change. */
+const asRoot = (sql: string) =>
+  execSync(`mariadb --no-defaults --socket=${path.join(DB_DIR, 'mysqld.sock')} -uroot -N -e "${sql}"`, { cwd: ROOT })
+    .toString()
+    .trim();
+/** The bench database's buffer pool for the run: the table and its indexes stay in memory as they grow (default 1 GB). */
+const BUFFER_POOL_MB = Number(process.env.BENCH_BUFFER_POOL_MB ?? 1024);
 const loadAverage = () => readFileSync('/proc/loadavg', 'utf8').split(' ')[0];
 
 async function waitFor(child: ChildProcess) {
@@ -169,9 +177,18 @@ async function main() {
 
   execSync('bash server/scripts/db.sh start', { cwd: ROOT, stdio: 'ignore' });
   execSync(`bash server/scripts/db.sh reset ${DB}`, { cwd: ROOT, stdio: 'ignore' });
+  const poolBefore = asRoot('SELECT @@innodb_buffer_pool_size');
+  asRoot(`SET GLOBAL innodb_buffer_pool_size = ${BUFFER_POOL_MB * 1024 * 1024}`);
   const server = spawn(
     process.execPath,
-    [`--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`, '--import', 'tsx', 'server/index.ts'],
+    [
+      `--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`,
+      // e.g. BENCH_SERVER_NODE_ARGS="--cpu-prof --cpu-prof-dir=.cache/prof" to profile the server
+      ...(process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean),
+      '--import',
+      'tsx',
+      'server/index.ts',
+    ],
     {
       cwd: ROOT,
       env: {
@@ -268,6 +285,7 @@ async function main() {
   } finally {
     clearInterval(sampler);
     server.kill('SIGTERM');
+    asRoot(`SET GLOBAL innodb_buffer_pool_size = ${poolBefore}`);
   }
 }
 

@@ -16,6 +16,7 @@
 // @ts-expect-error autocannon ships no types
 import autocannon from 'autocannon';
 import { execSync, spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { Agent, request, type IncomingHttpHeaders } from 'node:http';
 import path from 'node:path';
 import { QueryTypes, type Sequelize } from 'sequelize';
@@ -83,6 +84,33 @@ async function waitFor(child: ChildProcess) {
 const pct = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
 const seconds = (fromMs: number) => ((Date.now() - fromMs) / 1000).toFixed(1);
 const log = (text: string) => process.stderr.write(`${text}\n`);
+
+const CLOCK_TICKS_PER_S = Number(execSync('getconf CLK_TCK').toString().trim()) || 100;
+/** User plus system CPU seconds a process has used so far (0 when it cannot be read). */
+function cpuSeconds(pid: number | undefined) {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+    return (Number(fields[11]) + Number(fields[12])) / CLOCK_TICKS_PER_S;
+  } catch {
+    return 0;
+  }
+}
+const DB_DIR = process.env.FAINTLINE_DB_DIR ?? path.join(ROOT, '.data/mariadb');
+const dbPid = () => Number(readFileSync(path.join(DB_DIR, 'mysqld.pid'), 'utf8').trim()) || 0;
+let serverPid: number | undefined;
+const loadAverage = () => readFileSync('/proc/loadavg', 'utf8').split(' ')[0];
+/** CPU seconds of the server and of MariaDB from here on, and the load average beside them (the machine is shared). */
+function cpuMeter(serverPid: number | undefined) {
+  const [server0, db0, load0] = [cpuSeconds(serverPid), cpuSeconds(dbPid()), loadAverage()];
+  return () => ({ server: cpuSeconds(serverPid) - server0, db: cpuSeconds(dbPid()) - db0, load: `${load0} → ${loadAverage()}` });
+}
+/** As root over the private socket: settings the app's user may not change. */
+const asRoot = (sql: string) =>
+  execSync(`mariadb --no-defaults --socket=${path.join(DB_DIR, 'mysqld.sock')} -uroot -N -e "${sql}"`, { cwd: ROOT })
+    .toString()
+    .trim();
+/** The bench database's buffer pool: the reports' hot pages and the aggregates stay in memory (default 2 GB). */
+const BUFFER_POOL_MB = Number(process.env.BENCH_BUFFER_POOL_MB ?? 2048);
 
 /** One operator with 100 stations through the API; returns the session cookie and the stations. */
 async function scene() {
@@ -160,9 +188,13 @@ async function scene() {
  */
 async function generate(sequelize: Sequelize, ownerId: number, firstStationId: number, startMs: number) {
   const started = Date.now();
-  await sequelize.query('INSERT INTO reception_batches (id, importerId, accepted, duplicates, receivedAt) VALUES (1, ?, 0, 0, NOW())', {
-    replacements: [ownerId],
-  });
+  const [batchId] = await sequelize.query(
+    'INSERT INTO reception_batches (importerId, accepted, duplicates, receivedAt) VALUES (?, 0, 0, NOW())',
+    {
+      replacements: [ownerId],
+      type: QueryTypes.INSERT,
+    },
+  );
   const start = new Date(startMs).toISOString().slice(0, 19).replace('T', ' ');
   const step = 1_000_000;
   await sequelize.query('SET SESSION unique_checks = 0');
@@ -181,7 +213,7 @@ async function generate(sequelize: Sequelize, ownerId: number, firstStationId: n
               IF(x.t % 2 = 0, 14097100, 7040100) + (x.n % 7) - 3,
               0,
               200 + (x.s * 31 + x.r * 97) % 14000, (x.s * 13 + x.r * 53) % 360, (x.n % 7) - 3,
-              ${firstStationId} + x.s, 0, ${ownerId}, 1
+              ${firstStationId} + x.s, 0, ${ownerId}, ${Number(batchId)}
          FROM (SELECT y.n, y.n % ${STATIONS} AS s, y.t,
                       ((y.n % ${STATIONS}) * 7 + IF(y.k % 2 = 0, y.t % ${RECEIVERS_PER_STATION},
                           (y.t % ${RECEIVERS_PER_STATION} + 1 + FLOOR(y.t / ${RECEIVERS_PER_STATION}) % ${RECEIVERS_PER_STATION - 1}) % ${RECEIVERS_PER_STATION}))
@@ -192,20 +224,31 @@ async function generate(sequelize: Sequelize, ownerId: number, firstStationId: n
     log(`  ${to + 1} reports generated (${seconds(started)} s)`);
   }
   await sequelize.query('SET SESSION unique_checks = 1');
-  await buildAggregates(sequelize, firstStationId);
+  await buildAggregates(sequelize);
   log(`  whole generation ${seconds(started)} s`);
 }
 
-/** The two aggregate tables from the reports, a station at a time (each GROUP BY stays in memory). */
-async function buildAggregates(sequelize: Sequelize, firstStationId: number) {
+/**
+ * The two aggregate tables from the reports in one pass over the table in primary-key order, 1 M rows a
+ * statement: each chunk is a sequential range read (the reports were generated in time order, every station
+ * interleaved), grouped in memory and merged into the aggregates with ON DUPLICATE KEY UPDATE, so a slot or
+ * receiver-day cut by a chunk boundary still adds up. Reading a station at a time instead walks the whole table
+ * once per station through the secondary index.
+ */
+async function buildAggregates(sequelize: Sequelize) {
   const aggregates = Date.now();
   await sequelize.query('SET SESSION tmp_table_size = 268435456, max_heap_table_size = 268435456');
-  for (let s = 0; s < STATIONS; s += 1) {
-    const range = [firstStationId + s, firstStationId + s];
+  const [{ lo, hi }] = await sequelize.query<{ lo: number; hi: number }>('SELECT MIN(id) AS lo, MAX(id) AS hi FROM reception_reports', {
+    type: QueryTypes.SELECT,
+  });
+  const step = 1_000_000;
+  for (let from = Number(lo); from <= Number(hi); from += step) {
+    const range = [from, from + step - 1];
     await sequelize.query(
       `INSERT INTO reception_slot_counts (stationId, slotStart, bandId, reports, bestSnrDb)
          SELECT stationId, slotStart, bandId, COUNT(*), MAX(snrDb) FROM reception_reports
-          WHERE stationId BETWEEN ? AND ? GROUP BY stationId, slotStart, bandId`,
+          WHERE id BETWEEN ? AND ? AND stationId IS NOT NULL GROUP BY stationId, slotStart, bandId
+       ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb))`,
       { replacements: range },
     );
     await sequelize.query(
@@ -213,10 +256,13 @@ async function buildAggregates(sequelize: Sequelize, firstStationId: number) {
          (stationId, day, bandId, rxCallsign, rxLocator, distanceKm, bearingDeg, reports, bestSnrDb, bestSnrPerWattDb, bestKmPerWatt, lastSlotStart)
          SELECT stationId, DATE(slotStart), bandId, rxCallsign, MAX(rxLocator), MAX(distanceKm), MAX(bearingDeg), COUNT(*), MAX(snrDb),
                 MAX(snrDb - (txPowerDbm - 30)), MAX(distanceKm / POW(10, (txPowerDbm - 30) / 10)), MAX(slotStart)
-           FROM reception_reports WHERE stationId BETWEEN ? AND ? GROUP BY stationId, DATE(slotStart), bandId, rxCallsign`,
+           FROM reception_reports WHERE id BETWEEN ? AND ? AND stationId IS NOT NULL GROUP BY stationId, DATE(slotStart), bandId, rxCallsign
+       ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb)),
+         bestSnrPerWattDb = GREATEST(bestSnrPerWattDb, VALUES(bestSnrPerWattDb)), bestKmPerWatt = GREATEST(bestKmPerWatt, VALUES(bestKmPerWatt)),
+         lastSlotStart = GREATEST(lastSlotStart, VALUES(lastSlotStart))`,
       { replacements: range },
     );
-    if (s % 10 === 9) log(`  aggregates of ${s + 1} stations built (${seconds(aggregates)} s)`);
+    log(`  aggregates of reports up to id ${range[1]} built (${seconds(aggregates)} s)`);
   }
 }
 
@@ -235,6 +281,7 @@ async function ingest(cookie: string, stations: { callsign: string }[], sequeliz
   const nowSlot = Math.floor(Date.now() / SLOT_MS) * SLOT_MS;
   const endAt = Date.now() + SECONDS * 1000;
   const started = Date.now();
+  const meter = cpuMeter(serverPid);
   await Promise.all(
     tokens.map(async (token, p) => {
       let k = 0;
@@ -264,6 +311,7 @@ async function ingest(cookie: string, stations: { callsign: string }[], sequeliz
     }),
   );
   const elapsedS = (Date.now() - started) / 1000;
+  const cpu = meter();
   const [{ n: stored }] = await sequelize.query<{ n: number }>(
     `SELECT COUNT(*) AS n FROM reception_reports r JOIN reception_batches b ON b.id = r.batchId WHERE b.listeningPostId IS NOT NULL`,
     { type: QueryTypes.SELECT },
@@ -277,15 +325,22 @@ async function ingest(cookie: string, stations: { callsign: string }[], sequeliz
     batches: latencies.length,
     p50: pct(latencies, 50),
     p99: pct(latencies, 99),
+    cpu,
   };
 }
 
 async function read(name: string, pathName: string, cookie: string) {
   const check = await call('GET', pathName, undefined, { cookie });
   if (check.status !== 200) throw new Error(`${name}: ${check.status} ${check.body.slice(0, 300)}`);
+  const meter = cpuMeter(serverPid);
   const result = await autocannon({ url: `${ORIGIN}${pathName}`, headers: { cookie }, connections: 4, duration: SECONDS });
+  const cpu = meter();
+  const requests = Math.max(1, result.requests.total);
   return {
     name,
+    serverCpuMs: (cpu.server * 1000) / requests,
+    dbCpuMs: (cpu.db * 1000) / requests,
+    load: cpu.load,
     rps: result.requests.average,
     p50: result.latency.p50,
     p99: result.latency.p99,
@@ -296,12 +351,24 @@ async function read(name: string, pathName: string, cookie: string) {
 
 async function main() {
   execSync('bash server/scripts/db.sh start', { cwd: ROOT, stdio: 'ignore' });
+  const poolBefore = asRoot('SELECT @@innodb_buffer_pool_size');
+  asRoot(`SET GLOBAL innodb_buffer_pool_size = ${BUFFER_POOL_MB * 1024 * 1024}`);
+  log(
+    `buffer pool ${Math.round(Number(asRoot('SELECT @@innodb_buffer_pool_size')) / 1048576)} MB for the run (was ${Math.round(Number(poolBefore) / 1048576)} MB)`,
+  );
   if (!REUSE) execSync(`bash server/scripts/db.sh reset ${DB}`, { cwd: ROOT, stdio: 'ignore' });
   const sequelize = createSequelize(DB_URL);
   await migrateToLatest(sequelize);
   const server = spawn(
     process.execPath,
-    [`--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`, '--import', 'tsx', 'server/index.ts'],
+    [
+      `--max-old-space-size=${process.env.SERVER_HEAP_MB ?? 512}`,
+      // e.g. BENCH_SERVER_NODE_ARGS="--cpu-prof --cpu-prof-dir=.cache/prof" to profile the server
+      ...(process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean),
+      '--import',
+      'tsx',
+      'server/index.ts',
+    ],
     {
       cwd: ROOT,
       env: {
@@ -317,10 +384,13 @@ async function main() {
         DEVICE_RATE_LIMIT: '100000000',
         ALERTS_CRON: '0 0 1 1 *',
         BCRYPT_COST: '4',
+        // the bench's own scene only: no demo stations or reports beside it
+        FAINTLINE_SEED_DEMO: '0',
       },
       stdio: ['ignore', 'ignore', 'inherit'],
     },
   );
+  serverPid = server.pid;
   try {
     await waitFor(server);
     let cookie: string;
@@ -416,16 +486,23 @@ async function main() {
     console.log(
       `\nlistening-post ingest: ${POSTS} posts at once, batches of ${BATCH}, ${ingested.elapsedS.toFixed(1)} s: ${ingested.batches} batches, ${ingested.acknowledged} reports acknowledged = ${rate.toFixed(0)} reports/s (target ≥ 5000), stored ${ingested.stored} (${ingested.stored >= ingested.acknowledged ? 'every acknowledged report stored' : 'SOME LOST'}), failed batches ${ingested.failed}; a batch p50 ${ingested.p50.toFixed(0)} ms, p99 ${ingested.p99.toFixed(0)} ms`,
     );
-    console.log('\nresults screen request                  req/s   p50 ms   p99 ms  errors  bytes   target p99 ≤ 300 ms');
+    const perMillion = (cpuS: number) => ((cpuS * 1e6) / Math.max(1, ingested.acknowledged)).toFixed(0);
+    console.log(
+      `  CPU per million reports: server ${perMillion(ingested.cpu.server)} s, MariaDB ${perMillion(ingested.cpu.db)} s; load average ${ingested.cpu.load} (on ${execSync('nproc').toString().trim()} cores)`,
+    );
+    console.log(
+      '\nresults screen request                  req/s   p50 ms   p99 ms  errors  bytes  CPU ms/req server+db  load avg   target p99 ≤ 300 ms',
+    );
     for (const r of reads) {
       console.log(
-        `${r.name.padEnd(38)} ${r.rps.toFixed(0).padStart(6)} ${String(r.p50).padStart(8)} ${String(r.p99).padStart(8)} ${String(r.errors).padStart(7)} ${String(r.bytes).padStart(6)}   ${r.p99 <= 300 ? 'met' : 'NOT met'}`,
+        `${r.name.padEnd(38)} ${r.rps.toFixed(0).padStart(6)} ${String(r.p50).padStart(8)} ${String(r.p99).padStart(8)} ${String(r.errors).padStart(7)} ${String(r.bytes).padStart(6)}  ${`${r.serverCpuMs.toFixed(1)}+${r.dbCpuMs.toFixed(1)}`.padStart(20)}  ${r.load.padStart(12)}   ${r.p99 <= 300 ? 'met' : 'NOT met'}`,
       );
     }
   } finally {
     server.kill('SIGTERM');
     agent.destroy();
     await sequelize.close();
+    asRoot(`SET GLOBAL innodb_buffer_pool_size = ${poolBefore}`);
   }
 }
 

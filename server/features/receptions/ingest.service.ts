@@ -18,10 +18,26 @@ export const MATCH_SEPARATION_HZ = 4;
 
 export type ReportToIngest = ReceptionReportValues & { rxCallsign: string; rxLocator: string };
 
-function pathOf(report: ReportToIngest) {
-  if (!report.txLocator) return { distanceKm: null, bearingDeg: null };
-  const path = pathBetweenLocators(report.txLocator, report.rxLocator);
-  return path.ok ? { distanceKm: path.distanceKm, bearingDeg: path.bearingDeg } : { distanceKm: null, bearingDeg: null };
+type PathFigures = { distanceKm: number | null; bearingDeg: number | null };
+const NO_PATH: PathFigures = { distanceKm: null, bearingDeg: null };
+/**
+ * Paths per transmitter and receiver locator pair: a receiver hears the same transmitters day after day, so the
+ * geodesic (the costly part of storing a report) is worked out once per pair. Bounded: emptied when full.
+ */
+const pathCache = new Map<string, PathFigures>();
+const PATH_CACHE_MAX = 200_000;
+
+function pathOf(report: ReportToIngest): PathFigures {
+  if (!report.txLocator) return NO_PATH;
+  const key = `${report.txLocator}|${report.rxLocator}`;
+  let found = pathCache.get(key);
+  if (!found) {
+    const path = pathBetweenLocators(report.txLocator, report.rxLocator);
+    found = path.ok ? { distanceKm: path.distanceKm, bearingDeg: path.bearingDeg } : NO_PATH;
+    if (pathCache.size >= PATH_CACHE_MAX) pathCache.clear();
+    pathCache.set(key, found);
+  }
+  return found;
 }
 
 type Match = { stationId: number | null; ambiguous: boolean; frequencyErrorHz: number | null };
@@ -69,8 +85,17 @@ export async function ingestReports(sequelize: Sequelize, reports: ReportToInges
   const plans = await stationPlans(sequelize, [...new Set(candidates.map((c) => c.stationId))], now.getTime());
   const none = new PlanMemo(null);
   const carriers = (stationId: number) => plans.get(stationId)?.memo ?? none;
+  // Candidates indexed by callsign and band once per batch, so each report looks at only the stations that fit it.
+  const byCallBand = new Map<string, MatchCandidate[]>();
+  for (const c of candidates) {
+    const key = `${c.callsign}|${c.bandId}`;
+    byCallBand.set(key, [...(byCallBand.get(key) ?? []), c]);
+  }
   const rows: StorableReport[] = reports.map((report) => {
     const slotMs = slotStartMs(Date.parse(report.slotUtc));
+    const fitting = byCallBand.get(`${report.txCallsign}|${report.bandId}`);
+    const path = pathOf(report);
+    const match = fitting ? matchReport(report, slotMs, fitting, carriers) : NO_MATCH;
     return {
       slotStartMs: slotMs,
       bandId: report.bandId,
@@ -82,8 +107,11 @@ export async function ingestReports(sequelize: Sequelize, reports: ReportToInges
       snrDb: report.snrDb,
       frequencyHz: report.frequencyHz,
       driftHz: report.driftHz ?? 0,
-      ...pathOf(report),
-      ...(candidates.length ? matchReport(report, slotMs, candidates, carriers) : NO_MATCH),
+      distanceKm: path.distanceKm,
+      bearingDeg: path.bearingDeg,
+      stationId: match.stationId,
+      ambiguous: match.ambiguous,
+      frequencyErrorHz: match.frequencyErrorHz,
     };
   });
   return storeReports(sequelize, rows, origin, now);

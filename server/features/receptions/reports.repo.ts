@@ -1,5 +1,5 @@
 /**
- * The reception report store: multi-row INSERT IGNORE (the decode key makes a repeat a no-op), then the
+ * The reception report store: a bulk INSERT IGNORE (the decode key makes a repeat a no-op), then the
  * aggregates the screens read are brought up to date from exactly the rows this batch added, all in one
  * transaction. Concurrent batches carrying the same decode wait on its key, so nothing is counted twice.
  */
@@ -46,8 +46,9 @@ const COLUMNS = [
   'importerId',
   'batchId',
 ] as const;
-/** Rows per INSERT statement (MariaDB's packet limit and placeholder count stay far away). */
+/** Rows per INSERT statement when the driver's bulk protocol is not at hand (placeholders stay far below the limits). */
 const ROWS_PER_STATEMENT = 1000;
+const INSERT_SQL = `INSERT IGNORE INTO reception_reports (${COLUMNS.join(',')}) VALUES (${COLUMNS.map(() => '?').join(',')})`;
 
 const toSqlTime = (ms: number) => new Date(ms).toISOString().slice(0, 19).replace('T', ' ');
 
@@ -73,17 +74,32 @@ function rowValues(r: StorableReport, importerId: number, batchId: number): unkn
   ];
 }
 
+type BulkResult = { affectedRows: number };
+/** The MariaDB connector's connection under a Sequelize transaction (Sequelize keeps it as `transaction.connection`). */
+type BulkConnection = { batch(sql: string, values: unknown[][]): Promise<BulkResult | BulkResult[]> };
+
+function bulkConnection(transaction: Transaction): BulkConnection | null {
+  const connection = (transaction as unknown as { connection?: Partial<BulkConnection> }).connection;
+  return connection && typeof connection.batch === 'function' ? (connection as BulkConnection) : null;
+}
+
+/**
+ * Stores the rows with the connector's bulk protocol: one prepared INSERT, the values sent in binary packets
+ * (no SQL text to build, escape and parse per row). Falls back to multi-row INSERT statements elsewhere.
+ */
 async function insertRows(sequelize: Sequelize, rows: StorableReport[], importerId: number, batchId: number, transaction: Transaction) {
+  const values = rows.map((r) => rowValues(r, importerId, batchId));
+  const bulk = bulkConnection(transaction);
+  if (bulk) {
+    const result = await bulk.batch(INSERT_SQL, values);
+    return (Array.isArray(result) ? result : [result]).reduce((sum, r) => sum + Number(r.affectedRows ?? 0), 0);
+  }
   let inserted = 0;
   const rowPlaceholder = `(${COLUMNS.map(() => '?').join(',')})`;
-  for (let start = 0; start < rows.length; start += ROWS_PER_STATEMENT) {
-    const chunk = rows.slice(start, start + ROWS_PER_STATEMENT);
+  for (let start = 0; start < values.length; start += ROWS_PER_STATEMENT) {
+    const chunk = values.slice(start, start + ROWS_PER_STATEMENT);
     const sql = `INSERT IGNORE INTO reception_reports (${COLUMNS.join(',')}) VALUES ${chunk.map(() => rowPlaceholder).join(',')}`;
-    const [, affected] = await sequelize.query(sql, {
-      replacements: chunk.flatMap((r) => rowValues(r, importerId, batchId)),
-      type: QueryTypes.INSERT,
-      transaction,
-    });
+    const [, affected] = await sequelize.query(sql, { replacements: chunk.flat(), type: QueryTypes.INSERT, transaction });
     inserted += Number(affected ?? 0);
   }
   return inserted;
@@ -134,7 +150,8 @@ export async function storeReports(
       },
     );
     const accepted = await insertRows(sequelize, rows, origin.importerId, Number(batchId), transaction);
-    if (accepted > 0) await updateAggregates(sequelize, Number(batchId), transaction);
+    // Only reports matched to one of our stations feed the aggregates: a batch of other transmitters skips that read.
+    if (accepted > 0 && rows.some((r) => r.stationId !== null)) await updateAggregates(sequelize, Number(batchId), transaction);
     const duplicates = rows.length - accepted;
     await sequelize.query('UPDATE reception_batches SET accepted = ?, duplicates = ? WHERE id = ?', {
       replacements: [accepted, duplicates, batchId],
