@@ -33,6 +33,7 @@ import { inboxRouter } from './mail/inbox.router';
 import type { Mailer } from './mail/mailer';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { originCheck } from './middleware/origin-check';
+import { uploadLimit } from './middleware/upload-limit';
 import { webAppRouter } from './web/static';
 
 export type AppDeps = {
@@ -133,6 +134,8 @@ export function createApp({
   });
   api.use('/auth', authRouter({ config, sequelize, mailer, logger }));
   api.use('/auth', accountRouter({ config, sequelize, mailer, logger, storage }));
+  const uploads = uploadLimit(config.UPLOADS_PER_USER);
+  for (const path of ['/units/:id/photos', '/reception-imports', '/reception-imports/preview']) api.post(path, uploads);
   const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
   api.use(receptionsRouter({ sequelize }));
   api.use('/listening-posts', listeningPostsRouter({ sequelize }));

@@ -30,6 +30,10 @@ const configSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default(''),
   S3_SECRET_ACCESS_KEY: z.string().default(''),
   DEVICE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  /** Unknown device or listening-post tokens one address may send in a minute before it is refused without a lookup. */
+  UNKNOWN_TOKENS_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
+  /** Photo and file uploads one account may start in 10 minutes. */
+  UPLOADS_PER_USER: z.coerce.number().int().min(1).default(20),
   DEVICE_OFFLINE_AFTER_S: z.coerce.number().int().min(1).default(300),
   DEVICE_CACHE_MS: z.coerce.number().int().min(0).default(2000),
   /** How often each process reads the other processes' station changes (0 turns the feed off: one process only). */

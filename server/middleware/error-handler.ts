@@ -66,6 +66,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (res.headersSent) return;
     if (status === 503) res.setHeader('Retry-After', '5');
+    if (status === 429 && !res.getHeader('Retry-After')) res.setHeader('Retry-After', '60');
     res.status(status).json(body);
   };
 }

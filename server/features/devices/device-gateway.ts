@@ -1,5 +1,4 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
-import { MemoryStore } from 'express-rate-limit';
 import { LRUCache } from 'lru-cache';
 import type { Sequelize } from 'sequelize';
 import type { ApiErrorBody } from '@/shared/api/contracts';
@@ -7,6 +6,8 @@ import { buildDeviceConfig, planWindowStart } from '@/shared/domain/workshop';
 import type { Config } from '../../config';
 import { AppError, statusOf } from '../../lib/app-error';
 import { onStationChanged } from '../../lib/change-feed';
+import { SlidingWindowStore } from '../../lib/sliding-window-store';
+import { createUnknownTokenGuard } from '../../lib/unknown-token-guard';
 import { planInputsOf } from '../schedules/schedules.service';
 import { stationById } from '../stations/stations.service';
 import { isDatabaseUnavailable, UNAVAILABLE_MESSAGE } from '../../lib/db-errors';
@@ -36,22 +37,25 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
     maxSize: config.DEVICE_CONFIG_CACHE_MB * 1024 * 1024,
     sizeCalculation: (r) => r.identity.body.length + r.gzip.body.length,
   });
-  const store = new MemoryStore();
+  const store = new SlidingWindowStore({ windowMs: RATE_WINDOW_MS });
+  const unknownTokens = createUnknownTokenGuard({ what: 'device', perAddressPerMinute: config.UNKNOWN_TOKENS_PER_ADDRESS });
   onStationChanged((stationId) => {
     if (stationId === 'all') known.clear();
     else for (const token of [...known.keys()]) if (known.peek(token)?.device.stationId === stationId) known.delete(token);
   });
 
-  async function authenticate(authorization: string | undefined): Promise<DeviceIdentity> {
+  /** `address` is the client's address: unknown tokens are counted and throttled per address. */
+  async function authenticate(authorization: string | undefined, address = ''): Promise<DeviceIdentity> {
     const match = /^Bearer\s+(\S+)$/i.exec(authorization ?? '');
     if (!match) throw new AppError('unauthenticated', 'Send the device token as "Authorization: Bearer <token>"');
     const token = match[1];
     const hit = known.get(token);
     if (hit && Date.now() - hit.at < config.DEVICE_CACHE_MS) return hit.device;
+    unknownTokens.screen(token, address);
     const device = await identify(sequelize, token);
     if (!device) {
       known.delete(token);
-      throw new AppError('unauthenticated', 'This device token is not valid (revoked or rotated?)');
+      throw unknownTokens.remember(token, address);
     }
     known.set(token, { device, at: Date.now() });
     return device;
@@ -93,7 +97,7 @@ export function createDeviceGateway({ sequelize, config }: { sequelize: Sequeliz
     }
   }
 
-  return { authenticate, config: config_, countRequest, store };
+  return { authenticate, config: config_, countRequest, store, unknownTokens };
 }
 
 export type DeviceGateway = ReturnType<typeof createDeviceGateway>;
@@ -135,7 +139,7 @@ function sendError(res: ServerResponse, error: unknown) {
         : new AppError('internal', 'Something went wrong on the server. It has been logged.');
   const body = JSON.stringify({ error: { code: appError.code, message: appError.message } } satisfies ApiErrorBody);
   res.writeHead(statusOf[appError.code], {
-    ...(appError.code === 'unavailable' ? { 'Retry-After': '5' } : {}),
+    ...(appError.code === 'unavailable' ? { 'Retry-After': '5' } : appError.code === 'rate-limited' ? { 'Retry-After': '60' } : {}),
     'Content-Type': 'application/json; charset=utf-8',
     'Content-Length': Buffer.byteLength(body),
     'X-Content-Type-Options': 'nosniff',
@@ -156,7 +160,7 @@ export function withDeviceFastPath(
     if (req.method !== 'GET' || req.url !== '/api/device/v1/config') return app(req, res);
     void (async () => {
       try {
-        const device = await gateway.authenticate(req.headers.authorization);
+        const device = await gateway.authenticate(req.headers.authorization, req.socket.remoteAddress);
         await gateway.countRequest(device);
         const answer = await gateway.config(device, {
           ifNoneMatch: req.headers['if-none-match'],

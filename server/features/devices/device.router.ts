@@ -19,7 +19,7 @@ export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; conf
   const reports = createReportStore();
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
-    req.device = await gateway.authenticate(req.get('authorization'));
+    req.device = await gateway.authenticate(req.get('authorization'), req.ip);
     next();
   }
 

@@ -1,9 +1,11 @@
 import express, { Router, type NextFunction, type Request, type Response } from 'express';
-import { MemoryStore, rateLimit } from 'express-rate-limit';
+import { rateLimit } from 'express-rate-limit';
 import type { Sequelize } from 'sequelize';
 import { receptionBatchInput } from '@/shared/schemas';
 import type { Config } from '../../config';
 import { AppError } from '../../lib/app-error';
+import { SlidingWindowStore } from '../../lib/sliding-window-store';
+import { createUnknownTokenGuard } from '../../lib/unknown-token-guard';
 import type { PostIdentity } from './listening-posts.repo';
 import { ingestFromPost } from './ingest.service';
 import { authenticatePost } from './post-tokens';
@@ -19,15 +21,16 @@ export function deviceReceptionsRouter({ sequelize, config }: { sequelize: Seque
   const perPost = rateLimit({
     windowMs: 60_000,
     limit: config.DEVICE_RATE_LIMIT,
-    store: new MemoryStore(),
+    store: new SlidingWindowStore(),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => (req as PostRequest).post!.tokenHash,
     handler: (_req, _res, next) =>
       next(new AppError('rate-limited', `Too many requests from this listening post: at most ${config.DEVICE_RATE_LIMIT} a minute`)),
   });
+  const unknownTokens = createUnknownTokenGuard({ what: 'listening post', perAddressPerMinute: config.UNKNOWN_TOKENS_PER_ADDRESS });
   async function authenticate(req: PostRequest, _res: Response, next: NextFunction) {
-    req.post = await authenticatePost(req.get('authorization'), config.DEVICE_CACHE_MS);
+    req.post = await authenticatePost(req.get('authorization'), config.DEVICE_CACHE_MS, unknownTokens, req.ip);
     next();
   }
 

@@ -5,6 +5,7 @@
 import { randomBytes } from 'node:crypto';
 import { LRUCache } from 'lru-cache';
 import { AppError } from '../../lib/app-error';
+import type { UnknownTokenGuard } from '../../lib/unknown-token-guard';
 import { hashToken } from '../devices/tokens.service';
 import { findByTokenHash, type PostIdentity } from './listening-posts.repo';
 
@@ -18,16 +19,23 @@ export function forgetPostTokens(postId: number) {
   for (const [token, hit] of known.entries()) if (hit.post.postId === postId) known.delete(token);
 }
 
-export async function authenticatePost(authorization: string | undefined, cacheMs: number): Promise<PostIdentity> {
+/** `guard` keeps unknown tokens away from the database; `address` is the client's, for its throttle. */
+export async function authenticatePost(
+  authorization: string | undefined,
+  cacheMs: number,
+  guard: UnknownTokenGuard,
+  address = '',
+): Promise<PostIdentity> {
   const match = /^Bearer\s+(\S+)$/i.exec(authorization ?? '');
   if (!match) throw new AppError('unauthenticated', 'Send the listening post token as "Authorization: Bearer <token>"');
   const token = match[1];
   const hit = known.get(token);
   if (hit && Date.now() - hit.atMs < cacheMs) return hit.post;
+  guard.screen(token, address);
   const post = await findByTokenHash(hashToken(token));
   if (!post) {
     known.delete(token);
-    throw new AppError('unauthenticated', 'This listening post token is not valid (rotated, or the post was deleted?)');
+    throw guard.remember(token, address);
   }
   known.set(token, { post, atMs: Date.now() });
   return post;

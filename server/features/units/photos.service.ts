@@ -13,8 +13,8 @@ const EXTENSIONS: Record<string, string> = { jpeg: 'jpg', png: 'png', webp: 'web
 
 /** A phone photo is 12–50 MP; anything larger is refused before it is decoded (50 MP RGBA is 200 MB raw). */
 export const PHOTO_MAX_PIXELS = 50_000_000;
-/** Decodes running at once in this process; further uploads wait their turn. */
-const DECODES_AT_ONCE = 2;
+/** Decodes running at once in this process; further uploads wait their turn (a 49 MP decode peaks near 100 MB). */
+const DECODES_AT_ONCE = 1;
 let decoding = 0;
 const waiting: (() => void)[] = [];
 async function oneDecodeAtATime<T>(work: () => Promise<T>): Promise<T> {
@@ -32,6 +32,9 @@ async function oneDecodeAtATime<T>(work: () => Promise<T>): Promise<T> {
 async function process(buffer: Buffer) {
   // Loaded on the first upload, so servers that never see one do not carry the image library.
   const sharp = (await import('sharp')).default;
+  // No cache of decoded images between requests, and one worker thread per decode: memory stays bounded.
+  sharp.cache(false);
+  sharp.concurrency(1);
   let format: string | undefined;
   let pixels = 0;
   try {
@@ -59,7 +62,8 @@ async function encode(sharp: typeof Sharp, buffer: Buffer, format: string) {
   const main = await (
     format === 'png' ? base.png() : format === 'webp' ? base.webp({ quality: 85 }) : base.jpeg({ quality: 85 })
   ).toBuffer();
-  const thumb = await sharp(buffer, options).rotate().resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
+  // The thumbnail comes from the (at most 2000 px) re-encoded photo: the original is decoded only once.
+  const thumb = await sharp(main).resize(320, 240, { fit: 'cover' }).webp({ quality: 70 }).toBuffer();
   return { main, thumb, contentType: `image/${format}`, extension: EXTENSIONS[format] };
 }
 
