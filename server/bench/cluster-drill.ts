@@ -26,6 +26,15 @@ let anyLastOk = 0;
 let anyLongestGap = 0;
 let anyGapEndedAt = 0;
 let phaseStart = 0;
+const successes: number[] = [];
+const incidents: { label: string; at: number }[] = [];
+/** The longest time between two successive successful answers (of any kind) in the `windowMs` after `at`. */
+function longestGapAfter(at: number, windowMs: number) {
+  let longest = 0;
+  for (let i = 1; i < successes.length; i += 1)
+    if (successes[i] > at && successes[i - 1] < at + windowMs) longest = Math.max(longest, successes[i] - successes[i - 1]);
+  return longest;
+}
 const phaseSeconds = (at: number) => ((at - phaseStart) / 1000).toFixed(0);
 function record(kind: string, status: number | string, acknowledged = 0) {
   const t = tallies.get(kind) ?? { statuses: new Map(), lastOkAt: Date.now(), longestGapMs: 0, gapEndedAt: 0, acknowledged: 0 };
@@ -38,6 +47,7 @@ function record(kind: string, status: number | string, acknowledged = 0) {
     t.lastOkAt = now;
     if (anyLastOk && now - anyLastOk > anyLongestGap) [anyLongestGap, anyGapEndedAt] = [now - anyLastOk, now];
     anyLastOk = now;
+    successes.push(now);
     t.acknowledged += acknowledged;
   }
 }
@@ -211,15 +221,20 @@ async function faultPhase(s: Setup) {
     await at(10);
     const appPid = readFileSync('.data/cluster/app2.pid', 'utf8').trim();
     process.kill(Number(appPid), 'SIGKILL');
+    incidents.push({ label: 'app process 2 killed', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: app process 2 killed (SIGKILL)`);
     await at(25);
     await run('bash', ['server/scripts/cluster-app.sh', '2']);
+    incidents.push({ label: 'app process 2 started again', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: app process 2 started again`);
     await at(40);
     await run('bash', ['server/scripts/galera.sh', 'kill', '1']);
+    incidents.push({ label: 'Galera node 1 killed', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: Galera node 1 (the one taking writes) killed (SIGKILL)`);
     await at(55);
+    incidents.push({ label: 'Galera node 1 restarting', at: Date.now() });
     await run('bash', ['server/scripts/galera.sh', 'restart', '1'], { timeout: 300_000 });
+    incidents.push({ label: 'Galera node 1 back and synced', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: Galera node 1 back and synced`);
   })();
   await Promise.all([...workers, events]);
@@ -296,6 +311,10 @@ async function main() {
     console.log(
       `longest gap without any successful answer: ${(anyLongestGap / 1000).toFixed(1)} s, ended at t=${phaseSeconds(anyGapEndedAt)} s`,
     );
+    for (const e of incidents) {
+      const gap = (longestGapAfter(e.at, 15_000) / 1000).toFixed(1);
+      console.log(`in the 15 s after "${e.label}" (t=${phaseSeconds(e.at)} s): longest gap without any success ${gap} s`);
+    }
     console.log(
       `load average (1, 5, 15 min) at the end: ${loadavg()
         .map((l) => l.toFixed(1))
