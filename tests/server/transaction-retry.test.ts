@@ -6,9 +6,11 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { QueryTypes, Sequelize, type Transaction } from 'sequelize';
+import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import { migrateToLatest } from '@/server/db/migrator';
 import { createSequelize } from '@/server/db/sequelize';
-import { CONFLICT_ATTEMPTS, isWriteConflict, retryOnConflict } from '@/server/db/transaction';
+import { CONFLICT_ATTEMPTS, isWriteConflict, retryOnConflict, type TransactionRunner } from '@/server/db/transaction';
+import { createReportStore } from '@/server/features/devices/reports.service';
 import { isDatabaseUnavailable } from '@/server/lib/db-errors';
 import { TEST_DATABASE_URL } from './helpers/test-app';
 
@@ -119,6 +121,8 @@ describe('what is not retried', () => {
   });
 
   it('gives up after a bounded number of runs and throws the conflict, which the API answers as 503', async () => {
+    // errno 1213 / ER_LOCK_DEADLOCK as listed in MariaDB's error code table (MariaDB Knowledge Base, "MariaDB Error
+    // Codes"; quoted from memory); the first test above gets the same errno from a real server.
     const conflict = Object.assign(new Error('Deadlock found when trying to get lock'), { errno: 1213, code: 'ER_LOCK_DEADLOCK' });
     let runs = 0;
     const waits: number[] = [];
@@ -149,6 +153,30 @@ describe('what is not retried', () => {
     ).resolves.toBeUndefined();
     // The inner savepoint failed once without a retry of its own; the outer transaction ran it again.
     expect(inner).toBe(2);
+  });
+});
+
+describe('device reports go through the transaction runner (so a conflict is retried)', () => {
+  it('writes heartbeat groups and transmission logs inside runner transactions', async () => {
+    let transactions = 0;
+    const refused = new Error('refused by the test runner');
+    const runner: TransactionRunner = {
+      transaction: async () => {
+        transactions += 1;
+        throw refused;
+      },
+    };
+    const store = createReportStore(runner);
+    const beat = heartbeatInput.parse({ uptimeS: 1, firmwareVersion: 'test-1', timeSource: 'network', clockOffsetMs: 0 });
+    const outcomes = await Promise.allSettled([store.heartbeat(1, beat), store.heartbeat(2, beat)]);
+    expect(outcomes.map((o) => o.status)).toEqual(['rejected', 'rejected']);
+    // One transaction for the group of two, then one for each row on its own (the group writer's fallback).
+    expect(transactions).toBe(3);
+    const { transmissions: sent } = transmissionLogInput.parse({
+      transmissions: [{ startUtc: '2026-12-02T10:04:01Z', bandId: '20m', frequencyHz: 14_097_100, messageText: 'Q5DRL JO22 23' }],
+    });
+    await expect(store.transmissions(1, sent)).rejects.toBe(refused);
+    expect(transactions).toBe(4);
   });
 });
 
