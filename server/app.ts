@@ -94,7 +94,7 @@ export function createApp({
   app.locals.deviceGateway = deviceGateway;
   app.use('/api/device/v1/receptions', deviceReceptionsRouter({ sequelize, config }));
   app.use('/api/device/v1', pairingDeviceRouter({ sequelize, config, now }));
-  const devices = deviceRouter({ gateway: deviceGateway, config });
+  const devices = deviceRouter({ db: sequelize, gateway: deviceGateway, config });
   app.locals.drainWrites = devices.drainWrites;
   app.use('/api/device/v1', devices);
   app.use(helmet({ contentSecurityPolicy: CSP, hsts: secureCookies, crossOriginEmbedderPolicy: false }));

@@ -7,6 +7,7 @@
  */
 import { execFile, spawn } from 'node:child_process';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { availableParallelism, loadavg } from 'node:os';
 import { promisify } from 'node:util';
 import { QueryTypes, Sequelize } from 'sequelize';
 
@@ -19,21 +20,34 @@ const STATE = '.data/cluster/state';
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 const log = (line: string) => console.log(`[drill] ${line}`);
 
-type Tally = { statuses: Map<string, number>; lastOkAt: number; longestGapMs: number; acknowledged: number };
+type Tally = { statuses: Map<string, number>; lastOkAt: number; longestGapMs: number; gapEndedAt: number; acknowledged: number };
 const tallies = new Map<string, Tally>();
 let anyLastOk = 0;
 let anyLongestGap = 0;
+let anyGapEndedAt = 0;
+let phaseStart = 0;
+const successes: number[] = [];
+const incidents: { label: string; at: number }[] = [];
+/** The longest time between two successive successful answers (of any kind) in the `windowMs` after `at`. */
+function longestGapAfter(at: number, windowMs: number) {
+  let longest = 0;
+  for (let i = 1; i < successes.length; i += 1)
+    if (successes[i] > at && successes[i - 1] < at + windowMs) longest = Math.max(longest, successes[i] - successes[i - 1]);
+  return longest;
+}
+const phaseSeconds = (at: number) => ((at - phaseStart) / 1000).toFixed(0);
 function record(kind: string, status: number | string, acknowledged = 0) {
-  const t = tallies.get(kind) ?? { statuses: new Map(), lastOkAt: Date.now(), longestGapMs: 0, acknowledged: 0 };
+  const t = tallies.get(kind) ?? { statuses: new Map(), lastOkAt: Date.now(), longestGapMs: 0, gapEndedAt: 0, acknowledged: 0 };
   tallies.set(kind, t);
   const key = String(status);
   t.statuses.set(key, (t.statuses.get(key) ?? 0) + 1);
   if (typeof status === 'number' && status >= 200 && status < 300) {
     const now = Date.now();
-    t.longestGapMs = Math.max(t.longestGapMs, now - t.lastOkAt);
+    if (now - t.lastOkAt > t.longestGapMs) [t.longestGapMs, t.gapEndedAt] = [now - t.lastOkAt, now];
     t.lastOkAt = now;
-    anyLongestGap = Math.max(anyLongestGap, anyLastOk ? now - anyLastOk : 0);
+    if (anyLastOk && now - anyLastOk > anyLongestGap) [anyLongestGap, anyGapEndedAt] = [now - anyLastOk, now];
     anyLastOk = now;
+    successes.push(now);
     t.acknowledged += acknowledged;
   }
 }
@@ -101,7 +115,7 @@ async function setup() {
     const issued = await call('POST', `/api/listening-posts/${post.json.id}/token`, undefined, as);
     receiverToken = String(issued.json.token);
   } else log(`listening posts answered ${post.status}: reception reports are left out of this drill`);
-  return { email, password, stationId, deviceToken: String(device.json.token), receiverToken };
+  return { email, password, stationId, deviceToken: String(device.json.token), receiverToken, postId: Number(post.json?.id) };
 }
 
 type Setup = Awaited<ReturnType<typeof setup>>;
@@ -120,8 +134,13 @@ async function worker(kind: string, until: () => boolean, step: () => Promise<vo
 async function throughput(s: Setup, processes: number) {
   for (let n = 1; n <= 3; n += 1) await haproxy(`${n <= processes ? 'enable' : 'disable'} server apps/app${n}`);
   await sleep(1500);
+  return polls(s, THROUGHPUT_S);
+}
+
+/** Device config polls answered per second over `seconds`, 24 connections at once. */
+async function polls(s: Setup, seconds: number) {
   let done = 0;
-  const end = Date.now() + THROUGHPUT_S * 1000;
+  const end = Date.now() + seconds * 1000;
   await Promise.all(
     Array.from({ length: 24 }, () =>
       worker(
@@ -134,17 +153,22 @@ async function throughput(s: Setup, processes: number) {
       ),
     ),
   );
-  return done / THROUGHPUT_S;
+  return done / seconds;
 }
 
 let slotCounter = 0;
+// Transmitter callsigns unique to this run, so a drill run on a database kept from an earlier run stores new rows.
+const RUN_TAG = Math.floor(Date.now() / 1000)
+  .toString(36)
+  .toUpperCase()
+  .slice(-5);
 function reportBatch() {
-  // Unique decodes: one slot per batch, 20 receivers' worth of reports each.
+  // Unique decodes: one slot per batch, 20 transmitters heard in each.
   const slotMs = Date.UTC(2026, 10, 1) + (slotCounter += 1) * 120_000;
   return Array.from({ length: 20 }, (_, i) => ({
     slotUtc: new Date(slotMs).toISOString(),
     bandId: '20m',
-    txCallsign: `Q5T${String(i).padStart(2, '0')}`.slice(0, 6),
+    txCallsign: `Q5${RUN_TAG}${String(i).padStart(2, '0')}`,
     txLocator: 'JO22',
     txPowerDbm: 23,
     snrDb: -12,
@@ -155,6 +179,7 @@ function reportBatch() {
 
 async function faultPhase(s: Setup) {
   const start = Date.now();
+  phaseStart = start;
   const end = start + FAULT_PHASE_S * 1000;
   const over = () => Date.now() > end;
   const beat = {
@@ -196,15 +221,20 @@ async function faultPhase(s: Setup) {
     await at(10);
     const appPid = readFileSync('.data/cluster/app2.pid', 'utf8').trim();
     process.kill(Number(appPid), 'SIGKILL');
+    incidents.push({ label: 'app process 2 killed', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: app process 2 killed (SIGKILL)`);
     await at(25);
     await run('bash', ['server/scripts/cluster-app.sh', '2']);
+    incidents.push({ label: 'app process 2 started again', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: app process 2 started again`);
     await at(40);
     await run('bash', ['server/scripts/galera.sh', 'kill', '1']);
+    incidents.push({ label: 'Galera node 1 killed', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: Galera node 1 (the one taking writes) killed (SIGKILL)`);
     await at(55);
+    incidents.push({ label: 'Galera node 1 restarting', at: Date.now() });
     await run('bash', ['server/scripts/galera.sh', 'restart', '1'], { timeout: 300_000 });
+    incidents.push({ label: 'Galera node 1 back and synced', at: Date.now() });
     log(`t=${((Date.now() - start) / 1000).toFixed(0)} s: Galera node 1 back and synced`);
   })();
   await Promise.all([...workers, events]);
@@ -221,9 +251,10 @@ async function stored(s: Setup) {
     });
     let receptions = 0;
     if (s.receiverToken) {
-      const [{ n }] = await db.query<{ n: number }>("SELECT COUNT(*) AS n FROM reception_reports WHERE rxCallsign = 'Q5RXD'", {
-        type: QueryTypes.SELECT,
-      });
+      const [{ n }] = await db.query<{ n: number }>(
+        'SELECT COUNT(*) AS n FROM reception_reports r JOIN reception_batches b ON b.id = r.batchId WHERE b.listeningPostId = ?',
+        { replacements: [s.postId], type: QueryTypes.SELECT },
+      );
       receptions = Number(n);
     }
     return { heartbeat: Number(heartbeats), reception: receptions };
@@ -233,10 +264,13 @@ async function stored(s: Setup) {
 }
 
 async function main() {
+  // The drill's load is far above one device's or one person's: lift the limits for every app process, the ones
+  // the cluster starts and the one the drill starts again after killing it (cluster-app.sh inherits this env).
+  Object.assign(process.env, { DEVICE_RATE_LIMIT: '1000000', SIGN_IN_ATTEMPTS: '1000' });
   if (existsSync(STATE)) rmSync(STATE);
   log('starting the cluster (three Galera nodes, three app processes, HAProxy)…');
   const cluster = spawn('bash', ['server/scripts/cluster.sh'], {
-    env: { ...process.env, CLUSTER_APPS: '3', DEVICE_RATE_LIMIT: '1000000', SIGN_IN_ATTEMPTS: '1000' },
+    env: { ...process.env, CLUSTER_APPS: '3' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const stopCluster = async () => {
@@ -251,8 +285,13 @@ async function main() {
       await sleep(1000);
     }
     const s = await setup();
+    // Every process warms up first (the first requests load and compile code), so no figure counts a cold start.
+    await polls(s, 6);
     const perProcesses: string[] = [];
-    for (const n of [1, 2, 3]) perProcesses.push(`${n} process${n > 1 ? 'es' : ''}: ${(await throughput(s, n)).toFixed(0)} config polls/s`);
+    for (const n of [1, 2, 3]) {
+      const rate = await throughput(s, n);
+      perProcesses.push(`${n} process${n > 1 ? 'es' : ''}: ${rate.toFixed(0)} config polls/s (load average ${loadavg()[0].toFixed(1)})`);
+    }
     for (let n = 1; n <= 3; n += 1) await haproxy(`enable server apps/app${n}`);
     tallies.clear();
     log(`fault phase: ${FAULT_PHASE_S} s of heartbeats, sign-ins and reception reports…`);
@@ -266,9 +305,21 @@ async function main() {
     );
     for (const [kind, t] of tallies) {
       const statuses = [...t.statuses].map(([k, v]) => `${k}: ${v}`).join(', ');
-      console.log(`${kind.padEnd(10)} ${statuses}; longest gap without a success ${(t.longestGapMs / 1000).toFixed(1)} s`);
+      const gap = `${(t.longestGapMs / 1000).toFixed(1)} s, ended at t=${phaseSeconds(t.gapEndedAt)} s`;
+      console.log(`${kind.padEnd(10)} ${statuses}; longest gap without a success ${gap}`);
     }
-    console.log(`longest gap without any successful answer: ${(anyLongestGap / 1000).toFixed(1)} s`);
+    console.log(
+      `longest gap without any successful answer: ${(anyLongestGap / 1000).toFixed(1)} s, ended at t=${phaseSeconds(anyGapEndedAt)} s`,
+    );
+    for (const e of incidents) {
+      const gap = (longestGapAfter(e.at, 15_000) / 1000).toFixed(1);
+      console.log(`in the 15 s after "${e.label}" (t=${phaseSeconds(e.at)} s): longest gap without any success ${gap} s`);
+    }
+    console.log(
+      `load average (1, 5, 15 min) at the end: ${loadavg()
+        .map((l) => l.toFixed(1))
+        .join(', ')} on ${availableParallelism()} cores`,
+    );
     let lost = 0;
     for (const kind of ['heartbeat', 'reception'] as const) {
       const t = tallies.get(kind);

@@ -1,4 +1,4 @@
-import { Sequelize } from 'sequelize';
+import { Sequelize, type Transaction, type TransactionOptions } from 'sequelize';
 import { ListeningPostModel } from './models/listening-post.model';
 import { AuditEntryModel, InvitationModel, NotificationModel, OffsetProposalModel } from './models/club-extras.model';
 import { ClubModel } from './models/club.model';
@@ -13,10 +13,32 @@ import { StationModel } from './models/station.model';
 import { UnitPhotoModel } from './models/unit-photo.model';
 import { UnitModel } from './models/unit.model';
 import { UserModel } from './models/user.model';
+import { retryOnConflict } from './transaction';
+
+type Work<T> = (transaction: Transaction) => PromiseLike<T>;
+
+/**
+ * Sequelize whose managed transactions (`transaction(callback)`) are run again, whole, when they meet a write
+ * conflict: an InnoDB deadlock, a lock wait timeout, or a Galera certification failure (reported as a deadlock,
+ * often on COMMIT). A transaction nested in another (`{ transaction }` given) is not retried on its own: the
+ * conflict rolled back the outer one too, which retries as a whole.
+ */
+export class RetryingSequelize extends Sequelize {
+  override transaction<T>(options: TransactionOptions, autoCallback: Work<T>): Promise<T>;
+  override transaction<T>(autoCallback: Work<T>): Promise<T>;
+  override transaction(options?: TransactionOptions): Promise<Transaction>;
+  override transaction<T>(first?: TransactionOptions | Work<T>, second?: Work<T>): Promise<T | Transaction> {
+    const options = typeof first === 'function' ? undefined : first;
+    const work = typeof first === 'function' ? first : second;
+    if (!work) return super.transaction(options);
+    if (options?.transaction) return super.transaction(options, work);
+    return retryOnConflict(() => (options ? super.transaction(options, work) : super.transaction(work)));
+  }
+}
 
 /** One Sequelize instance per process; models and associations are set up here only. */
 export function createSequelize(databaseUrl: string): Sequelize {
-  const sequelize = new Sequelize(databaseUrl, {
+  const sequelize = new RetryingSequelize(databaseUrl, {
     dialect: 'mariadb',
     logging: false,
     timezone: '+00:00',

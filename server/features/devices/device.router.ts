@@ -3,6 +3,7 @@ import { rateLimit } from 'express-rate-limit';
 import type { StoredAnswer } from '@/shared/api/answers';
 import { heartbeatInput, transmissionLogInput } from '@/shared/schemas';
 import type { Config } from '../../config';
+import type { TransactionRunner } from '../../db/transaction';
 import { AppError } from '../../lib/app-error';
 import { RATE_WINDOW_MS, sendConfig, type DeviceGateway } from './device-gateway';
 import { createReportStore } from './reports.service';
@@ -14,9 +15,9 @@ type DeviceRequest = Request & { device?: DeviceIdentity };
  * The machine API under /api/device/v1: bearer tokens, no cookies, no session store.
  * Config answers carry an ETag; an unchanged config answers 304 from memory.
  */
-export function deviceRouter({ gateway, config }: { gateway: DeviceGateway; config: Config }) {
+export function deviceRouter({ db, gateway, config }: { db: TransactionRunner; gateway: DeviceGateway; config: Config }) {
   const router = Router();
-  const reports = createReportStore();
+  const reports = createReportStore(db);
 
   async function authenticate(req: DeviceRequest, _res: Response, next: NextFunction) {
     req.device = await gateway.authenticate(req.get('authorization'), req.ip);

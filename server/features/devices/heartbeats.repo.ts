@@ -1,11 +1,11 @@
-import { Op, type InferCreationAttributes } from 'sequelize';
+import { Op, type InferCreationAttributes, type Transaction } from 'sequelize';
 import { HeartbeatModel } from '../../db/models/device.model';
 
 export type HeartbeatValues = Omit<InferCreationAttributes<HeartbeatModel>, 'id'>;
 
 /** Many heartbeats in one INSERT (the group writer hands them in). */
-export async function insertMany(rows: HeartbeatValues[]) {
-  await HeartbeatModel.bulkCreate(rows, { validate: false });
+export async function insertMany(rows: HeartbeatValues[], transaction: Transaction) {
+  await HeartbeatModel.bulkCreate(rows, { validate: false, transaction });
 }
 
 /** The newest heartbeat received at or before `at`. */

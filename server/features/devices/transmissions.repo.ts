@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { DeviceTransmissionModel } from '../../db/models/device.model';
 
 export type TransmissionValues = {
@@ -10,8 +10,8 @@ export type TransmissionValues = {
   receivedAt: Date;
 };
 
-export async function insertMany(rows: TransmissionValues[]) {
-  await DeviceTransmissionModel.bulkCreate(rows);
+export async function insertMany(rows: TransmissionValues[], transaction: Transaction) {
+  await DeviceTransmissionModel.bulkCreate(rows, { transaction });
 }
 
 /** How many transmissions the device reported as started between the two times. */
