@@ -59,7 +59,7 @@ export function MemberList({ members, myUserId, canManage, busyUserId, onSetRole
                 />
                 <Button
                   label="Remove"
-                  variant="ghost"
+                  variant="danger"
                   accessibilityLabel={`Remove ${member.displayName} from the club`}
                   onPress={() => onRemove(member)}
                   style={styles.smallButton}

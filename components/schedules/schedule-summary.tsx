@@ -100,7 +100,7 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
           {schedule.paused && onResume ? <Button label="Resume schedule" onPress={onResume} busy={busy} /> : null}
           {!schedule.paused && onPause ? <Button label="Pause schedule" variant="secondary" onPress={onPause} busy={busy} /> : null}
           {onEdit ? <Button label="Edit schedule" variant="secondary" onPress={onEdit} /> : null}
-          {onDelete ? <Button label="Delete schedule" variant="ghost" onPress={onDelete} /> : null}
+          {onDelete ? <Button label="Delete schedule" variant="danger" onPress={onDelete} /> : null}
         </View>
       ) : null}
     </Card>

@@ -66,14 +66,18 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
   if (rail) {
     return (
       <View
-        accessibilityRole="tablist"
+        role="navigation"
+        aria-label="Main"
         style={[styles.rail, { backgroundColor: colors.surface, borderColor: colors.border, paddingTop: insets.top + space.xl }]}
       >
         <View style={styles.railBrand}>
           <Wordmark />
         </View>
         <UtcClock variant="panel" now={now} />
-        <View style={styles.railItems}>{buttons}</View>
+        {/* only the tabs sit in the tab list; the mark and clock stay outside it */}
+        <View accessibilityRole="tablist" style={styles.railItems}>
+          {buttons}
+        </View>
         {accessory ? <View style={[styles.railAccessory, { borderColor: colors.border }]}>{accessory}</View> : null}
       </View>
     );

@@ -1,15 +1,18 @@
-import { useEffect } from 'react';
-import { Platform, Pressable, StyleSheet, View } from 'react-native';
+import { useLayoutEffect, useRef, useState } from 'react';
+import { Modal, Platform, Pressable, StyleSheet, View } from 'react-native';
 
 import { Button } from './button';
 import { Text } from './text';
 import { radius, space } from './theme';
 import { useAppTheme } from './theme-provider';
+import { useDialogFocus } from './use-dialog-focus';
 
 export type ConfirmDialogProps = {
   visible: boolean;
   title: string;
   message: string;
+  /** What else the action takes with it, listed under the message. */
+  details?: readonly string[];
   confirmLabel: string;
   cancelLabel?: string;
   destructive?: boolean;
@@ -20,13 +23,15 @@ export type ConfirmDialogProps = {
 };
 
 /**
- * Asks before an action that cannot be undone. Drawn as an overlay of the screen
- * (put it in `<Screen overlay>`), so it works the same in the browser and in tests.
+ * Asks before an action that cannot be undone. Drawn in a modal layer over the whole window (side rail and
+ * top bar included); in the browser focus moves in, stays in, and returns to the opener on close, and
+ * Escape cancels from any field.
  */
 export function ConfirmDialog({
   visible,
   title,
   message,
+  details,
   confirmLabel,
   cancelLabel = 'Cancel',
   destructive = false,
@@ -36,25 +41,24 @@ export function ConfirmDialog({
   onCancel,
 }: ConfirmDialogProps) {
   const { colors } = useAppTheme();
-  // Escape closes the dialog in the browser, as people expect of a dialog
-  useEffect(() => {
-    if (!visible || busy || Platform.OS !== 'web' || typeof document === 'undefined') return;
-    const onKey = (event: KeyboardEvent) => {
-      if (event.key === 'Escape') onCancel();
-    };
-    document.addEventListener('keydown', onKey);
-    return () => document.removeEventListener('keydown', onKey);
-  }, [visible, busy, onCancel]);
-  if (!visible) return null;
-  return (
+  const box = useRef<View>(null);
+  const anchor = useRef<View>(null);
+  // A modal layer needs a real document (or a native app); a test renderer's tree gets the dialog in place
+  const [layered, setLayered] = useState(Platform.OS !== 'web');
+  useLayoutEffect(() => {
+    if (typeof HTMLElement !== 'undefined' && anchor.current instanceof HTMLElement) setLayered(true);
+  }, []);
+  useDialogFocus(visible, box);
+  const cancel = () => {
+    if (!busy) onCancel();
+  };
+  const placeholder = <View ref={anchor} style={styles.anchor} />;
+  if (!visible) return placeholder;
+  const layer = (
     <View style={[StyleSheet.absoluteFill, styles.backdrop, { backgroundColor: colors.overlay }]}>
-      <Pressable
-        style={StyleSheet.absoluteFill}
-        accessibilityRole="button"
-        accessibilityLabel="Close the dialog"
-        onPress={busy ? undefined : onCancel}
-      />
+      <Pressable style={StyleSheet.absoluteFill} focusable={false} accessibilityLabel="Close the dialog" onPress={cancel} />
       <View
+        ref={box}
         role="alertdialog"
         aria-modal
         aria-label={title}
@@ -62,6 +66,16 @@ export function ConfirmDialog({
       >
         <Text variant="heading">{title}</Text>
         <Text tone="muted">{message}</Text>
+        {details?.length ? (
+          <View role="list">
+            {details.map((line) => (
+              <Text key={line} role="listitem" tone="muted">
+                {'• '}
+                {line}
+              </Text>
+            ))}
+          </View>
+        ) : null}
         {error ? (
           <Text tone="danger" accessibilityRole="alert">
             {error}
@@ -74,9 +88,19 @@ export function ConfirmDialog({
       </View>
     </View>
   );
+  if (!layered) return layer;
+  return (
+    <>
+      {placeholder}
+      <Modal visible transparent animationType="none" onRequestClose={cancel}>
+        {layer}
+      </Modal>
+    </>
+  );
 }
 
 const styles = StyleSheet.create({
+  anchor: { display: 'none' },
   backdrop: { alignItems: 'center', justifyContent: 'center', padding: space.lg },
   dialog: {
     width: '100%',

@@ -9,7 +9,7 @@ export type TextLinkProps = { href: Href; label: string; variant?: TextProps['va
 export function TextLink({ href, label, variant = 'label' }: TextLinkProps) {
   return (
     <Link href={href} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={label} hitSlop={6}>
+      <Pressable accessibilityRole="link" accessibilityLabel={label} style={styles.target}>
         <Text variant={variant} tone="primary" style={styles.text}>
           {label}
         </Text>
@@ -18,7 +18,11 @@ export function TextLink({ href, label, variant = 'label' }: TextLinkProps) {
   );
 }
 
-const styles = StyleSheet.create({ text: { textDecorationLine: 'underline' } });
+const styles = StyleSheet.create({
+  text: { textDecorationLine: 'underline' },
+  // hitSlop does not enlarge what a browser counts as the target, so the link itself is 44 px tall
+  target: { minHeight: 44, minWidth: 44, justifyContent: 'center' },
+});
 
 export type ServerPageLinkProps = { path: string; label: string; hint?: string };
 
@@ -29,7 +33,7 @@ export function ServerPageLink({ path, label, hint }: ServerPageLinkProps) {
       accessibilityRole="link"
       accessibilityLabel={label}
       accessibilityHint={hint}
-      hitSlop={6}
+      style={styles.target}
       onPress={() => Linking.openURL(path)}
     >
       <Text variant="label" tone="primary" style={styles.text}>

@@ -36,7 +36,7 @@ export const palettes: Record<ColorScheme, Palette> = {
     primary: '#0F6760',
     onPrimary: '#FFFFFF',
     primarySoft: '#DCEBE7',
-    signal: '#B45A12',
+    signal: '#9A4A0C',
     signalSoft: '#F6E4D2',
     onSignal: '#FFFFFF',
     danger: '#A63A2B',

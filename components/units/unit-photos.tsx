@@ -49,7 +49,7 @@ export function UnitPhotos({ unitName, photos, readOnly, progress, uploading, er
               {readOnly ? null : (
                 <Button
                   label="Delete"
-                  variant="ghost"
+                  variant="danger"
                   accessibilityLabel={`Delete photo ${index + 1}`}
                   onPress={() => onDelete(photo)}
                   style={styles.deleteButton}

@@ -31,7 +31,8 @@ export default function StationDetailRoute() {
         <ConfirmDialog
           {...remove.dialog}
           title="Delete this station?"
-          message={`“${station.data?.name ?? 'This station'}” and its notes will be removed for good.`}
+          message={`“${station.data?.name ?? 'This station'}” will be removed for good, and with it:`}
+          details={stationDeletionTakes}
           confirmLabel="Delete station"
           destructive
           onConfirm={() =>
@@ -78,3 +79,11 @@ export default function StationDetailRoute() {
     </Screen>
   );
 }
+
+/** Everything the database removes together with a station. */
+const stationDeletionTakes = [
+  'its notes and band settings, with the calibration',
+  'its transmit schedule',
+  'its device token, so the beacon can no longer sign in',
+  'the reception summaries worked out for its reports',
+] as const;
