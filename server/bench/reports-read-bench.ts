@@ -264,6 +264,14 @@ async function buildAggregates(sequelize: Sequelize) {
     );
     log(`  aggregates of reports up to id ${range[1]} built (${seconds(aggregates)} s)`);
   }
+  // The hour roll-up from the finished slot aggregate, as migration 0018 fills it.
+  await sequelize.query('DELETE FROM reception_hour_counts');
+  await sequelize.query(
+    `INSERT INTO reception_hour_counts (stationId, hourStart, bandId, reports, slots, bestSnrDb)
+       SELECT stationId, DATE_FORMAT(slotStart, '%Y-%m-%d %H:00:00'), bandId, SUM(reports), COUNT(*), MAX(bestSnrDb)
+         FROM reception_slot_counts GROUP BY stationId, DATE_FORMAT(slotStart, '%Y-%m-%d %H:00:00'), bandId`,
+  );
+  log(`  hour roll-up built (${seconds(aggregates)} s)`);
 }
 
 /** Several listening posts post batches at once for SECONDS; each batch is timed from send to 202. */
@@ -415,6 +423,9 @@ async function main() {
       // A run cut short may have left the aggregates of only some stations; the reads below use a station that has them.
       await sequelize.query(
         'DELETE FROM reception_slot_counts WHERE stationId NOT IN (SELECT DISTINCT stationId FROM reception_receiver_days)',
+      );
+      await sequelize.query(
+        'DELETE FROM reception_hour_counts WHERE stationId NOT IN (SELECT DISTINCT stationId FROM reception_receiver_days)',
       );
       const built = await sequelize.query<{ stationId: number }>(
         'SELECT stationId FROM reception_receiver_days GROUP BY stationId HAVING COUNT(*) > 1000 ORDER BY stationId',

@@ -309,6 +309,38 @@ describe('reach', () => {
     expect(reach.snrByDistance).toHaveLength(3);
   });
 
+  it('when a period covers whole hours (read from the hour roll-up) and part-hours (from the slot rows), the figures agree with the reports themselves', async () => {
+    const { owner, station } = await smallSet();
+    const direct = async (from: string, to: string) => {
+      const [rows] = await server.sequelize.query(
+        'SELECT COUNT(*) AS reports, COUNT(DISTINCT slotStart) AS slots FROM reception_reports WHERE stationId = ? AND slotStart >= ? AND slotStart < ?',
+        { replacements: [station.id, from.replace('T', ' ').replace('Z', ''), to.replace('T', ' ').replace('Z', '')] },
+      );
+      const [row] = rows as { reports: number; slots: number }[];
+      return { reports: Number(row.reports), slots: Number(row.slots) };
+    };
+    for (const [from, to] of [
+      ['2026-11-30T09:00:00Z', '2026-11-30T12:00:00Z'], // whole hours only
+      ['2026-11-30T09:30:00Z', '2026-11-30T11:30:00Z'], // part, whole, part
+      ['2026-11-30T10:02:00Z', '2026-11-30T10:10:00Z'], // inside one hour
+      ['2026-11-30T10:00:00Z', '2026-11-30T10:02:00Z'], // the first slot only
+    ]) {
+      const res = await owner.agent.get(`/api/stations/${station.id}/reach?from=${from}&to=${to}`);
+      expect(res.status).toBe(200);
+      const truth = await direct(from, to);
+      expect({ from, reports: res.body.reports, heard: res.body.heardTransmissions }).toEqual({
+        from,
+        reports: truth.reports,
+        heard: truth.slots,
+      });
+    }
+    // The roll-up holds the four reports in the two heard slots.
+    const before = await server.sequelize.query('SELECT reports, slots FROM reception_hour_counts WHERE stationId = ?', {
+      replacements: [station.id],
+    });
+    expect((before[0] as { reports: number; slots: number }[])[0]).toEqual({ reports: 4, slots: 2 });
+  });
+
   it('when the period is longer than a year or reversed, responds 400 with the field', async () => {
     const { owner, station } = await smallSet();
     const long = await owner.agent.get(`/api/stations/${station.id}/reach?from=2024-01-01T00:00:00Z&to=2026-01-01T00:00:00Z`);

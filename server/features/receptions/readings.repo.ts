@@ -1,6 +1,6 @@
 /**
  * Reading reception data. Lists of reports read reception_reports through (stationId, slotStart) or
- * (importerId, slotStart); every figure (counts, reach, the overview) reads only the two aggregate tables.
+ * (importerId, slotStart); every figure (counts, reach, the overview) reads only the aggregate tables.
  */
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { ReceptionReport } from '@/shared/api/receptions';
@@ -100,15 +100,8 @@ const SELECT_REPORTS = `SELECT r.id, r.slotStart, r.bandId, r.txCallsign, r.txLo
 /** How many reports a scope has in the period: a station's from the per-slot aggregate, an importer's by index range. */
 export async function countReports(sequelize: Sequelize, scope: Scope, period: Period): Promise<number> {
   if ('stationId' in scope) {
-    const band = period.bandId ? ' AND bandId = ?' : '';
-    const rows = await sequelize.query<{ n: number | null }>(
-      `SELECT SUM(reports) AS n FROM reception_slot_counts WHERE stationId = ? AND slotStart >= ? AND slotStart < ?${band}`,
-      {
-        replacements: [scope.stationId, sqlTime(period.fromMs), sqlTime(period.toMs), ...(period.bandId ? [period.bandId] : [])],
-        type: QueryTypes.SELECT,
-      },
-    );
-    return Number(rows[0]?.n ?? 0);
+    const figures = await slotFigures(sequelize, scope.stationId, period);
+    return figures.hourBand.reduce((sum, h) => sum + h.reports, 0);
   }
   const { where, replacements } = whereOf(scope, period);
   const rows = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM reception_reports r WHERE ${where}`, {
@@ -155,27 +148,57 @@ export async function* allReports(sequelize: Sequelize, scope: Scope, period: Pe
 
 export type SlotFigures = { hourBand: { hour: number; bandId: BandId; reports: number; slots: number; bestSnrDb: number }[] };
 
-/** Reports, heard slots and best SNR per UTC hour and band, from the per-slot aggregate. */
-export async function slotFigures(sequelize: Sequelize, stationId: number, period: Period): Promise<SlotFigures> {
+type HourBandRow = { hour: number; bandId: string; reports: number; slots: number; bestSnrDb: number };
+const HOUR_MS = 3_600_000;
+
+/** One aggregate's rows per UTC hour of day and band over [fromMs, toMs). */
+async function hourBandRows(
+  sequelize: Sequelize,
+  table: 'reception_slot_counts' | 'reception_hour_counts',
+  stationId: number,
+  period: Period,
+  fromMs: number,
+  toMs: number,
+) {
+  if (fromMs >= toMs) return [];
+  const [time, slots] = table === 'reception_slot_counts' ? ['slotStart', 'COUNT(*)'] : ['hourStart', 'SUM(slots)'];
   const band = period.bandId ? ' AND bandId = ?' : '';
-  const rows = await sequelize.query<{ hour: number; bandId: string; reports: number; slots: number; bestSnrDb: number }>(
-    `SELECT HOUR(slotStart) AS hour, bandId, SUM(reports) AS reports, COUNT(*) AS slots, MAX(bestSnrDb) AS bestSnrDb
-       FROM reception_slot_counts WHERE stationId = ? AND slotStart >= ? AND slotStart < ?${band}
-      GROUP BY HOUR(slotStart), bandId`,
-    {
-      replacements: [stationId, sqlTime(period.fromMs), sqlTime(period.toMs), ...(period.bandId ? [period.bandId] : [])],
-      type: QueryTypes.SELECT,
-    },
+  return sequelize.query<HourBandRow>(
+    `SELECT HOUR(${time}) AS hour, bandId, SUM(reports) AS reports, ${slots} AS slots, MAX(bestSnrDb) AS bestSnrDb
+       FROM ${table} WHERE stationId = ? AND ${time} >= ? AND ${time} < ?${band}
+      GROUP BY HOUR(${time}), bandId`,
+    { replacements: [stationId, sqlTime(fromMs), sqlTime(toMs), ...(period.bandId ? [period.bandId] : [])], type: QueryTypes.SELECT },
   );
-  return {
-    hourBand: rows.map((r) => ({
-      hour: Number(r.hour),
-      bandId: r.bandId as BandId,
-      reports: Number(r.reports),
-      slots: Number(r.slots),
-      bestSnrDb: Number(r.bestSnrDb),
-    })),
-  };
+}
+
+/**
+ * Reports, heard slots and best SNR per UTC hour and band. Whole hours come from the per-hour aggregate, the
+ * period's partial first and last hours from the per-slot one, so a year reads about 30 times fewer rows.
+ */
+export async function slotFigures(sequelize: Sequelize, stationId: number, period: Period): Promise<SlotFigures> {
+  const innerFrom = Math.ceil(period.fromMs / HOUR_MS) * HOUR_MS;
+  const innerTo = Math.max(innerFrom, Math.floor(period.toMs / HOUR_MS) * HOUR_MS);
+  const parts =
+    innerFrom >= period.toMs
+      ? [hourBandRows(sequelize, 'reception_slot_counts', stationId, period, period.fromMs, period.toMs)]
+      : [
+          hourBandRows(sequelize, 'reception_slot_counts', stationId, period, period.fromMs, innerFrom),
+          hourBandRows(sequelize, 'reception_hour_counts', stationId, period, innerFrom, innerTo),
+          hourBandRows(sequelize, 'reception_slot_counts', stationId, period, innerTo, period.toMs),
+        ];
+  const merged = new Map<string, SlotFigures['hourBand'][number]>();
+  for (const row of (await Promise.all(parts)).flat()) {
+    const key = `${row.hour} ${row.bandId}`;
+    const seen = merged.get(key);
+    merged.set(key, {
+      hour: Number(row.hour),
+      bandId: row.bandId as BandId,
+      reports: Number(row.reports) + (seen?.reports ?? 0),
+      slots: Number(row.slots) + (seen?.slots ?? 0),
+      bestSnrDb: Math.max(Number(row.bestSnrDb), seen?.bestSnrDb ?? -Infinity),
+    });
+  }
+  return { hourBand: [...merged.values()] };
 }
 
 export type ReceiverBandFigures = {
@@ -301,5 +324,6 @@ export async function forgetStationAggregates(stationId: number, transaction?: T
   const sequelize = ListeningPostModel.sequelize!;
   const options = { replacements: [stationId], transaction };
   await sequelize.query('DELETE FROM reception_slot_counts WHERE stationId = ?', options);
+  await sequelize.query('DELETE FROM reception_hour_counts WHERE stationId = ?', options);
   await sequelize.query('DELETE FROM reception_receiver_days WHERE stationId = ?', options);
 }

@@ -105,8 +105,19 @@ async function insertRows(sequelize: Sequelize, rows: StorableReport[], importer
   return inserted;
 }
 
-/** Adds what this batch stored (and nothing a repeat brought) to the per-slot and per-receiver-day aggregates. */
+/** Adds what this batch stored (and nothing a repeat brought) to the per-hour, per-slot and per-receiver-day aggregates. */
 async function updateAggregates(sequelize: Sequelize, batchId: number, transaction: Transaction) {
+  // The hour roll-up first: a slot this batch heard for the first time (no slot row yet) adds one heard slot.
+  await sequelize.query(
+    `INSERT INTO reception_hour_counts (stationId, hourStart, bandId, reports, slots, bestSnrDb)
+       SELECT b.stationId, b.hourStart, b.bandId, SUM(b.n), SUM(s.stationId IS NULL), MAX(b.best)
+         FROM (SELECT stationId, slotStart, bandId, DATE_FORMAT(slotStart, '%Y-%m-%d %H:00:00') AS hourStart, COUNT(*) AS n, MAX(snrDb) AS best
+                 FROM reception_reports WHERE batchId = ? AND stationId IS NOT NULL GROUP BY stationId, slotStart, bandId) b
+         LEFT JOIN reception_slot_counts s ON s.stationId = b.stationId AND s.slotStart = b.slotStart AND s.bandId = b.bandId
+        GROUP BY b.stationId, b.hourStart, b.bandId
+     ON DUPLICATE KEY UPDATE reports = reports + VALUES(reports), slots = slots + VALUES(slots), bestSnrDb = GREATEST(bestSnrDb, VALUES(bestSnrDb))`,
+    { replacements: [batchId], transaction },
+  );
   await sequelize.query(
     `INSERT INTO reception_slot_counts (stationId, slotStart, bandId, reports, bestSnrDb)
        SELECT stationId, slotStart, bandId, COUNT(*), MAX(snrDb) FROM reception_reports
