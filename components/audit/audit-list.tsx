@@ -5,6 +5,7 @@ import { Text } from '../ui/text';
 import { formatUtcDateTime } from '../ui/format';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { describeChange, type ChangeLine } from './change-sentences';
 import type { AuditEntry } from './queries';
 
 export type AuditListProps = { entries: AuditEntry[]; showActor?: boolean };
@@ -23,12 +24,12 @@ const entityWords: Record<string, string> = {
   photo: 'Photo',
 };
 
-/** Who did what and when (UTC), with the changed values before → after. */
+/** Who did what and when (UTC), with the changes in words, before → after. */
 export function AuditList({ entries, showActor = true }: AuditListProps) {
   return (
     <View style={styles.list}>
       {entries.map((entry) => {
-        const changes = summariseChange(entry.before, entry.after);
+        const changes = describeChange(entry).slice(0, 8);
         return (
           <Card key={entry.id} style={styles.card}>
             <View style={styles.head}>
@@ -46,11 +47,11 @@ export function AuditList({ entries, showActor = true }: AuditListProps) {
             {changes.length ? (
               <View style={styles.changes}>
                 {changes.map((change) => (
-                  <Text key={change.key} variant="caption" style={styles.change}>
+                  <Text key={change.label} variant="caption">
                     <Text variant="caption" tone="muted">
-                      {change.key}:{' '}
+                      {change.label}:{' '}
                     </Text>
-                    {change.before} → {change.after}
+                    {changeText(change)}
                   </Text>
                 ))}
               </View>
@@ -62,27 +63,11 @@ export function AuditList({ entries, showActor = true }: AuditListProps) {
   );
 }
 
-type Change = { key: string; before: string; after: string };
-
-/** The keys whose values differ, each as short text; at most six. */
-export function summariseChange(before: unknown, after: unknown): Change[] {
-  const isObject = (value: unknown): value is Record<string, unknown> => !!value && typeof value === 'object' && !Array.isArray(value);
-  if (!isObject(before) && !isObject(after)) {
-    if (before == null && after == null) return [];
-    if (JSON.stringify(before) === JSON.stringify(after)) return [];
-    return [{ key: 'value', before: short(before), after: short(after) }];
-  }
-  const a = isObject(before) ? before : {};
-  const b = isObject(after) ? after : {};
-  const keys = [...new Set([...Object.keys(a), ...Object.keys(b)])].filter((key) => JSON.stringify(a[key]) !== JSON.stringify(b[key]));
-  return keys.slice(0, 6).map((key) => ({ key, before: short(a[key]), after: short(b[key]) }));
-}
-
-function short(value: unknown): string {
-  if (value === undefined || value === null || value === '') return '—';
-  if (typeof value === 'boolean') return value ? 'yes' : 'no';
-  const text = typeof value === 'string' ? value : JSON.stringify(value);
-  return text.length > 60 ? `${text.slice(0, 57)}…` : text;
+/** "before → after", or only the side there is: "was 20 m for 1 slot" / "now enabled". */
+function changeText(change: ChangeLine): string {
+  if (change.before === null) return change.after ?? '—';
+  if (change.after === null) return `was ${change.before}`;
+  return `${change.before} → ${change.after}`;
 }
 
 export type AuditIntroProps = { text: string; csvHref: string };
@@ -123,7 +108,6 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm },
   time: { fontSize: 13 },
   changes: { gap: 2, marginTop: space.xs },
-  change: { fontFamily: fonts.mono },
   intro: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
   introText: { flex: 1, minWidth: 220 },
   csv: {
