@@ -56,7 +56,8 @@ export function ConfirmDialog({
   if (!visible) return placeholder;
   const layer = (
     <View style={[StyleSheet.absoluteFill, styles.backdrop, { backgroundColor: colors.overlay }]}>
-      <Pressable style={StyleSheet.absoluteFill} focusable={false} accessibilityLabel="Close the dialog" onPress={cancel} />
+      {/* A pointer convenience only: Escape and Cancel are the ways for keyboards and screen readers. */}
+      <Pressable style={StyleSheet.absoluteFill} focusable={false} aria-hidden onPress={cancel} />
       <View
         ref={box}
         role="alertdialog"
@@ -92,7 +93,7 @@ export function ConfirmDialog({
   return (
     <>
       {placeholder}
-      <Modal visible transparent animationType="none" onRequestClose={cancel}>
+      <Modal visible transparent animationType="none" onRequestClose={cancel} aria-label={title}>
         {layer}
       </Modal>
     </>

@@ -19,17 +19,12 @@ async function axeFindings(page: Page) {
   return page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> } }).axe;
     const result = await axe.run();
-    // The wide side rail's tab list still holds the clock and mark (aria-required-children): a shell matter, left to the
-    // shell's own change; only that rule on that element is set aside here.
     return result.violations
       .filter((v) => v.impact === 'critical' || v.impact === 'serious')
       .map((v) => ({
         id: v.id,
-        targets: v.nodes
-          .map((n) => (n as { target: string[] }).target)
-          .filter((t) => !(v.id === 'aria-required-children' && document.querySelector(t[0])?.getAttribute('role') === 'tablist')),
+        targets: v.nodes.map((n) => (n as { target: string[] }).target),
       }))
-      .filter((v) => v.targets.length > 0)
       .map((v) => `${v.id}: ${JSON.stringify(v.targets)}`);
   });
 }
