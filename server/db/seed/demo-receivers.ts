@@ -35,7 +35,7 @@ export const DEMO_RECEIVERS: DemoReceiver[] = [
   { callsign: 'Q6BPU', locator: 'IO83QK', bands: ['40m', '80m'] },
   { callsign: 'Q7CQV', locator: 'JP50DH', bands: ['20m', '40m'] },
   { callsign: 'Q8DRW', locator: 'HK36MQ', bands: ['20m', '15m'] },
-  { callsign: 'Q4ESX', locator: 'JJ00AA', bands: ['20m'] },
+  { callsign: 'Q4ESX', locator: 'JJ16QM', bands: ['20m'] },
   { callsign: 'Q5FTY', locator: 'QM05DQ', bands: ['20m', '40m'] },
 ];
 
