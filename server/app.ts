@@ -22,6 +22,7 @@ import { pairingDeviceRouter, pairingRouter } from './features/devices/pairing.r
 import { deviceReceptionsRouter } from './features/receptions/device-receptions.router';
 import { listeningPostsRouter } from './features/receptions/listening-posts.router';
 import { receptionsRouter } from './features/receptions/receptions.router';
+import { analysesRouter } from './features/receptions/analyses.router';
 import { importsRouter } from './features/receptions/imports.router';
 import { schedulesRouter } from './features/schedules/schedules.router';
 import { stationsRouter } from './features/stations/stations.router';
@@ -138,6 +139,7 @@ export function createApp({
   for (const path of ['/units/:id/photos', '/reception-imports', '/reception-imports/preview']) api.post(path, uploads);
   const offlineAfterS = config.DEVICE_OFFLINE_AFTER_S;
   api.use(receptionsRouter({ sequelize }));
+  api.use(analysesRouter({ sequelize }));
   api.use('/listening-posts', listeningPostsRouter({ sequelize }));
   api.use('/stations/:id', schedulesRouter({ sequelize }));
   api.use('/stations/:id', stationDevicesRouter({ sequelize, offlineAfterS }));

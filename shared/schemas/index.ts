@@ -8,3 +8,4 @@ export * from './device';
 export * from './reception';
 export * from './pairing';
 export * from './reception-import';
+export * from './comparison';

@@ -140,6 +140,8 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'get', path: '/api/stations/:station/receptions' },
   { method: 'get', path: '/api/stations/:station/reach' },
   { method: 'get', path: '/api/receptions' },
+  { method: 'get', path: '/api/comparisons' },
+  { method: 'get', path: '/api/clubs/:club/reach' },
   { method: 'get', path: '/api/listening-posts' },
   { method: 'post', path: '/api/listening-posts', body: { name: 'Shed receiver', callsign: 'Q9ZZR', locator: 'JO22ab' } },
   { method: 'get', path: '/api/listening-posts/:post' },
