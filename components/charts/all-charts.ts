@@ -6,3 +6,4 @@ export { default as TimelineChart } from '../schedules/timeline-chart';
 export { default as OccupancyChart } from '../clubs/occupancy-chart';
 export { default as HealthCharts } from '../health/health-charts';
 export { default as ReceptionCharts } from '../receptions/reception-charts';
+export { HourBandChart } from '../receptions/reception-charts';

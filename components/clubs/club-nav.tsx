@@ -5,13 +5,14 @@ import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 
-export type ClubSection = 'members' | 'review' | 'conflicts' | 'occupancy' | 'log';
+export type ClubSection = 'members' | 'review' | 'conflicts' | 'occupancy' | 'reach' | 'log';
 
 const sections: { key: ClubSection; label: string; adminOnly: boolean }[] = [
   { key: 'members', label: 'Members', adminOnly: false },
   { key: 'review', label: 'Review', adminOnly: true },
   { key: 'conflicts', label: 'Collisions', adminOnly: true },
   { key: 'occupancy', label: 'Band use', adminOnly: true },
+  { key: 'reach', label: 'Reach', adminOnly: true },
   { key: 'log', label: 'Log', adminOnly: true },
 ];
 
@@ -26,6 +27,8 @@ export function clubSectionHref(clubId: number, section: ClubSection): Href {
       return { pathname: '/club/[clubId]/conflicts', params: { clubId: id } };
     case 'occupancy':
       return { pathname: '/club/[clubId]/occupancy', params: { clubId: id } };
+    case 'reach':
+      return { pathname: '/club/[clubId]/reach', params: { clubId: id } };
     case 'log':
       return { pathname: '/club/[clubId]/log', params: { clubId: id } };
   }

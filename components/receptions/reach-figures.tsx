@@ -7,7 +7,7 @@ import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { formatCount, formatDb, formatKm, formatShare } from './format';
 
-type Figure = { label: string; value: string; note?: string };
+export type Figure = { label: string; value: string; note?: string };
 
 export function reachFigures(reach: Reach): Figure[] {
   return [
@@ -34,9 +34,14 @@ export function reachFigures(reach: Reach): Figure[] {
 
 /** The period's figures as small cards that wrap: two to a row on a phone, more when there is room. */
 export function ReachFigures({ reach }: { reach: Reach }) {
+  return <FigureGrid label="Figures for this period" figures={reachFigures(reach)} />;
+}
+
+/** Labelled figures as small wrapping cards (the results, a comparison, a club's reach). */
+export function FigureGrid({ label, figures }: { label: string; figures: Figure[] }) {
   return (
-    <View style={styles.grid} accessibilityLabel="Figures for this period">
-      {reachFigures(reach).map((figure) => (
+    <View style={styles.grid} accessibilityLabel={label}>
+      {figures.map((figure) => (
         <Card key={figure.label} style={styles.card}>
           <Text variant="caption" tone="muted">
             {figure.label}

@@ -1,3 +1,4 @@
+import type { Href } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 
@@ -8,6 +9,7 @@ import { Card } from '../ui/card';
 import { formatUtcDateTime } from '../ui/format';
 import { ErrorState, LoadingState } from '../ui/query-states';
 import { Text } from '../ui/text';
+import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
 import { DownloadLink } from '../workshop/download-link';
 import { LazyReceptionCharts } from './lazy-parts';
@@ -32,6 +34,8 @@ export type ResultsViewProps = {
   onPage: (page: number) => void;
   csvHref: string;
   csvFileName: string;
+  /** the Compare screen with this station as A */
+  compareHref?: Href;
 };
 
 function useWidth(initial: number): [number, (event: LayoutChangeEvent) => void] {
@@ -113,6 +117,7 @@ export function ResultsView(props: ResultsViewProps) {
         </Text>
       </View>
       <ResultsFilters {...filters} />
+      {props.compareHref ? <TextLink href={props.compareHref} label="Compare with another station or period" /> : null}
       {body}
     </>
   );

@@ -44,6 +44,7 @@ export default function StationsRoute() {
       </View>
       {body}
       <TextLink href="/receivers" label="Listening posts and report imports" />
+      {stations.data?.length ? <TextLink href="/compare" label="Compare two stations, or one in two periods" /> : null}
     </Screen>
   );
 }

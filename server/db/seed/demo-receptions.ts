@@ -38,6 +38,29 @@ const OTHER_TRANSMITTERS = [
 
 type Receiver = { callsign: string; locator: string; bands: string[]; origin: { importerId: number; listeningPostId: number | null } };
 
+/**
+ * Tobin's hilltop portable (Q2TRY/P) sent on 20 m in the slot after each of the shed rig's 20 m transmissions, from the
+ * hill about 3 dB better heard; most receivers that heard one heard both, so the Compare screen has common ground.
+ */
+function addPortableBesideShed(stations: StationModel[], batches: Map<Receiver, ReportToIngest[]>, random: () => number, nowMs: number) {
+  const portable = stations.find((s) => s.callsign === 'Q2TRY/P');
+  if (!portable) return;
+  for (const [receiver, reports] of batches) {
+    const fromShed = reports.filter((r) => r.txCallsign === 'Q2TRY' && r.bandId === '20m');
+    for (const shed of fromShed) {
+      if (random() < 0.15 || Date.parse(shed.slotUtc) + 2 * SLOT_MS > nowMs) continue; // not heard this time, or not sent yet
+      reports.push({
+        ...shed,
+        slotUtc: new Date(Date.parse(shed.slotUtc) + SLOT_MS).toISOString(),
+        txCallsign: portable.callsign,
+        txLocator: portable.locator,
+        snrDb: Math.max(-30, Math.min(20, Math.round(shed.snrDb + 3 + (random() + random() - 1) * 4))),
+        rxCallsign: receiver.callsign,
+      });
+    }
+  }
+}
+
 export async function seedDemoReceptions(sequelize: Sequelize, nowMs: number) {
   const people = await UserModel.findAll({ order: [['id', 'ASC']] });
   const admin = people[0];
@@ -121,6 +144,7 @@ export async function seedDemoReceptions(sequelize: Sequelize, nowMs: number) {
       }
     }
   }
+  addPortableBesideShed(stations, batches, random, nowMs);
   // The operators' own receivers also hear transmitters outside Faintline, every tenth slot or so.
   for (const receiver of receivers.filter((r) => r.origin.listeningPostId !== null && !simPostIds.has(r.callsign))) {
     for (const other of OTHER_TRANSMITTERS) {

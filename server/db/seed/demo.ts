@@ -201,7 +201,16 @@ const people: DemoPerson[] = [
           nth: 5,
         },
       },
-      { name: 'Hilltop portable', callsign: 'Q2TRY/P', locator: 'JO22NB', notes: 'Weekend field station on batteries.' },
+      {
+        name: 'Hilltop portable',
+        callsign: 'Q2TRY/P',
+        locator: 'JO22NB',
+        notes: 'Weekend field station on batteries.',
+        unit: 'Shed kit',
+        audioOffsetHz: 1520,
+        // 20 m enabled so its reports match it: it ran beside the shed rig on the demo's days (see demo-receptions.ts)
+        bands: [{ bandId: '20m', ppm: null }],
+      },
     ],
   },
 ];

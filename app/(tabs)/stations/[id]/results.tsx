@@ -92,6 +92,7 @@ export default function StationResultsRoute() {
         onPage={setPageNumber}
         csvHref={receptionsCsvHref(stationId, filter)}
         csvFileName={`${station.data.callsign}-reports.csv`}
+        compareHref={{ pathname: '/compare', params: { a: String(stationId) } }}
       />
     );
   }
