@@ -5,26 +5,26 @@ import { useState } from 'react';
 import { CompareForm } from '@/components/analyses/compare-form';
 import { compareDefaults } from '@/components/analyses/compare-form-values';
 import { ComparisonView } from '@/components/analyses/comparison-view';
-import { fetchComparison, useComparisonQuery, type ComparisonRequest } from '@/components/analyses/queries';
-import { useStationsQuery } from '@/components/stations/queries';
+import { fetchComparison, useComparableStations, useComparisonQuery, type ComparisonRequest } from '@/components/analyses/queries';
+import { useSessionQuery } from '@/components/auth/queries';
 import { Card } from '@/components/ui/card';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
-import { isBandId } from '@/shared/domain/bands';
 
 export default function CompareRoute() {
   const startWith = Number(useLocalSearchParams<{ a?: string }>().a);
-  const stations = useStationsQuery();
+  const user = useSessionQuery().data;
+  const stations = useComparableStations(user?.id, user?.adminOfClubIds ?? []);
   const queryClient = useQueryClient();
   const [request, setRequest] = useState<ComparisonRequest | null>(null);
   const [defaults] = useState(() => compareDefaults(Date.now(), Number.isInteger(startWith) && startWith > 0 ? startWith : null));
   const comparison = useComparisonQuery(request);
 
   let body;
-  if (stations.isPending) body = <LoadingState label="Loading your stations…" />;
-  else if (stations.isError)
+  if (stations.isError)
     body = <ErrorState title="Your stations could not be loaded" error={stations.error} onRetry={() => stations.refetch()} />;
+  else if (!stations.data) body = <LoadingState label="Loading your stations…" />;
   else if (stations.data.length === 0)
     body = (
       <EmptyState title="No stations yet" message="Add a station first; then compare it with another, or with itself in another period." />
@@ -34,15 +34,7 @@ export default function CompareRoute() {
       <>
         <Card>
           <CompareForm
-            stations={stations.data.map((s) => ({
-              id: s.id,
-              name: s.name,
-              callsign: s.callsign,
-              bandIds: s.bands
-                .filter((b) => b.enabled)
-                .map((b) => b.bandId)
-                .filter(isBandId),
-            }))}
+            stations={stations.data}
             defaults={defaults}
             onCompare={async (next) => {
               await fetchComparison(queryClient, next);

@@ -9,19 +9,40 @@ import { useAppTheme } from '../ui/theme-provider';
 
 type Column<T> = { title: string; cell: (row: T) => string; mono?: boolean; wide?: boolean };
 
-/** A plain table of rows; each row is read out as one line. */
+/** A table of rows on a wide screen; on a phone each row is a small block (name first, then "title value" pairs that wrap). */
 function SimpleTable<T>({
   rows,
   columns,
   keyOf,
   rowLabel,
+  wide,
 }: {
   rows: T[];
   columns: Column<T>[];
   keyOf: (row: T) => string;
   rowLabel: (row: T) => string;
+  wide: boolean;
 }) {
   const { colors } = useAppTheme();
+  if (!wide) {
+    const [first, ...rest] = columns;
+    return (
+      <View>
+        {rows.map((row) => (
+          <View key={keyOf(row)} style={[styles.block, { borderColor: colors.border }]} accessibilityLabel={rowLabel(row)}>
+            <Text variant="label">{first.cell(row)}</Text>
+            <View style={styles.pairs}>
+              {rest.map((c) => (
+                <Text key={c.title} tone="muted">
+                  {c.title} <Text variant={c.mono ? 'mono' : 'body'}>{c.cell(row)}</Text>
+                </Text>
+              ))}
+            </View>
+          </View>
+        ))}
+      </View>
+    );
+  }
   return (
     <View>
       <View style={[styles.row, { borderColor: colors.border }]}>
@@ -44,9 +65,10 @@ function SimpleTable<T>({
   );
 }
 
-export function ClubStationsTable({ stations }: { stations: ClubStationReach[] }) {
+export function ClubStationsTable({ stations, wide }: { stations: ClubStationReach[]; wide: boolean }) {
   return (
     <SimpleTable
+      wide={wide}
       rows={stations}
       keyOf={(s) => String(s.stationId)}
       rowLabel={(s) =>
@@ -63,9 +85,10 @@ export function ClubStationsTable({ stations }: { stations: ClubStationReach[] }
   );
 }
 
-export function ClubPostsTable({ posts }: { posts: ClubPostHeard[] }) {
+export function ClubPostsTable({ posts, wide }: { posts: ClubPostHeard[]; wide: boolean }) {
   return (
     <SimpleTable
+      wide={wide}
       rows={posts}
       keyOf={(p) => String(p.postId)}
       rowLabel={(p) =>
@@ -74,7 +97,8 @@ export function ClubPostsTable({ posts }: { posts: ClubPostHeard[] }) {
       columns={[
         { title: 'Listening post', cell: (p) => `${p.name} · ${p.callsign}`, wide: true },
         { title: 'Member', cell: (p) => p.ownerName },
-        { title: 'Heard', cell: (p) => `${formatCount(p.reports)} from ${p.transmitters}`, mono: true },
+        { title: 'Reports heard', cell: (p) => formatCount(p.reports), mono: true },
+        { title: 'Transmitters', cell: (p) => formatCount(p.transmitters), mono: true },
         { title: 'Furthest', cell: (p) => formatKm(p.furthestKm), mono: true },
         { title: 'Bands', cell: (p) => (p.bands.length ? p.bands.map(bandName).join(', ') : '—') },
       ]}
@@ -86,4 +110,6 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', borderBottomWidth: 1, paddingVertical: space.sm, gap: space.sm },
   cell: { flex: 1, minWidth: 0 },
   wide: { flex: 2, minWidth: 0 },
+  block: { borderBottomWidth: 1, paddingVertical: space.sm, gap: 2 },
+  pairs: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.md },
 });

@@ -47,13 +47,21 @@ export function ClubReachView({ reach, wide }: { reach: ClubReach; wide: boolean
         <Text variant="heading" accessibilityRole="header">
           Member stations
         </Text>
-        {reach.stations.length ? <ClubStationsTable stations={reach.stations} /> : <Text tone="muted">No member has a station yet.</Text>}
+        {reach.stations.length ? (
+          <ClubStationsTable stations={reach.stations} wide={wide} />
+        ) : (
+          <Text tone="muted">No member has a station yet.</Text>
+        )}
       </Card>
       <Card style={styles.card}>
         <Text variant="heading" accessibilityRole="header">
           The club’s listening posts
         </Text>
-        {reach.posts.length ? <ClubPostsTable posts={reach.posts} /> : <Text tone="muted">No member has a listening post yet.</Text>}
+        {reach.posts.length ? (
+          <ClubPostsTable posts={reach.posts} wide={wide} />
+        ) : (
+          <Text tone="muted">No member has a listening post yet.</Text>
+        )}
       </Card>
       <Card style={styles.card}>
         <Text variant="caption" tone="muted">

@@ -2,8 +2,6 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useController, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import type { BandId } from '@/shared/domain/bands';
-
 import { serverMessage, submitWithServerErrors } from '../form/apply-server-errors';
 import { FormTextField } from '../form/form-text-field';
 import { bandName } from '../receptions/format';
@@ -14,9 +12,7 @@ import { SegmentedChoice } from '../ui/segmented-choice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { compareFormSchema, requestOf, type CompareFormValues } from './compare-form-values';
-import type { ComparisonRequest } from './queries';
-
-export type ComparableStation = { id: number; name: string; callsign: string; bandIds: BandId[] };
+import type { ComparableStation, ComparisonRequest } from './queries';
 
 export type CompareFormProps = {
   stations: ComparableStation[];
@@ -39,7 +35,7 @@ function StationChips({
   return (
     <ChoiceChips<number>
       label={label}
-      options={stations.map((s) => ({ value: s.id, label: `${s.name} · ${s.callsign}` }))}
+      options={stations.map((s) => ({ value: s.id, label: `${s.name} · ${s.callsign}${s.ownerName ? ` (${s.ownerName})` : ''}` }))}
       chipLabel={(option) => `${label}: ${option.label}`}
       value={field.value ?? null}
       onChange={field.onChange}

@@ -8,7 +8,7 @@ import { Card } from '../ui/card';
 import { formatSigned, formatUtcDateTime } from '../ui/format';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { DeltaTable } from './delta-table';
+import { barSpanDb, DeltaTable } from './delta-table';
 import { OneSideList } from './one-side-list';
 
 const dB = (value: number) => formatSigned(value, 1, 'dB');
@@ -26,6 +26,7 @@ function SideLine({ letter, side }: { letter: 'A' | 'B'; side: ComparisonSide })
 /** The comparison's answer: verdict, figures, by direction and distance, and who heard one side only. */
 export function ComparisonView({ comparison }: { comparison: Comparison }) {
   const c = comparison;
+  const spanDb = barSpanDb([...c.bySector, ...c.byDistance]);
   const figures = [
     { label: 'B − A per watt (median)', value: c.medianDeltaDb === null ? 'too few' : dB(c.medianDeltaDb) },
     { label: '95 % interval', value: c.ci95 ? `${dB(c.ci95[0])} to ${dB(c.ci95[1])}` : '—' },
@@ -46,10 +47,10 @@ export function ComparisonView({ comparison }: { comparison: Comparison }) {
       </Card>
       <FigureGrid label="Comparison figures" figures={figures} />
       <Card>
-        <DeltaTable title="By direction from A" firstColumn="Towards the" groups={c.bySector} />
+        <DeltaTable title="By direction from A" firstColumn="Towards the" groups={c.bySector} spanDb={spanDb} />
       </Card>
       <Card>
-        <DeltaTable title="By distance" firstColumn="Distance" groups={c.byDistance} />
+        <DeltaTable title="By distance" firstColumn="Distance" groups={c.byDistance} spanDb={spanDb} />
       </Card>
       <View style={styles.sides}>
         <OneSideList title={`Heard A only (${c.a.callsign})`} receivers={c.onlyA} more={c.onlyAMore} />

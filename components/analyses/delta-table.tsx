@@ -34,12 +34,17 @@ function DeltaBar({ group, spanDb }: { group: GroupFigures; spanDb: number }) {
   );
 }
 
-export type DeltaTableProps = { title: string; groups: GroupFigures[]; firstColumn: string };
+export type DeltaTableProps = { title: string; groups: GroupFigures[]; firstColumn: string; spanDb: number };
+
+/** One scale for every bar of a comparison: whole dB, at least ±3 dB, with room beyond the widest interval. */
+export function barSpanDb(groups: GroupFigures[]): number {
+  const widest = Math.max(0, ...groups.flatMap((g) => (g.enough && g.ci95 ? g.ci95.map(Math.abs) : [])));
+  return Math.max(3, Math.ceil(widest + 0.5));
+}
 
 /** B − A per group (direction or distance): pairs, the estimate with its interval, and a bar around 0. */
-export function DeltaTable({ title, groups, firstColumn }: DeltaTableProps) {
+export function DeltaTable({ title, groups, firstColumn, spanDb }: DeltaTableProps) {
   const { colors } = useAppTheme();
-  const spanDb = Math.max(3, ...groups.flatMap((g) => (g.enough && g.ci95 ? g.ci95.map(Math.abs) : [])));
   return (
     <View style={styles.root}>
       <Text variant="heading" accessibilityRole="header">
@@ -71,8 +76,7 @@ export function DeltaTable({ title, groups, firstColumn }: DeltaTableProps) {
         </View>
       ))}
       <Text variant="caption" tone="muted">
-        The bar runs from −{spanDb.toFixed(1)} dB to +{spanDb.toFixed(1)} dB; the line marks 0, the block the 95 % interval, the tick the
-        median difference.
+        The bar runs from −{spanDb} dB to +{spanDb} dB; the line marks 0, the block the 95 % interval, the tick the median difference.
       </Text>
     </View>
   );

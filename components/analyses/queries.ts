@@ -1,10 +1,12 @@
-import { keepPreviousData, useQuery, type QueryClient } from '@tanstack/react-query';
+import { keepPreviousData, useQueries, useQuery, type QueryClient } from '@tanstack/react-query';
 
 import type { ClubReach, Comparison } from '@/shared/api/analyses';
 import { api } from '@/shared/api/client';
-import type { BandId } from '@/shared/domain/bands';
+import { isBandId, type BandId } from '@/shared/domain/bands';
+import type { Station } from '@/shared/schemas';
 
 import { staleTime } from '../query/query-client';
+import { stationKeys, useStationsQuery } from '../stations/queries';
 
 /** What the Compare screen asks: two stations over one period, or one station (or two) over two periods. All times ISO UTC. */
 export type ComparisonRequest =
@@ -49,4 +51,37 @@ export function useClubReachQuery(clubId: number, range: { from: string; to: str
     staleTime: staleTime.short,
     placeholderData: keepPreviousData,
   });
+}
+
+export type ComparableStation = { id: number; name: string; callsign: string; ownerName: string | null; bandIds: BandId[] };
+
+const comparable = (s: Station, own: boolean): ComparableStation => ({
+  id: s.id,
+  name: s.name,
+  callsign: s.callsign,
+  ownerName: own ? null : s.ownerName,
+  bandIds: s.bands
+    .filter((b) => b.enabled)
+    .map((b) => b.bandId)
+    .filter(isBandId),
+});
+
+/** The stations someone may compare: their own, then (for a club admin) the members' stations. */
+export function useComparableStations(userId: number | undefined, adminOfClubIds: number[]) {
+  const own = useStationsQuery();
+  const clubs = useQueries({
+    queries: adminOfClubIds.map((clubId) => ({
+      queryKey: stationKeys.club(clubId),
+      queryFn: () => api<Station[]>(`/clubs/${clubId}/stations`),
+      staleTime: staleTime.normal,
+    })),
+  });
+  const seen = new Set<number>();
+  const data: ComparableStation[] = [];
+  for (const station of [...(own.data ?? []), ...clubs.flatMap((c) => c.data ?? [])]) {
+    if (seen.has(station.id)) continue;
+    seen.add(station.id);
+    data.push(comparable(station, station.ownerId === userId));
+  }
+  return { isError: own.isError, error: own.error, refetch: own.refetch, data: own.data ? data : undefined };
 }

@@ -18,6 +18,16 @@ async function look(page: Page, name: string) {
   assert.deepEqual(await axeFindings(page), [], `axe findings on ${name}`);
 }
 
+/** A screenshot with this heading scrolled to the top of the view. */
+async function shotAt(page: Page, heading: string, name: string) {
+  await page
+    .getByRole('heading', { name: heading, exact: true })
+    .locator('visible=true')
+    .first()
+    .evaluate((e) => e.scrollIntoView());
+  await screenshot(page, name);
+}
+
 const radio = (page: Page, group: string, name: string) =>
   page.getByRole('radiogroup', { name: group }).locator('visible=true').first().getByRole('radio', { name, exact: true });
 const button = (page: Page, name: string) => page.getByRole('button', { name, exact: true }).locator('visible=true').first();
@@ -57,6 +67,8 @@ for (const viewport of VIEWPORTS) {
         await verdict.scrollIntoViewIfNeeded();
         assert.deepEqual(browser.errors, []);
         await look(page, `compare-${v}`);
+        await shotAt(page, 'By direction from A', `compare-sectors-${v}`);
+        await shotAt(page, 'Heard A only (Q2TRY)', `compare-one-side-${v}`);
 
         // one station in two periods: the week before the demo has no reports, so it claims nothing
         await radio(page, 'What to compare', 'One station, two periods').click();
@@ -98,8 +110,8 @@ for (const viewport of VIEWPORTS) {
           .waitFor();
         assert.deepEqual(admin.errors, []);
         await look(admin.page, `club-reach-${v}`);
-        await admin.page.getByText('Member stations').first().scrollIntoViewIfNeeded();
-        await screenshot(admin.page, `club-reach-tables-${v}`);
+        await shotAt(admin.page, 'Member stations', `club-reach-stations-${v}`);
+        await shotAt(admin.page, 'The club’s listening posts', `club-reach-posts-${v}`);
 
         await signIn(member.page, 'second@faintline.example');
         await visibleText(member.page, /Overview|Stations/).waitFor();

@@ -9,6 +9,8 @@ import { hodgesLehmann } from './signed-rank';
 
 /** Below this many paired receiver-hours a group gets "too few to say", never a number. */
 export const MIN_PAIRS = 10;
+/** The verdict names at most this many directions (those with the most pairs). */
+export const VERDICT_SECTORS = 3;
 
 /** One side's reports of one receiver in one hour: their count and mean SNR per watt, with the receiver's path from the station. */
 export type SideCell = {
@@ -151,12 +153,15 @@ export function verdictOf(overall: GroupFigures, bySector: GroupFigures[], commo
     );
   }
   const sentences = [`${capitalised(differenceWords(overall.medianDeltaDb, overall.ci95))}, from ${reports}.`];
-  const clauses = bySector
-    .filter((s) => s.enough && s.medianDeltaDb !== null)
-    .map((s) => `${differenceWords(s.medianDeltaDb!, s.ci95)} towards the ${s.words}`);
+  // the best-supported directions only (most pairs, in compass order): the table holds the rest
+  const supported = bySector.filter((s) => s.enough && s.medianDeltaDb !== null);
+  const shown = new Set([...supported].sort((x, y) => y.pairs - x.pairs).slice(0, VERDICT_SECTORS));
+  const clauses = supported.filter((s) => shown.has(s)).map((s) => `${differenceWords(s.medianDeltaDb!, s.ci95)} towards the ${s.words}`);
   const tooFew = bySector.filter((s) => !s.enough && s.pairs > 0).map((s) => s.words);
   if (tooFew.length) clauses.push(`too few towards the ${joinWords(tooFew)} to say`);
   if (clauses.length) sentences.push(`By direction: ${clauses.join('; ')}.`);
+  const more = supported.length - shown.size;
+  if (more > 0) sentences.push(`${more} more direction${more === 1 ? '' : 's'} in the table by direction.`);
   return sentences.join(' ');
 }
 

@@ -152,6 +152,23 @@ describe('compareCells', () => {
     expect(found.byDistance.find((d) => d.key === '500-1500')).toMatchObject({ pairs: 424, enough: true });
   });
 
+  it('when many directions have enough pairs, the verdict names the three best supported and points to the table for the rest', () => {
+    const noise = normalDeviates(21);
+    const sides = [0, 45, 90, 135, 180].map((bearingDeg, i) =>
+      cells(noise, { receivers: 4 + i, hours: 5, bearingDeg, distanceKm: 900, trueDeltaDb: 3, prefix: `QS${i}` }),
+    );
+    const found = compareCells(
+      sides.flatMap((x) => x.a),
+      sides.flatMap((x) => x.b),
+    );
+    expect(found.bySector.filter((s) => s.enough).map((s) => s.key)).toEqual(['N', 'NE', 'E', 'SE', 'S']);
+    // the most pairs are towards E, SE and S (6, 7 and 8 receivers × 5 hours)
+    expect(found.verdict).toMatch(
+      /towards the east; .* towards the south-east; .* towards the south\. 2 more directions in the table by direction\.$/,
+    );
+    expect(found.verdict).not.toContain('towards the north');
+  });
+
   it('when the true difference is 0, the interval contains 0 and the verdict says "no clear difference"', () => {
     const noise = normalDeviates(7);
     const { a, b } = cells(noise, { receivers: 20, hours: 6, bearingDeg: 10, distanceKm: 300, trueDeltaDb: 0, prefix: 'QN' });
