@@ -2,9 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { Stack, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 
-import { CompareForm } from '@/components/analyses/compare-form';
-import { compareDefaults } from '@/components/analyses/compare-form-values';
-import { ComparisonView } from '@/components/analyses/comparison-view';
+import { LazyCompareForm, LazyComparisonView } from '@/components/analyses/lazy-parts';
 import { fetchComparison, useComparableStations, useComparisonQuery, type ComparisonRequest } from '@/components/analyses/queries';
 import { useSessionQuery } from '@/components/auth/queries';
 import { Card } from '@/components/ui/card';
@@ -18,7 +16,6 @@ export default function CompareRoute() {
   const stations = useComparableStations(user?.id, user?.adminOfClubIds ?? []);
   const queryClient = useQueryClient();
   const [request, setRequest] = useState<ComparisonRequest | null>(null);
-  const [defaults] = useState(() => compareDefaults(Date.now(), Number.isInteger(startWith) && startWith > 0 ? startWith : null));
   const comparison = useComparisonQuery(request);
 
   let body;
@@ -33,16 +30,16 @@ export default function CompareRoute() {
     body = (
       <>
         <Card>
-          <CompareForm
+          <LazyCompareForm
             stations={stations.data}
-            defaults={defaults}
+            startWith={Number.isInteger(startWith) && startWith > 0 ? startWith : null}
             onCompare={async (next) => {
               await fetchComparison(queryClient, next);
               setRequest(next);
             }}
           />
         </Card>
-        {comparison.data ? <ComparisonView comparison={comparison.data} /> : null}
+        {comparison.data ? <LazyComparisonView comparison={comparison.data} /> : null}
       </>
     );
   return (

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 import type { BandId } from '@/shared/domain/bands';
-import { MAX_COMPARISON_DAYS } from '@/shared/schemas';
+import { MAX_COMPARISON_DAYS } from '@/shared/schemas/comparison';
 
 import { parseUtcInput, utcInputText } from '../receptions/period';
 import type { ComparisonRequest } from './queries';

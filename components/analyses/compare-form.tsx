@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
 import { useController, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
@@ -11,12 +12,13 @@ import { Notice } from '../ui/notice';
 import { SegmentedChoice } from '../ui/segmented-choice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
-import { compareFormSchema, requestOf, type CompareFormValues } from './compare-form-values';
+import { compareDefaults, compareFormSchema, requestOf, type CompareFormValues } from './compare-form-values';
 import type { ComparableStation, ComparisonRequest } from './queries';
 
 export type CompareFormProps = {
   stations: ComparableStation[];
-  defaults: CompareFormValues;
+  /** the station to start with as A (from a results screen), if any */
+  startWith: number | null;
   onCompare: (request: ComparisonRequest) => Promise<unknown>;
 };
 
@@ -67,7 +69,8 @@ function TimeFields({
 }
 
 /** Choose two stations over one period, or one station over two periods, and a band. */
-export function CompareForm({ stations, defaults, onCompare }: CompareFormProps) {
+export function CompareForm({ stations, startWith, onCompare }: CompareFormProps) {
+  const [defaults] = useState(() => compareDefaults(Date.now(), startWith));
   const form = useForm<CompareFormValues>({ resolver: zodResolver(compareFormSchema), defaultValues: defaults });
   const [mode, a, b] = useWatch({ control: form.control, name: ['mode', 'a', 'b'] });
   const modeField = useController({ control: form.control, name: 'mode' });

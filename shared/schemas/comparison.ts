@@ -1,3 +1,4 @@
+/** Not re-exported from the index: only the server and the lazily loaded Compare form use it. */
 import { reportTimeField } from './reception';
 import { bandIdField } from './unit';
 import { z } from './zod-setup';

@@ -8,4 +8,3 @@ export * from './device';
 export * from './reception';
 export * from './pairing';
 export * from './reception-import';
-export * from './comparison';

@@ -4,7 +4,7 @@
  */
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { BandId } from '@/shared/domain/bands';
-import type { SideCell } from '@/shared/domain/reception';
+import type { SideCell } from '@/shared/domain/reception/comparison';
 
 const sqlTime = (ms: number) => new Date(ms).toISOString().slice(0, 23).replace('T', ' ');
 

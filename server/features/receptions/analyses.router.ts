@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import { clubReachQuery, comparisonQuery } from '@/shared/schemas';
+import { clubReachQuery, comparisonQuery } from '@/shared/schemas/comparison';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import * as analyses from './analyses.service';

@@ -1,16 +1,13 @@
 import { cumulativeStdNormalProbability, median } from 'simple-statistics';
+import { compareCells, MIN_PAIRS, sectorOf, type SideCell } from '@/shared/domain/reception/comparison';
+import { snrPerWattDb } from '@/shared/domain/reception';
 import {
-  compareCells,
   hodgesLehmann,
-  MIN_PAIRS,
-  sectorOf,
   signedRankCriticalIndex,
   signedRankNullDistribution,
   signedRankStatistic,
-  snrPerWattDb,
-  type SideCell,
   Z_975,
-} from '@/shared/domain/reception';
+} from '@/shared/domain/reception/signed-rank';
 import { seededRandom } from '@/shared/domain/schedule/prng';
 
 /** Every Walsh average (x_i + x_j) / 2, i ≤ j, listed the slow way (Hollander & Wolfe, Nonparametric Statistical Methods, eq. 3.17). */

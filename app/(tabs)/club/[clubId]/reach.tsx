@@ -1,7 +1,7 @@
 import { Stack, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 
-import { ClubReachView } from '@/components/analyses/club-reach-view';
+import { LazyClubReachView } from '@/components/analyses/lazy-parts';
 import { useClubReachQuery } from '@/components/analyses/queries';
 import { ClubNav } from '@/components/clubs/club-nav';
 import { useClubQuery } from '@/components/clubs/queries';
@@ -26,7 +26,7 @@ export default function ClubReachRoute() {
   if (reach.isPending) body = <LoadingState label="Gathering the club’s reports…" />;
   else if (reach.isError && !reach.data)
     body = <ErrorState title="The club’s reach could not be loaded" error={reach.error} onRetry={() => reach.refetch()} />;
-  else if (reach.data) body = <ClubReachView reach={reach.data} wide={isWide} />;
+  else if (reach.data) body = <LazyClubReachView reach={reach.data} wide={isWide} />;
   const name = club.data?.name ?? 'Club';
   return (
     <Screen maxWidth={1240}>
