@@ -43,13 +43,13 @@ export function sectorOf(bearingDeg: number): Sector {
   return SECTORS[Math.floor((normalized + 22.5) / 45) % 8];
 }
 
-/** Distance bands in km: [from, to). */
+/** Distance bands in km: [from, to); digit groups joined by a narrow no-break space, so a number never breaks. */
 export const DISTANCE_BANDS = [
   { key: '0-500', fromKm: 0, toKm: 500, words: 'under 500 km' },
-  { key: '500-1500', fromKm: 500, toKm: 1500, words: '500 to 1 500 km' },
-  { key: '1500-3000', fromKm: 1500, toKm: 3000, words: '1 500 to 3 000 km' },
-  { key: '3000-6000', fromKm: 3000, toKm: 6000, words: '3 000 to 6 000 km' },
-  { key: '6000+', fromKm: 6000, toKm: Infinity, words: 'over 6 000 km' },
+  { key: '500-1500', fromKm: 500, toKm: 1500, words: '500 to 1\u202f500 km' },
+  { key: '1500-3000', fromKm: 1500, toKm: 3000, words: '1\u202f500 to 3\u202f000 km' },
+  { key: '3000-6000', fromKm: 3000, toKm: 6000, words: '3\u202f000 to 6\u202f000 km' },
+  { key: '6000+', fromKm: 6000, toKm: Infinity, words: 'over 6\u202f000 km' },
 ] as const;
 
 export type GroupFigures = {
