@@ -79,9 +79,12 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
               </Text>
             ) : null}
             {enabled && blocked ? (
-              <Text variant="label" tone="danger">
-                {blocked} The beacon will not transmit here.
-              </Text>
+              <>
+                <Text variant="label" tone="danger">
+                  {blocked} The beacon will not transmit here.
+                </Text>
+                {unit && !readOnly ? <UnitFiltersLink unitId={unit.id} /> : null}
+              </>
             ) : null}
             {onAir ? (
               <>
@@ -112,6 +115,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
             {unit ? 'Bands no filter covers' : 'Bands'}
           </Text>
           {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
+          {unit && !readOnly ? <UnitFiltersLink unitId={unit.id} /> : null}
           {closed.map(({ band, blocked }) => (
             <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>
               <Switch
@@ -135,6 +139,19 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
   );
 }
 
+/** From a band a filter cannot serve to the unit's form, where the filters are changed. */
+function UnitFiltersLink({ unitId }: { unitId: number }) {
+  return (
+    <Link href={{ pathname: '/units/[id]/edit', params: { id: String(unitId) } }} asChild>
+      <Pressable accessibilityRole="link" style={[styles.link, styles.tall]}>
+        <Text variant="label" tone="primary" style={styles.underline}>
+          Change the unit’s filters
+        </Text>
+      </Pressable>
+    </Link>
+  );
+}
+
 const NO_UNIT = 'Assign a unit to this station first: the unit’s filters decide which bands can be enabled.';
 
 const styles = StyleSheet.create({
@@ -142,6 +159,7 @@ const styles = StyleSheet.create({
   card: { gap: space.md },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', columnGap: space.md },
   link: { alignSelf: 'flex-start' },
+  tall: { minHeight: 44, justifyContent: 'center' },
   underline: { textDecorationLine: 'underline' },
   closedRow: { borderTopWidth: 1, paddingTop: space.xs },
 });
