@@ -12,6 +12,7 @@ import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { formatMHz, formatSigned } from '../ui/format';
 import { Switch } from '../ui/switch';
+import { TextLink } from '../ui/text-link';
 import { WindowGauge } from './window-gauge';
 
 export type BandListProps = {
@@ -141,15 +142,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
 
 /** From a band a filter cannot serve to the unit's form, where the filters are changed. */
 function UnitFiltersLink({ unitId }: { unitId: number }) {
-  return (
-    <Link href={{ pathname: '/units/[id]/edit', params: { id: String(unitId) } }} asChild>
-      <Pressable accessibilityRole="link" style={[styles.link, styles.tall]}>
-        <Text variant="label" tone="primary" style={styles.underline}>
-          Change the unit’s filters
-        </Text>
-      </Pressable>
-    </Link>
-  );
+  return <TextLink href={{ pathname: '/units/[id]/edit', params: { id: String(unitId) } }} label="Change the unit’s filters" />;
 }
 
 const NO_UNIT = 'Assign a unit to this station first: the unit’s filters decide which bands can be enabled.';
@@ -159,7 +152,6 @@ const styles = StyleSheet.create({
   card: { gap: space.md },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', columnGap: space.md },
   link: { alignSelf: 'flex-start' },
-  tall: { minHeight: 44, justifyContent: 'center' },
   underline: { textDecorationLine: 'underline' },
   closedRow: { borderTopWidth: 1, paddingTop: space.xs },
 });
