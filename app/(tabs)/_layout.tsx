@@ -37,6 +37,7 @@ export default function TabsLayoutRoute() {
       <Tabs.Screen name="proposals" options={{ title: 'Offset proposals · Faintline' }} />
       <Tabs.Screen name="activity" options={{ title: 'Your activity log · Faintline' }} />
       <Tabs.Screen name="receivers" options={{ title: 'Listening posts · Faintline' }} />
+      <Tabs.Screen name="help" options={{ title: 'Help · Faintline' }} />
     </Tabs>
   );
 }

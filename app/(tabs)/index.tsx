@@ -51,6 +51,7 @@ export default function OverviewRoute() {
             <Button label="Add a station" onPress={() => router.push('/stations/new')} />
             <Button label="Your stations" variant="secondary" onPress={() => router.push('/stations')} />
             <Button label="Listening posts" variant="secondary" onPress={() => router.push('/receivers')} />
+            <Button label="Help and glossary" variant="secondary" onPress={() => router.push('/help')} />
           </View>
         </Card>
       </View>

@@ -20,6 +20,7 @@ import { numberFieldErrors } from '../form/number-text';
 import { LocatorHelper } from '../workshop/locator-helper';
 import { Switch } from '../ui/switch';
 import { keepStationDraft } from './station-draft';
+import { TermInfo } from '../help/term-info';
 
 type StationFields = z.input<typeof stationInput>;
 /** What the form hands over: its own four fields, trimmed and upper-cased by the shared schema. */
@@ -140,6 +141,7 @@ function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit
         control={form.control}
         name="audioOffsetHz"
         label="Audio offset (Hz)"
+        labelAccessory={<TermInfo term="audio-offset" />}
         hint="Where in the 1400–1600 Hz window above the dial frequency the signal sits; 1500 is the middle."
       />
       <Switch

@@ -33,6 +33,7 @@ import { PowerChain } from '../workshop/power-chain';
 import { Switch } from '../ui/switch';
 import { PadDesigner } from './pad-designer';
 import { SupplyFigures } from './supply-figures';
+import { TermInfo } from '../help/term-info';
 
 type UnitFields = z.input<typeof unitInput>;
 
@@ -158,6 +159,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
             control={control}
             name="tolerancePpm"
             label="Tolerance (± ppm)"
+            labelAccessory={<TermInfo term="ppm" />}
             hint="From its data sheet, e.g. 10."
             style={styles.pairItem}
           />

@@ -14,6 +14,7 @@ import { formatMHz, formatSigned } from '../ui/format';
 import { Switch } from '../ui/switch';
 import { TextLink } from '../ui/text-link';
 import { WindowGauge } from './window-gauge';
+import { TermInfo } from '../help/term-info';
 
 export type BandListProps = {
   station: Station;
@@ -54,9 +55,12 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
           <Card key={band.id} style={styles.card}>
             <View style={styles.head}>
               <Text variant="heading">{band.name}</Text>
-              <Text variant="mono" tone="muted">
-                dial {formatMHz(band.dialHz)}
-              </Text>
+              <View style={styles.dial}>
+                <Text variant="mono" tone="muted">
+                  dial {formatMHz(band.dialHz)}
+                </Text>
+                <TermInfo term="dial" />
+              </View>
             </View>
             <Switch
               label={enabled ? `${band.name} is enabled` : `${band.name} is off`}
@@ -152,6 +156,7 @@ const styles = StyleSheet.create({
   card: { gap: space.md },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', columnGap: space.md },
   link: { alignSelf: 'flex-start' },
+  dial: { flexDirection: 'row', alignItems: 'center' },
   underline: { textDecorationLine: 'underline' },
   closedRow: { borderTopWidth: 1, paddingTop: space.xs },
 });

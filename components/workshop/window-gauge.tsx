@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { fonts, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { formatValue } from '../ui/format';
+import { TermInfo } from '../help/term-info';
 
 export type WindowGaugeProps = {
   bandName: string;
@@ -254,6 +255,12 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
         {summary}
       </Text>
       <View style={styles.legend}>
+        <View style={styles.legendHead}>
+          <Text variant="caption" tone="muted">
+            The window: the 200 Hz above the dial that receivers decode.
+          </Text>
+          <TermInfo term="window" />
+        </View>
         <Text variant="caption" tone="muted" style={styles.legendItem}>
           {toleranceHz > 0
             ? `Shaded: ±${toleranceHz.toFixed(1)} Hz, where the tones could sit from the unit’s ±ppm tolerance${calibrated ? ' before calibration' : ' (this band is not calibrated yet)'}.`
@@ -270,5 +277,6 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   legend: { gap: 2 },
+  legendHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap' },
   legendItem: {},
 });
