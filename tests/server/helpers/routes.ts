@@ -93,6 +93,7 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'post', path: '/api/offset-proposals/:proposal/decline' },
   { method: 'get', path: '/api/notifications' },
   { method: 'post', path: '/api/notifications/:notification/read' },
+  { method: 'post', path: '/api/notifications/read-all' },
   { method: 'get', path: '/api/audit' },
   {
     method: 'post',
