@@ -1,5 +1,5 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
+import { useMemo } from 'react';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { useCreateStationMutation } from '@/components/stations/queries';
@@ -18,7 +18,8 @@ export default function NewStationRoute() {
   const units = useUnitsQuery();
   // back from "Register a unit first": what was typed, with the new unit chosen
   const { unitId } = useLocalSearchParams<{ unitId?: string }>();
-  const [draft] = useState(() => takeStationDraft());
+  // the screen may still be mounted from before the detour, so the draft is read (once) for each new unitId
+  const draft = useMemo(() => (unitId ? takeStationDraft() : null), [unitId]);
   const newUnitId = Number(unitId);
   if (units.isPending)
     return (
@@ -36,6 +37,7 @@ export default function NewStationRoute() {
     <Screen maxWidth={layout.maxFormWidth + 120}>
       <Card>
         <StationForm
+          key={unitId ?? 'no-unit'}
           units={units.data}
           defaultValues={{
             callsign: user?.callsign ?? '',
