@@ -38,6 +38,7 @@ export default function TabsLayoutRoute() {
       <Tabs.Screen name="activity" options={{ title: 'Your activity log · Faintline' }} />
       <Tabs.Screen name="receivers" options={{ title: 'Listening posts · Faintline' }} />
       <Tabs.Screen name="compare" options={{ title: 'Compare · Faintline' }} />
+      <Tabs.Screen name="help" options={{ title: 'Help · Faintline' }} />
     </Tabs>
   );
 }

@@ -2,6 +2,8 @@ import { Stack, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { useSessionQuery } from '@/components/auth/queries';
+import { ClubSummaryCard } from '@/components/overview/club-summary-card';
+import { FirstStepsCard } from '@/components/overview/first-steps-card';
 import { SafetyCard } from '@/components/overview/safety-card';
 import { StationCountCard } from '@/components/overview/station-count-card';
 import { StationGlance } from '@/components/overview/station-glance';
@@ -33,6 +35,12 @@ export default function OverviewRoute() {
           <Text tone="muted">No callsign on your account yet.</Text>
         )}
       </View>
+      <FirstStepsCard />
+      {(user?.clubs ?? [])
+        .filter((club) => club.role === 'admin')
+        .map((club) => (
+          <ClubSummaryCard key={club.clubId} club={club} />
+        ))}
       <View style={styles.row}>
         <StationCountCard count={stations.data?.length ?? null} status={stations.status} />
         <Card style={styles.links}>
@@ -43,6 +51,7 @@ export default function OverviewRoute() {
             <Button label="Add a station" onPress={() => router.push('/stations/new')} />
             <Button label="Your stations" variant="secondary" onPress={() => router.push('/stations')} />
             <Button label="Listening posts" variant="secondary" onPress={() => router.push('/receivers')} />
+            <Button label="Help and glossary" variant="secondary" onPress={() => router.push('/help')} />
           </View>
         </Card>
       </View>

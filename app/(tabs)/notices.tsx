@@ -2,7 +2,14 @@ import { router, type Href } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { NoticeList } from '@/components/notices/notice-list';
-import { unreadCount, useMarkNoticeReadMutation, useNoticesQuery, type AppNotice } from '@/components/notices/queries';
+import {
+  unreadCount,
+  useMarkAllNoticesReadMutation,
+  useMarkNoticeReadMutation,
+  useNoticesQuery,
+  type AppNotice,
+} from '@/components/notices/queries';
+import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -12,6 +19,7 @@ import { space } from '@/components/ui/theme';
 export default function NoticesRoute() {
   const notices = useNoticesQuery();
   const markRead = useMarkNoticeReadMutation();
+  const markAll = useMarkAllNoticesReadMutation();
   const read = (notice: AppNotice) => {
     if (!notice.readAt) markRead.mutate(notice.id);
   };
@@ -38,7 +46,10 @@ export default function NoticesRoute() {
       <Text variant="title" accessibilityRole="header">
         Notices
       </Text>
-      <Text tone="muted">{unread ? `${unread} unread.` : 'You have read everything.'}</Text>
+      <View style={styles.unread}>
+        <Text tone="muted">{unread ? `${unread} unread.` : 'You have read everything.'}</Text>
+        {unread ? <Button label="Mark all read" variant="secondary" busy={markAll.isPending} onPress={() => markAll.mutate()} /> : null}
+      </View>
       <View style={styles.links}>
         <TextLink href="/proposals" label="Offset proposals" />
         <TextLink href="/activity" label="Your activity log" />
@@ -48,4 +59,7 @@ export default function NoticesRoute() {
   );
 }
 
-const styles = StyleSheet.create({ links: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg } });
+const styles = StyleSheet.create({
+  links: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  unread: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
+});

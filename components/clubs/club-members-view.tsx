@@ -70,7 +70,7 @@ export function ClubMembersView({
           ) : invitations.isError ? (
             <ErrorState title="The invitations could not be loaded" error={invitations.error} onRetry={() => invitations.refetch()} />
           ) : (
-            <InvitationList invitations={invitations.data ?? []} />
+            <InvitationList clubId={club.id} invitations={invitations.data ?? []} />
           )}
         </Card>
       ) : null}

@@ -114,6 +114,22 @@ export function useInviteMutation(clubId: number) {
   });
 }
 
+export function useRevokeInvitationMutation(clubId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: number) => api<void>(`/clubs/${clubId}/invitations/${invitationId}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.invitations(clubId) }),
+  });
+}
+
+export function useResendInvitationMutation(clubId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: number) => api<void>(`/clubs/${clubId}/invitations/${invitationId}/resend`, { method: 'POST' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.invitations(clubId) }),
+  });
+}
+
 export function useAcceptInvitationMutation() {
   const queryClient = useQueryClient();
   return useMutation({

@@ -37,6 +37,19 @@ export function useMarkNoticeReadMutation() {
   });
 }
 
+export function useMarkAllNoticesReadMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<{ marked: number }>('/notifications/read-all', { method: 'POST' }),
+    onSuccess: () => {
+      const readAt = new Date().toISOString();
+      queryClient.setQueryData<AppNotice[]>(noticeKeys.list(), (list) =>
+        list?.map((notice) => (notice.readAt ? notice : { ...notice, readAt })),
+      );
+    },
+  });
+}
+
 export function unreadCount(notices: AppNotice[] | undefined): number {
   return notices?.filter((notice) => !notice.readAt).length ?? 0;
 }

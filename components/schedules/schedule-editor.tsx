@@ -23,6 +23,7 @@ import { bandChoices } from './band-choices';
 import { PresetPicker, type PresetOption } from './preset-picker';
 import { previewDraft, type SchedulePreview } from './preview-model';
 import { StepCard } from './step-card';
+import { TermInfo } from '../help/term-info';
 
 export type ScheduleEditorProps = {
   station: Station;
@@ -181,9 +182,12 @@ export function ScheduleEditor({
       ) : null}
       <CadenceFields form={form} />
       <Card>
-        <Text variant="heading" accessibilityRole="header">
-          Stagger
-        </Text>
+        <View style={styles.headingRow}>
+          <Text variant="heading" accessibilityRole="header">
+            Stagger
+          </Text>
+          <TermInfo term="stagger" />
+        </View>
         <Text variant="caption" tone="muted">
           Moves the audio offset from one transmission to the next, so two stations on the same offset do not meet every time.
         </Text>
@@ -253,9 +257,12 @@ function CadenceFields({ form }: { form: FormApi }) {
   const value = cadence.field.value;
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        How often
-      </Text>
+      <View style={styles.headingRow}>
+        <Text variant="heading" accessibilityRole="header">
+          How often
+        </Text>
+        <TermInfo term="slot" />
+      </View>
       <ChoiceChips<ScheduleValues['cadence']['kind']>
         label="Cadence"
         showLabel={false}
@@ -334,6 +341,7 @@ function DateFields({ form }: { form: FormApi }) {
 }
 
 const styles = StyleSheet.create({
+  headingRow: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   column: { gap: space.lg },
   wide: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
   wideMain: { flex: 11, minWidth: 0, gap: space.lg },

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'expo-router';
 import { useController, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
@@ -18,6 +19,8 @@ import { NumberField } from '../form/number-field';
 import { numberFieldErrors } from '../form/number-text';
 import { LocatorHelper } from '../workshop/locator-helper';
 import { Switch } from '../ui/switch';
+import { keepStationDraft } from './station-draft';
+import { TermInfo } from '../help/term-info';
 
 type StationFields = z.input<typeof stationInput>;
 /** What the form hands over: its own four fields, trimmed and upper-cased by the shared schema. */
@@ -94,6 +97,7 @@ type StationFormApi = ReturnType<typeof useForm<StationFields, unknown, z.output
 
 /** The workshop part of the form: which unit, licence region, audio offset and the transmit switch. */
 function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit[] }) {
+  const router = useRouter();
   const unit = useController({ control: form.control, name: 'unitId' });
   const region = useController({ control: form.control, name: 'region' });
   const transmit = useController({ control: form.control, name: 'transmitEnabled' });
@@ -110,7 +114,20 @@ function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit
           hint="The beacon hardware this station runs on; its filters decide which bands can be enabled."
         />
       ) : (
-        <Text tone="muted">No units registered yet: register the beacon hardware under Units, then pick it here.</Text>
+        <View style={styles.noUnit}>
+          <Text tone="muted">
+            No units registered yet. A station needs the beacon hardware it runs on before any band can be enabled. Register it first: what
+            you typed here is kept and comes back when the unit is saved.
+          </Text>
+          <Button
+            label="Register a unit first"
+            variant="secondary"
+            onPress={() => {
+              keepStationDraft(form.getValues());
+              router.push({ pathname: '/units/new', params: { then: 'new-station' } });
+            }}
+          />
+        </View>
       )}
       <ChoiceChips<LicenceRegion>
         label="Licence region"
@@ -124,6 +141,7 @@ function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit
         control={form.control}
         name="audioOffsetHz"
         label="Audio offset (Hz)"
+        labelAccessory={<TermInfo term="audio-offset" />}
         hint="Where in the 1400–1600 Hz window above the dial frequency the signal sits; 1500 is the middle."
       />
       <Switch
@@ -139,4 +157,5 @@ function StationSetupFields({ form, units }: { form: StationFormApi; units: Unit
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  noUnit: { gap: space.sm, alignItems: 'flex-start' },
 });

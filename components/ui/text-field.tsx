@@ -1,4 +1,4 @@
-import { forwardRef, useState } from 'react';
+import { forwardRef, useState, type ReactNode } from 'react';
 import { StyleSheet, TextInput, View, type StyleProp, type TextInputProps, type ViewStyle } from 'react-native';
 
 import { FieldMessage } from './field-message';
@@ -13,11 +13,28 @@ export type TextFieldProps = Omit<TextInputProps, 'style'> & {
   /** JetBrains Mono for callsigns and locators. */
   mono?: boolean;
   style?: StyleProp<ViewStyle>;
+  /** Beside the label: a glossary mark for a trade word. */
+  labelAccessory?: ReactNode;
 };
 
 /** The app's only text input: a label above, the input, and a hint or the field's error below it. */
 export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField(
-  { label, error, hint, mono, multiline, style, onFocus, onBlur, secureTextEntry, autoCapitalize, autoCorrect, spellCheck, ...rest },
+  {
+    label,
+    error,
+    hint,
+    mono,
+    multiline,
+    style,
+    onFocus,
+    onBlur,
+    secureTextEntry,
+    autoCapitalize,
+    autoCorrect,
+    spellCheck,
+    labelAccessory,
+    ...rest
+  },
   ref,
 ) {
   const { colors } = useAppTheme();
@@ -25,7 +42,14 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
   const borderColor = error ? colors.danger : focused ? colors.focus : colors.border;
   return (
     <View style={[styles.wrap, style]}>
-      <Text variant="label">{label}</Text>
+      {labelAccessory ? (
+        <View style={styles.labelRow}>
+          <Text variant="label">{label}</Text>
+          {labelAccessory}
+        </View>
+      ) : (
+        <Text variant="label">{label}</Text>
+      )}
       <TextInput
         ref={ref}
         accessibilityLabel={label}
@@ -63,6 +87,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
 });
 
 const styles = StyleSheet.create({
+  labelRow: { flexDirection: 'row', alignItems: 'center', marginVertical: -12 },
   wrap: { gap: space.xs },
   input: {
     minHeight: 46,

@@ -4,8 +4,8 @@ import { useController, useFieldArray, useForm, useWatch, type Control } from 'r
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 
-import { BAND_TABLE, type BandId } from '@/shared/domain';
-import { FILTER_LOSS_DB, FILTER_SELECTIONS, filterSelectionLabels, stationPower } from '@/shared/domain/workshop';
+import { BAND_TABLE, bandsFor, type BandId } from '@/shared/domain';
+import { cutoffProblems, FILTER_LOSS_DB, FILTER_SELECTIONS, filterSelectionLabels, stationPower } from '@/shared/domain/workshop';
 import {
   ANTENNA_KINDS,
   FILTER_TYPES,
@@ -33,6 +33,7 @@ import { PowerChain } from '../workshop/power-chain';
 import { Switch } from '../ui/switch';
 import { PadDesigner } from './pad-designer';
 import { SupplyFigures } from './supply-figures';
+import { TermInfo } from '../help/term-info';
 
 type UnitFields = z.input<typeof unitInput>;
 
@@ -158,6 +159,7 @@ export function UnitForm({ defaultValues = emptyUnit, submitLabel = 'Save unit',
             control={control}
             name="tolerancePpm"
             label="Tolerance (± ppm)"
+            labelAccessory={<TermInfo term="ppm" />}
             hint="From its data sheet, e.g. 10."
             style={styles.pairItem}
           />
@@ -321,6 +323,7 @@ function FilterRow({
           style={styles.pairItem}
         />
       </View>
+      <CutoffWarning control={control} index={index} />
       {switched ? (
         <FormTextField
           control={control}
@@ -332,6 +335,16 @@ function FilterRow({
       ) : null}
     </View>
   );
+}
+
+const REGION_ONE_BANDS = bandsFor('itu1');
+
+/** Warns, with the reason, when a filter's cut-off cannot serve a band it claims (saving stays possible: the unit may be half built). */
+function CutoffWarning({ control, index }: { control: Control<UnitFields>; index: number }) {
+  const [bands, cutoffHz] = useWatch({ control, name: [`filters.${index}.bands`, `filters.${index}.cutoffHz`] });
+  const problems = cutoffProblems({ bands: bands ?? [], cutoffHz: Number(cutoffHz) }, REGION_ONE_BANDS);
+  if (problems.length === 0) return null;
+  return <Notice tone="info" message={`Check filter ${index + 1}: ${problems.join(' ')}`} />;
 }
 
 type Named = { control: Control<UnitFields>; name: string; label: string };

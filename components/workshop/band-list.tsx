@@ -12,7 +12,9 @@ import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { formatMHz, formatSigned } from '../ui/format';
 import { Switch } from '../ui/switch';
+import { TextLink } from '../ui/text-link';
 import { WindowGauge } from './window-gauge';
+import { TermInfo } from '../help/term-info';
 
 export type BandListProps = {
   station: Station;
@@ -53,9 +55,12 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
           <Card key={band.id} style={styles.card}>
             <View style={styles.head}>
               <Text variant="heading">{band.name}</Text>
-              <Text variant="mono" tone="muted">
-                dial {formatMHz(band.dialHz)}
-              </Text>
+              <View style={styles.dial}>
+                <Text variant="mono" tone="muted">
+                  dial {formatMHz(band.dialHz)}
+                </Text>
+                <TermInfo term="dial" />
+              </View>
             </View>
             <Switch
               label={enabled ? `${band.name} is enabled` : `${band.name} is off`}
@@ -79,9 +84,12 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
               </Text>
             ) : null}
             {enabled && blocked ? (
-              <Text variant="label" tone="danger">
-                {blocked} The beacon will not transmit here.
-              </Text>
+              <>
+                <Text variant="label" tone="danger">
+                  {blocked} The beacon will not transmit here.
+                </Text>
+                {unit && !readOnly ? <UnitFiltersLink unitId={unit.id} /> : null}
+              </>
             ) : null}
             {onAir ? (
               <>
@@ -112,6 +120,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
             {unit ? 'Bands no filter covers' : 'Bands'}
           </Text>
           {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
+          {unit && !readOnly ? <UnitFiltersLink unitId={unit.id} /> : null}
           {closed.map(({ band, blocked }) => (
             <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>
               <Switch
@@ -135,6 +144,11 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
   );
 }
 
+/** From a band a filter cannot serve to the unit's form, where the filters are changed. */
+function UnitFiltersLink({ unitId }: { unitId: number }) {
+  return <TextLink href={{ pathname: '/units/[id]/edit', params: { id: String(unitId) } }} label="Change the unit’s filters" />;
+}
+
 const NO_UNIT = 'Assign a unit to this station first: the unit’s filters decide which bands can be enabled.';
 
 const styles = StyleSheet.create({
@@ -142,6 +156,7 @@ const styles = StyleSheet.create({
   card: { gap: space.md },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', columnGap: space.md },
   link: { alignSelf: 'flex-start' },
+  dial: { flexDirection: 'row', alignItems: 'center' },
   underline: { textDecorationLine: 'underline' },
   closedRow: { borderTopWidth: 1, paddingTop: space.xs },
 });

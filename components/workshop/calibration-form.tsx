@@ -20,6 +20,7 @@ import { NumberField } from '../form/number-field';
 import { parseNumberText } from '../form/number-text';
 import { formatHz, formatSigned } from '../ui/format';
 import type { CalibrationProposal } from './queries';
+import { TermInfo } from '../help/term-info';
 
 /** The shared measurement schema, with the words for a frequency left empty. */
 const measurementFields = measurementInput.extend({
@@ -150,9 +151,12 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
 
       {proposal ? (
         <View style={[styles.proposal, { borderColor: colors.primary, backgroundColor: colors.primarySoft }]}>
-          <Text variant="heading" accessibilityRole="header">
-            Proposed offsets
-          </Text>
+          <View style={styles.headingRow}>
+            <Text variant="heading" accessibilityRole="header">
+              Proposed offsets
+            </Text>
+            <TermInfo term="calibration" />
+          </View>
           <Text>
             Reference error{' '}
             <Text variant="mono" tone="primary">
@@ -192,6 +196,7 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
 }
 
 const styles = StyleSheet.create({
+  headingRow: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   wrap: { gap: space.lg },
   start: { alignSelf: 'flex-start' },
   proposal: { borderWidth: 1, borderRadius: radius.lg, padding: space.lg, gap: space.md },

@@ -15,6 +15,7 @@ import { HarmonicsPanel } from './harmonics-panel';
 import { MessagePlan } from './message-plan';
 import { SynthTable } from './synth-table';
 import { WindowGauge } from './window-gauge';
+import { TermInfo } from '../help/term-info';
 
 export type OnAirViewProps = {
   station: Station;
@@ -49,7 +50,11 @@ export function OnAirView({ station, unit, bandId, bandIds, onBand }: OnAirViewP
         <>
           {!air.coverage.covered ? <Notice message={`${air.coverage.reason} The beacon will not transmit on ${air.band.name}.`} /> : null}
           {!air.enabled ? <Notice tone="info" message={`${air.band.name} is not enabled: this is what it would send.`} /> : null}
-          <FormSection title="Messages" description={`Callsign ${station.callsign}, locator ${station.locator}.`}>
+          <FormSection
+            title="Messages"
+            description={`Callsign ${station.callsign}, locator ${station.locator}.`}
+            action={<TermInfo term="message-types" />}
+          >
             <MessagePlan plan={stationMessages(station, unit)} showSymbols />
           </FormSection>
           <FormSection
@@ -85,10 +90,18 @@ export function OnAirView({ station, unit, bandId, bandIds, onBand }: OnAirViewP
               calibrated={air.calibrated}
             />
           </FormSection>
-          <FormSection title="Synthesizer settings" description="What the generator is told for each tone, and what it really makes.">
+          <FormSection
+            title="Synthesizer settings"
+            description="What the generator is told for each tone, and what it really makes."
+            action={<TermInfo term="registers" />}
+          >
             {air.synth ? <SynthTable synth={air.synth} /> : <Text tone="muted">{air.synthProblem}</Text>}
           </FormSection>
-          <FormSection title="Harmonics" description="Whether the low-pass filter keeps the harmonics below the limit.">
+          <FormSection
+            title="Harmonics"
+            description="Whether the low-pass filter keeps the harmonics below the limit."
+            action={<TermInfo term="dbc" />}
+          >
             <HarmonicsPanel harmonics={air.harmonics} bandName={air.band.name} />
           </FormSection>
         </>

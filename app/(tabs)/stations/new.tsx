@@ -1,7 +1,9 @@
-import { useRouter } from 'expo-router';
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMemo } from 'react';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { useCreateStationMutation } from '@/components/stations/queries';
+import { takeStationDraft } from '@/components/stations/station-draft';
 import { StationForm } from '@/components/stations/station-form';
 import { useUnitsQuery } from '@/components/units/queries';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
@@ -14,6 +16,11 @@ export default function NewStationRoute() {
   const user = useSessionQuery().data;
   const create = useCreateStationMutation();
   const units = useUnitsQuery();
+  // back from "Register a unit first": what was typed, with the new unit chosen
+  const { unitId } = useLocalSearchParams<{ unitId?: string }>();
+  // the screen may still be mounted from before the detour, so the draft is read (once) for each new unitId
+  const draft = useMemo(() => (unitId ? takeStationDraft() : null), [unitId]);
+  const newUnitId = Number(unitId);
   if (units.isPending)
     return (
       <Screen maxWidth={layout.maxFormWidth + 120}>
@@ -30,8 +37,13 @@ export default function NewStationRoute() {
     <Screen maxWidth={layout.maxFormWidth + 120}>
       <Card>
         <StationForm
+          key={unitId ?? 'no-unit'}
           units={units.data}
-          defaultValues={{ callsign: user?.callsign ?? '' }}
+          defaultValues={{
+            callsign: user?.callsign ?? '',
+            ...draft,
+            ...(Number.isInteger(newUnitId) && newUnitId > 0 ? { unitId: newUnitId } : {}),
+          }}
           onSubmit={async (values) => {
             const station = await create.mutateAsync(values);
             router.replace({ pathname: '/stations/[id]', params: { id: String(station.id) } });

@@ -68,6 +68,22 @@ export function clubsRouter({ sequelize, mailer, logger, config }: Deps) {
     sendLater(mailer, logger, mail);
   });
 
+  router.delete('/:clubId/invitations/:invitationId', async (req, res) => {
+    await invitations.revoke(sequelize, currentUser(req), club(req.params), parseId(req.params.invitationId, 'Invitation'));
+    res.status(204).end();
+  });
+  router.post('/:clubId/invitations/:invitationId/resend', async (req, res) => {
+    const { mail } = await invitations.resend(
+      sequelize,
+      currentUser(req),
+      club(req.params),
+      parseId(req.params.invitationId, 'Invitation'),
+      config.WEB_ORIGIN,
+    );
+    res.status(204).end();
+    sendLater(mailer, logger, mail);
+  });
+
   router.get('/:clubId/review', async (req, res) => {
     res.json(await reviews.review(currentUser(req), club(req.params)));
   });

@@ -21,3 +21,20 @@ export const findByTokenForUpdate = (tokenHash: string, transaction: Transaction
 export async function markAccepted(id: number, acceptedById: number, at: Date, transaction: Transaction) {
   await InvitationModel.update({ acceptedAt: at, acceptedById }, { where: { id }, transaction });
 }
+
+/** One pending invitation of this club, locked for the rest of the transaction; null when it is gone, used or expired. */
+export const findPendingForUpdate = (clubId: number, id: number, now: Date, transaction: Transaction) =>
+  InvitationModel.findOne({
+    where: { id, clubId, acceptedAt: null, expiresAt: { [Op.gt]: now } },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
+
+export async function remove(id: number, transaction: Transaction) {
+  await InvitationModel.destroy({ where: { id }, transaction });
+}
+
+/** A fresh link for the same invitation: the old token stops working. */
+export async function renew(id: number, tokenHash: string, expiresAt: Date, transaction: Transaction) {
+  await InvitationModel.update({ tokenHash, expiresAt }, { where: { id }, transaction });
+}

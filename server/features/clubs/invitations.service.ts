@@ -21,6 +21,71 @@ const toInvitation = (row: repo.InvitationRow): Invitation => ({
   createdAt: row.createdAt.toISOString(),
 });
 
+function invitationMail(to: string, inviterName: string, clubName: string, link: string): OutgoingMail {
+  return {
+    to,
+    subject: `You are invited to ${clubName} on Faintline`,
+    text: `Hello,\n\n${inviterName} invites you to join ${clubName}, a club that coordinates WSPR beacons on Faintline. Its admins will see your stations and can help keep club beacons out of each other's way.\n\nSign in (or create an account with this e-mail address) and open this link within ${INVITATION_LIFETIME_DAYS} days; it works once:\n\n${link}\n\nIf you did not expect this, ignore the mail.\n`,
+  };
+}
+
+const joinLink = (webOrigin: string, token: string) => `${webOrigin}/join?token=${encodeURIComponent(token)}`;
+
+/** Withdraws a pending invitation: its link stops working. */
+export async function revoke(db: TransactionRunner, user: SessionUser, clubId: number, invitationId: number, now = new Date()) {
+  await requireAdmin(user, clubId);
+  await db.transaction(async (transaction) => {
+    const row = await repo.findPendingForUpdate(clubId, invitationId, now, transaction);
+    if (!row) throw new AppError('not-found', 'This invitation is no longer waiting: it was answered, withdrawn or has expired');
+    await repo.remove(row.id, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId,
+        action: 'invitation.revoke',
+        entityType: 'invitation',
+        entityId: row.id,
+        summary: `Withdrew the invitation to ${row.email}`,
+      },
+      transaction,
+    );
+  });
+}
+
+/** Sends a pending invitation again with a new link and a new expiry; the old link stops working. */
+export async function resend(
+  db: TransactionRunner,
+  user: SessionUser,
+  clubId: number,
+  invitationId: number,
+  webOrigin: string,
+  now = new Date(),
+) {
+  const { club } = await requireAdmin(user, clubId);
+  const token = randomBytes(32).toString('base64url');
+  const expiresAt = new Date(now.getTime() + INVITATION_LIFETIME_DAYS * 86_400_000);
+  const email = await db.transaction(async (transaction) => {
+    const row = await repo.findPendingForUpdate(clubId, invitationId, now, transaction);
+    if (!row) throw new AppError('not-found', 'This invitation is no longer waiting: it was answered, withdrawn or has expired');
+    await repo.renew(row.id, sha256(token), expiresAt, transaction);
+    await audit.record(
+      {
+        actor: user,
+        ownerId: user.id,
+        clubId,
+        action: 'invitation.resend',
+        entityType: 'invitation',
+        entityId: row.id,
+        summary: `Sent the invitation to ${row.email} again`,
+      },
+      transaction,
+    );
+    return row.email;
+  });
+  return { mail: invitationMail(email, user.displayName, club.name, joinLink(webOrigin, token)) };
+}
+
 /** Creates an invitation and returns the mail to send once the write has committed. */
 export async function invite(db: TransactionRunner, user: SessionUser, clubId: number, email: string, webOrigin: string, now = new Date()) {
   const { club } = await requireAdmin(user, clubId);
@@ -50,12 +115,7 @@ export async function invite(db: TransactionRunner, user: SessionUser, clubId: n
     );
     return created;
   });
-  const link = `${webOrigin}/join?token=${encodeURIComponent(token)}`;
-  const mail: OutgoingMail = {
-    to: email,
-    subject: `You are invited to ${club.name} on Faintline`,
-    text: `Hello,\n\n${user.displayName} invites you to join ${club.name}, a club that coordinates WSPR beacons on Faintline. Its admins will see your stations and can help keep club beacons out of each other's way.\n\nSign in (or create an account with this e-mail address) and open this link within ${INVITATION_LIFETIME_DAYS} days; it works once:\n\n${link}\n\nIf you did not expect this, ignore the mail.\n`,
-  };
+  const mail = invitationMail(email, user.displayName, club.name, joinLink(webOrigin, token));
   return { invitation: toInvitation(row), mail };
 }
 

@@ -13,4 +13,10 @@ export async function markRead(userId: number, id: number, at: Date) {
   return count > 0;
 }
 
+/** Marks every unread notice of this person read; returns how many. */
+export async function markAllRead(userId: number, at: Date) {
+  const [count] = await NotificationModel.update({ readAt: at }, { where: { userId, readAt: { [Op.is]: null } } });
+  return count;
+}
+
 export const exists = async (userId: number, id: number) => (await NotificationModel.count({ where: { id, userId } })) > 0;

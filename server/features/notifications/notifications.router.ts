@@ -10,6 +10,9 @@ export function notificationsRouter() {
   router.get('/', async (req, res) => {
     res.json(await notices.listFor(currentUser(req).id));
   });
+  router.post('/read-all', async (req, res) => {
+    res.json(await notices.markAllRead(currentUser(req).id));
+  });
   router.post('/:id/read', async (req, res) => {
     await notices.markRead(currentUser(req).id, parseId(req.params.id, 'Notice'));
     res.status(204).end();

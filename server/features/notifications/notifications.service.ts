@@ -21,6 +21,10 @@ export async function listFor(userId: number): Promise<Notice[]> {
   }));
 }
 
+export async function markAllRead(userId: number): Promise<{ marked: number }> {
+  return { marked: await repo.markAllRead(userId, new Date()) };
+}
+
 export async function markRead(userId: number, id: number) {
   if (!(await repo.markRead(userId, id, new Date())) && !(await repo.exists(userId, id)))
     throw new AppError('not-found', `Notice ${id} does not exist`);

@@ -36,3 +36,23 @@ export function filterCoverage(filters: readonly InstalledFilter[], band: Band):
         reason: `The ${band.name} filter cuts off at ${mhz(filter.cutoffHz)}, above the second harmonic (${mhz(2 * band.dialHz)}): it would not suppress harmonics.`,
       };
 }
+
+/**
+ * What is wrong with one filter's cut-off for each band it claims to serve, in words (empty = fine): below the band's window it
+ * blocks the signal; at or above twice the dial it lets the second harmonic through. Judged on the default (Region 1) band plan.
+ */
+export function cutoffProblems(filter: { bands: readonly BandId[]; cutoffHz: number }, bands: readonly Band[]): string[] {
+  if (!Number.isFinite(filter.cutoffHz) || filter.cutoffHz <= 0) return [];
+  const mhz = (hz: number) => `${(hz / 1e6).toFixed(3)} MHz`;
+  return bands
+    .filter((band) => filter.bands.includes(band.id))
+    .flatMap((band) =>
+      filter.cutoffHz < band.windowHighHz
+        ? [`${mhz(filter.cutoffHz)} is below the ${band.name} window (${mhz(band.windowHighHz)}): this filter would block ${band.name}.`]
+        : filter.cutoffHz >= 2 * band.dialHz
+          ? [
+              `${mhz(filter.cutoffHz)} is above ${band.name}’s second harmonic (${mhz(2 * band.dialHz)}): harmonics would pass. Aim between ${mhz(band.windowHighHz)} and ${mhz(2 * band.dialHz)}.`,
+            ]
+          : [],
+    );
+}

