@@ -17,17 +17,34 @@ export type StationListProps = {
   showOwner?: boolean;
   /** Where a station opens; the operator's own detail screen by default. */
   hrefFor?: (station: Station) => Href;
+  /** The operator's devices, by station id: true online, false offline; a station absent here has no device token. */
+  deviceOnline?: ReadonlyMap<number, boolean>;
 };
+
+/** A station's state in a few words: on the air, paused or stopped by a club, and its device. */
+export function stationState(
+  station: Station,
+  deviceOnline?: ReadonlyMap<number, boolean>,
+): { words: string; tone: 'primary' | 'muted' | 'danger' } {
+  const air = station.suspension
+    ? { words: `Stopped by ${station.suspension.clubName ?? 'a club admin'}`, tone: 'danger' as const }
+    : station.transmitEnabled
+      ? { words: 'On the air', tone: 'primary' as const }
+      : { words: 'Paused', tone: 'muted' as const };
+  if (!deviceOnline) return air;
+  const online = deviceOnline.get(station.id);
+  return { ...air, words: `${air.words} · ${online === undefined ? 'no device yet' : online ? 'device online' : 'device offline'}` };
+}
 
 const ownDetail = (station: Station): Href => ({ pathname: '/stations/[id]', params: { id: String(station.id) } });
 
-export function StationList({ stations, layout, showOwner = false, hrefFor = ownDetail }: StationListProps) {
+export function StationList({ stations, layout, showOwner = false, hrefFor = ownDetail, deviceOnline }: StationListProps) {
   return layout === 'table' ? (
-    <StationTable stations={stations} showOwner={showOwner} hrefFor={hrefFor} />
+    <StationTable stations={stations} showOwner={showOwner} hrefFor={hrefFor} deviceOnline={deviceOnline} />
   ) : (
     <View style={styles.cards}>
       {stations.map((station) => (
-        <StationCard key={station.id} station={station} showOwner={showOwner} href={hrefFor(station)} />
+        <StationCard key={station.id} station={station} showOwner={showOwner} href={hrefFor(station)} deviceOnline={deviceOnline} />
       ))}
     </View>
   );
@@ -37,10 +54,11 @@ function openLabel(station: Station) {
   return `Open station ${station.name}, ${station.callsign}`;
 }
 
-export type StationCardProps = { station: Station; href: Href; showOwner?: boolean };
+export type StationCardProps = { station: Station; href: Href; showOwner?: boolean; deviceOnline?: ReadonlyMap<number, boolean> };
 
-export function StationCard({ station, href, showOwner = false }: StationCardProps) {
+export function StationCard({ station, href, showOwner = false, deviceOnline }: StationCardProps) {
   const { colors } = useAppTheme();
+  const state = stationState(station, deviceOnline);
   return (
     <Link href={href} asChild>
       <Pressable
@@ -57,6 +75,9 @@ export function StationCard({ station, href, showOwner = false }: StationCardPro
             {station.callsign}
           </Text>
         </View>
+        <Text variant="label" tone={state.tone}>
+          {state.words}
+        </Text>
         <View style={styles.cardMeta}>
           <Text variant="caption" tone="muted">
             Locator <Text variant="mono">{formatLocator(station.locator)}</Text>
@@ -75,15 +96,21 @@ export function StationCard({ station, href, showOwner = false }: StationCardPro
   );
 }
 
-type StationTableProps = { stations: Station[]; showOwner: boolean; hrefFor: (station: Station) => Href };
+type StationTableProps = {
+  stations: Station[];
+  showOwner: boolean;
+  hrefFor: (station: Station) => Href;
+  deviceOnline?: ReadonlyMap<number, boolean>;
+};
 
-function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
+function StationTable({ stations, showOwner, hrefFor, deviceOnline }: StationTableProps) {
   const { colors } = useAppTheme();
   const header = [
     { key: 'name', label: 'Name', style: styles.colName },
     ...(showOwner ? [{ key: 'owner', label: 'Operator', style: styles.colOwner }] : []),
     { key: 'callsign', label: 'Callsign', style: styles.colCall },
     { key: 'locator', label: 'Locator', style: styles.colLoc },
+    { key: 'state', label: 'State', style: styles.colState },
     { key: 'updated', label: 'Updated (UTC)', style: styles.colUpdated },
   ];
   return (
@@ -96,15 +123,28 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
         ))}
       </View>
       {stations.map((station, index) => (
-        <StationRow key={station.id} station={station} href={hrefFor(station)} showOwner={showOwner} last={index === stations.length - 1} />
+        <StationRow
+          key={station.id}
+          station={station}
+          href={hrefFor(station)}
+          showOwner={showOwner}
+          last={index === stations.length - 1}
+          state={stationState(station, deviceOnline)}
+        />
       ))}
     </View>
   );
 }
 
-type StationRowProps = { station: Station; href: Href; showOwner: boolean; last: boolean };
+type StationRowProps = {
+  station: Station;
+  href: Href;
+  showOwner: boolean;
+  last: boolean;
+  state: ReturnType<typeof stationState>;
+};
 
-function StationRow({ station, href, showOwner, last }: StationRowProps) {
+function StationRow({ station, href, showOwner, last, state }: StationRowProps) {
   const { colors } = useAppTheme();
   const [hovered, setHovered] = useState(false);
   return (
@@ -135,6 +175,9 @@ function StationRow({ station, href, showOwner, last }: StationRowProps) {
         <Text variant="mono" style={styles.colLoc}>
           {formatLocator(station.locator)}
         </Text>
+        <Text variant="caption" tone={state.tone} style={styles.colState}>
+          {state.words}
+        </Text>
         <Text variant="caption" tone="muted" style={styles.colUpdated}>
           {formatUtcDateTime(station.updatedAt).replace(' UTC', '')}
         </Text>
@@ -158,4 +201,5 @@ const styles = StyleSheet.create({
   colCall: { flex: 2 },
   colLoc: { flex: 1.4 },
   colUpdated: { flex: 2.2 },
+  colState: { flex: 2.6 },
 });

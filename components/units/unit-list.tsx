@@ -9,22 +9,33 @@ import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandName, filterBands, generatorSummary } from './unit-summary';
 
-export type UnitListProps = { units: Unit[]; layout: 'cards' | 'table' };
+export type UnitListProps = {
+  units: Unit[];
+  layout: 'cards' | 'table';
+  /** unit id → the names of the operator's stations on it */
+  usedBy?: ReadonlyMap<number, string[]>;
+};
+
+const usedByWords = (unit: Unit, usedBy?: ReadonlyMap<number, string[]>) => {
+  if (!usedBy) return null;
+  const names = usedBy.get(unit.id) ?? [];
+  return names.length ? `Used by ${names.join(', ')}` : 'No station uses it yet';
+};
 
 const detail = (unit: Unit): Href => ({ pathname: '/units/[id]', params: { id: String(unit.id) } });
 const openLabel = (unit: Unit) => `Open unit ${unit.name}`;
 
 /** The beacon hardware register: cards on phones, columns on wide screens. */
-export function UnitList({ units, layout }: UnitListProps) {
+export function UnitList({ units, layout, usedBy }: UnitListProps) {
   if (layout === 'cards')
     return (
       <View style={styles.cards}>
         {units.map((unit) => (
-          <UnitCard key={unit.id} unit={unit} />
+          <UnitCard key={unit.id} unit={unit} usedBy={usedByWords(unit, usedBy)} />
         ))}
       </View>
     );
-  return <UnitTable units={units} />;
+  return <UnitTable units={units} usedBy={usedBy} />;
 }
 
 function Thumb({ unit, size }: { unit: Unit; size: number }) {
@@ -70,7 +81,7 @@ function BandTags({ unit }: { unit: Unit }) {
   );
 }
 
-function UnitCard({ unit }: { unit: Unit }) {
+function UnitCard({ unit, usedBy }: { unit: Unit; usedBy: string | null }) {
   const { colors } = useAppTheme();
   return (
     <Link href={detail(unit)} asChild>
@@ -95,13 +106,18 @@ function UnitCard({ unit }: { unit: Unit }) {
             {generatorSummary(unit)}
           </Text>
           <BandTags unit={unit} />
+          {usedBy ? (
+            <Text variant="caption" tone="muted">
+              {usedBy}
+            </Text>
+          ) : null}
         </View>
       </Pressable>
     </Link>
   );
 }
 
-function UnitTable({ units }: { units: Unit[] }) {
+function UnitTable({ units, usedBy }: { units: Unit[]; usedBy?: ReadonlyMap<number, string[]> }) {
   const { colors } = useAppTheme();
   const head = [
     { key: 'photo', label: '', style: styles.colPhoto },
@@ -109,6 +125,7 @@ function UnitTable({ units }: { units: Unit[] }) {
     { key: 'serial', label: 'Serial', style: styles.colSerial },
     { key: 'generator', label: 'Generator · reference', style: styles.colGen },
     { key: 'bands', label: 'Filter bands', style: styles.colBands },
+    ...(usedBy ? [{ key: 'used', label: 'Stations', style: styles.colUsed }] : []),
   ];
   return (
     <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
@@ -120,13 +137,13 @@ function UnitTable({ units }: { units: Unit[] }) {
         ))}
       </View>
       {units.map((unit, index) => (
-        <UnitRow key={unit.id} unit={unit} last={index === units.length - 1} />
+        <UnitRow key={unit.id} unit={unit} last={index === units.length - 1} usedBy={usedBy ? (usedBy.get(unit.id) ?? []) : null} />
       ))}
     </View>
   );
 }
 
-function UnitRow({ unit, last }: { unit: Unit; last: boolean }) {
+function UnitRow({ unit, last, usedBy }: { unit: Unit; last: boolean; usedBy: string[] | null }) {
   const { colors } = useAppTheme();
   const [hovered, setHovered] = useState(false);
   return (
@@ -157,6 +174,11 @@ function UnitRow({ unit, last }: { unit: Unit; last: boolean }) {
         <View style={styles.colBands}>
           <BandTags unit={unit} />
         </View>
+        {usedBy ? (
+          <Text variant="caption" tone="muted" style={styles.colUsed}>
+            {usedBy.length ? usedBy.join(', ') : 'none yet'}
+          </Text>
+        ) : null}
       </Pressable>
     </Link>
   );
@@ -178,6 +200,7 @@ const styles = StyleSheet.create({
   headRow: { borderBottomWidth: 1 },
   headCell: { textTransform: 'uppercase', letterSpacing: 0.6 },
   colPhoto: { width: 40 },
+  colUsed: { flex: 2 },
   colName: { flex: 2.4 },
   colSerial: { flex: 1.2 },
   colGen: { flex: 2.2 },

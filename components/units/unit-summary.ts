@@ -35,3 +35,11 @@ export function filterAndSortUnits(units: readonly Unit[], query: string, sort: 
     })
     .sort((a, b) => (sort === 'band' ? order(a) - order(b) : 0) || a.name.localeCompare(b.name));
 }
+
+/** unit id → the names of the stations that run on it. */
+export function stationsByUnit(stations: readonly { unitId: number | null; name: string }[]): Map<number, string[]> {
+  const byUnit = new Map<number, string[]>();
+  for (const station of stations)
+    if (station.unitId !== null) byUnit.set(station.unitId, [...(byUnit.get(station.unitId) ?? []), station.name]);
+  return byUnit;
+}

@@ -1,6 +1,7 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
+import { useFleetHealthQuery } from '@/components/health/queries';
 import { useStationsQuery } from '@/components/stations/queries';
 import { StationList } from '@/components/stations/station-list';
 import { useBreakpoints } from '@/components/ui/breakpoints';
@@ -15,6 +16,8 @@ export default function StationsRoute() {
   const router = useRouter();
   const { isTablet } = useBreakpoints();
   const stations = useStationsQuery();
+  const health = useFleetHealthQuery().data;
+  const deviceOnline = health ? new Map(health.filter((h) => h.hasDevice).map((h) => [h.stationId, h.online])) : undefined;
   const addStation = () => router.push('/stations/new');
 
   let body;
@@ -29,7 +32,7 @@ export default function StationsRoute() {
         action={<Button label="Add your first station" onPress={addStation} />}
       />
     );
-  else body = <StationList stations={stations.data} layout={isTablet ? 'table' : 'cards'} />;
+  else body = <StationList stations={stations.data} layout={isTablet ? 'table' : 'cards'} deviceOnline={deviceOnline} />;
 
   return (
     <Screen>

@@ -2,9 +2,10 @@ import { useRouter } from 'expo-router';
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { useStationsQuery } from '@/components/stations/queries';
 import { useUnitsQuery } from '@/components/units/queries';
 import { UnitList } from '@/components/units/unit-list';
-import { filterAndSortUnits, type UnitSort } from '@/components/units/unit-summary';
+import { filterAndSortUnits, stationsByUnit, type UnitSort } from '@/components/units/unit-summary';
 import { useBreakpoints } from '@/components/ui/breakpoints';
 import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
@@ -18,6 +19,8 @@ export default function UnitsRoute() {
   const router = useRouter();
   const { isTablet } = useBreakpoints();
   const units = useUnitsQuery();
+  const stations = useStationsQuery().data;
+  const usedBy = useMemo(() => (stations ? stationsByUnit(stations) : undefined), [stations]);
   const [query, setQuery] = useState('');
   const [sort, setSort] = useState<UnitSort>('name');
   const addUnit = () => router.push('/units/new');
@@ -60,7 +63,7 @@ export default function UnitsRoute() {
           </View>
         </View>
         {shown.length ? (
-          <UnitList units={shown} layout={isTablet ? 'table' : 'cards'} />
+          <UnitList units={shown} layout={isTablet ? 'table' : 'cards'} usedBy={usedBy} />
         ) : (
           <EmptyState title="No unit matches" message={`None of your units has “${query.trim()}” in its name or filter bands.`} />
         )}
