@@ -4,6 +4,7 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { EmptyState } from '../ui/query-states';
 import { Text } from '../ui/text';
+import { TextLink } from '../ui/text-link';
 import { formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
 import { formatOffsetHz } from '../ui/format';
@@ -80,7 +81,17 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
               <Text variant="mono">
                 {formatOffsetHz(proposal.currentOffsetHz)} → {formatOffsetHz(proposal.proposedOffsetHz)}
               </Text>
-              {state?.status === 'sent' ? (
+              {proposal.meets.length ? (
+                <Text variant="caption" tone="muted">
+                  Parts it from {proposal.meets.join(', ')}.
+                </Text>
+              ) : null}
+              {proposal.mine ? (
+                <TextLink
+                  href={{ pathname: '/stations/[id]/edit', params: { id: String(proposal.stationId) } }}
+                  label={`Your own station: set ${formatOffsetHz(proposal.proposedOffsetHz)} yourself`}
+                />
+              ) : state?.status === 'sent' ? (
                 <Text variant="label" tone="primary" accessibilityLiveRegion="polite">
                   Sent — waiting for the owner
                 </Text>

@@ -34,6 +34,11 @@ export function OccupancyChart({ data, width }: OccupancyChartProps) {
     return iso ? `${iso.slice(11, 13)}` : '';
   };
   const chartWidth = Math.max(300, width);
+  // the y-axis reaches a round number at or above the tallest stacked bar, with ticks every step
+  const tallest = Math.max(1, ...hours.map((_hour, index) => series.reduce((sum, points) => sum + points[index].y, 0)));
+  const step = tallest <= 10 ? 2 : tallest <= 25 ? 5 : tallest <= 50 ? 10 : Math.ceil(tallest / 50) * 10;
+  const top = Math.ceil(tallest / step) * step;
+  const yTicks = Array.from({ length: top / step + 1 }, (_v, i) => i * step);
   const axisStyle = {
     axis: { stroke: colors.border },
     grid: { stroke: 'transparent' },
@@ -47,7 +52,13 @@ export function OccupancyChart({ data, width }: OccupancyChartProps) {
       accessibilityLabel={`Transmissions per UTC hour over the next 24 hours on ${bands.map(bandLabel).join(', ')}`}
       style={styles.wrap}
     >
-      <VictoryChart width={chartWidth} height={240} padding={{ top: 12, bottom: 46, left: 44, right: 12 }} domainPadding={{ x: 8 }}>
+      <VictoryChart
+        width={chartWidth}
+        height={240}
+        padding={{ top: 14, bottom: 46, left: 48, right: 12 }}
+        domain={{ y: [0, top] }}
+        domainPadding={{ x: 14 }}
+      >
         <VictoryAxis
           tickValues={hours.map((_hour, index) => index).filter((index) => index % (chartWidth < 500 ? 4 : 2) === 0)}
           tickFormat={tick}
@@ -56,6 +67,7 @@ export function OccupancyChart({ data, width }: OccupancyChartProps) {
         />
         <VictoryAxis
           dependentAxis
+          tickValues={yTicks}
           label="Transmissions"
           style={{ ...axisStyle, grid: { stroke: colors.border, strokeDasharray: '2,4' } }}
         />

@@ -19,15 +19,16 @@ function suspendedLine(suspension: NonNullable<Station['suspension']>) {
 export function StationDetails({ station, readOnly }: StationDetailsProps) {
   return (
     <View style={styles.wrap}>
+      {readOnly ? (
+        <Card tone="signal">
+          <Text variant="label">Read-only: this station belongs to {station.ownerName}</Text>
+          <Text>You can look at everything here; only its owner can change it.</Text>
+        </Card>
+      ) : null}
       {station.suspension ? (
         <Card tone="signal" style={styles.suspended}>
           <Text variant="label">{suspendedLine(station.suspension)}</Text>
           <Text>Reason: {station.suspension.reason}</Text>
-        </Card>
-      ) : null}
-      {readOnly ? (
-        <Card tone="signal">
-          <Text variant="label">Read-only: this station belongs to {station.ownerName}</Text>
         </Card>
       ) : null}
       <Card>

@@ -93,7 +93,13 @@ export type SuspensionAnswer = { suspended: true; reason: string };
 /** GET /api/clubs/:clubId/conflicts: club stations that meet in the same slots over the next 24 hours. */
 export type ConflictStation = { name: string; owner: string; callsign: string };
 export type ClubConflict = FleetConflict & { aStation?: ConflictStation; bStation?: ConflictStation };
-export type ConflictProposal = FleetProposal['proposals'][number] & { stationName: string };
+export type ConflictProposal = FleetProposal['proposals'][number] & {
+  stationName: string;
+  /** the station is the asking admin's own: they change it themselves, no proposal is sent */
+  mine: boolean;
+  /** names of the stations it meets as planned now */
+  meets: string[];
+};
 export type ClubConflicts = {
   fromUtc: string;
   conflicts: ClubConflict[];

@@ -69,7 +69,19 @@ export async function conflicts(user: SessionUser, clubId: number, now = Date.no
     conflicts: found.map((c) => ({ ...c, aStation: names.get(Number(c.a)), bStation: names.get(Number(c.b)) })),
     proposals: proposal.proposals
       .filter((p) => Math.abs(p.proposedOffsetHz - p.currentOffsetHz) > 1e-9)
-      .map((p) => ({ ...p, stationName: names.get(Number(p.stationId))?.name ?? '' })),
+      .map((p) => ({
+        ...p,
+        stationName: names.get(Number(p.stationId))?.name ?? '',
+        mine: plans.some((plan) => plan.station.id === Number(p.stationId) && plan.station.ownerId === user.id),
+        // the stations it meets now, by name, so the proposal says what it parts
+        meets: [
+          ...new Set(
+            found
+              .filter((c) => Number(c.a) === Number(p.stationId) || Number(c.b) === Number(p.stationId))
+              .map((c) => names.get(Number(Number(c.a) === Number(p.stationId) ? c.b : c.a))?.name ?? ''),
+          ),
+        ].filter(Boolean),
+      })),
     unresolved: proposal.unresolved,
   };
 }
