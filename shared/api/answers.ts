@@ -5,6 +5,7 @@
  */
 import type { BandId } from '../domain/bands';
 import type { FleetConflict, FleetProposal, PlanResult, ScheduleIssue } from '../domain/schedule';
+import type { BandCalibrationFromReports } from '../domain/reception/calibration-from-reports';
 import type { DeviceConfig, StationConfig } from '../domain/workshop';
 import type {
   AlertSettings,
@@ -111,6 +112,22 @@ export type CalibrationProposal = {
   referenceErrorPpm: number;
   errorHz: number;
   offsets: { bandId: BandId; frequencyHz: number; calibrationOffsetHz: number }[];
+};
+
+/**
+ * GET /api/stations/:id/calibration/from-reports: per band, the median heard error and the offset it proposes
+ * (sign of calibrationOffsetHz: positive = radiates high). Only reports since the band's last calibration count.
+ */
+export type CalibrationFromReports = {
+  fromUtc: string;
+  toUtc: string;
+  bands: (BandCalibrationFromReports & {
+    /** the start of the reports used on this band: the period's start or the band's last calibration, whichever is later */
+    sinceUtc: string;
+    dialHz: number;
+    /** tone 0 as planned (dial + the station's audio offset) */
+    plannedCarrierHz: number;
+  })[];
 };
 
 /** GET /api/stations/:id/plan: the shared expansion plus the editor checks. */

@@ -8,6 +8,7 @@ import type { ReceptionQuery } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import { ownerInClubs, stationIdsOf, stationOwner } from './access.repo';
 import { forgetPlan, stationPlans } from './plan-cache';
+import * as analyses from './analyses.repo';
 import * as readings from './readings.repo';
 
 const HOUR_MS = 3_600_000;
@@ -216,3 +217,7 @@ export async function forgetStation(stationId: number, transaction?: Transaction
   if (transaction) transaction.afterCommit(() => void forgetPlan(stationId));
   else forgetPlan(stationId);
 }
+
+/** A station's heard-frequency errors in a period, for the calibration analysis (the caller decides who may see them). */
+export const heardErrors = (sequelize: Sequelize, stationId: number, fromMs: number, toMs: number) =>
+  analyses.heardErrors(sequelize, stationId, fromMs, toMs);
