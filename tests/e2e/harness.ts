@@ -1,5 +1,5 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -115,4 +115,22 @@ export async function screenshot(page: Page, name: string) {
 /** The first visible element with this text (screens lower in the stack stay in the DOM, hidden). */
 export function visibleText(page: Page, text: string | RegExp) {
   return page.getByText(text).locator('visible=true').first();
+}
+
+const AXE = readFileSync(path.resolve(__dirname, '../../node_modules/axe-core/axe.min.js'), 'utf8');
+
+/** axe-core's critical and serious findings on the page as it is now (evaluated over DevTools, so the CSP does not apply). */
+export async function axeFindings(page: Page) {
+  await page.evaluate(AXE);
+  return page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> } }).axe;
+    const result = await axe.run();
+    return result.violations
+      .filter((v) => v.impact === 'critical' || v.impact === 'serious')
+      .map((v) => ({
+        id: v.id,
+        targets: v.nodes.map((n) => (n as { target: string[] }).target),
+      }))
+      .map((v) => `${v.id}: ${JSON.stringify(v.targets)}`);
+  });
 }

@@ -20,3 +20,23 @@ export async function heardErrors(sequelize: Sequelize, stationId: number, fromM
     slotStartMs: utcMs(r.slotStart),
   }));
 }
+
+/** How many reports of a station were stored with a slot in [fromMs, toMs). */
+export async function reportsOfStation(sequelize: Sequelize, stationId: number, fromMs: number, toMs: number): Promise<number> {
+  const [row] = await sequelize.query<{ n: number | string }>(
+    'SELECT COUNT(*) AS n FROM reception_reports WHERE stationId = ? AND slotStart >= ? AND slotStart < ?',
+    { replacements: [stationId, sqlTime(fromMs), sqlTime(toMs)], type: QueryTypes.SELECT },
+  );
+  return Number(row.n);
+}
+
+/** Whether reports of other transmitters on these bands arrived in [fromMs, toMs) (batches by arrival, then their reports). */
+export async function othersHeardOn(sequelize: Sequelize, stationId: number, bandIds: string[], fromMs: number, toMs: number) {
+  if (bandIds.length === 0) return false;
+  const rows = await sequelize.query(
+    `SELECT 1 FROM reception_batches b JOIN reception_reports r ON r.batchId = b.id
+      WHERE b.receivedAt >= ? AND b.receivedAt < ? AND r.bandId IN (?) AND (r.stationId IS NULL OR r.stationId <> ?) LIMIT 1`,
+    { replacements: [sqlTime(fromMs), sqlTime(toMs), bandIds, stationId], type: QueryTypes.SELECT },
+  );
+  return rows.length > 0;
+}

@@ -221,3 +221,9 @@ export async function forgetStation(stationId: number, transaction?: Transaction
 /** A station's heard-frequency errors in a period, for the calibration analysis (the caller decides who may see them). */
 export const heardErrors = (sequelize: Sequelize, stationId: number, fromMs: number, toMs: number) =>
   analyses.heardErrors(sequelize, stationId, fromMs, toMs);
+
+/** For the report alerts: this station's reports in a period, and whether others on these bands are still being heard. */
+export const reportsOfStation = (sequelize: Sequelize, stationId: number, fromMs: number, toMs: number) =>
+  analyses.reportsOfStation(sequelize, stationId, fromMs, toMs);
+export const othersHeardOn = (sequelize: Sequelize, stationId: number, bandIds: string[], fromMs: number, toMs: number) =>
+  analyses.othersHeardOn(sequelize, stationId, bandIds, fromMs, toMs);
