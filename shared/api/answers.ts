@@ -6,6 +6,7 @@
 import type { BandId } from '../domain/bands';
 import type { FleetConflict, FleetProposal, PlanResult, ScheduleIssue } from '../domain/schedule';
 import type { BandCalibrationFromReports } from '../domain/reception/calibration-from-reports';
+import type { StabilityPoint, StabilityVerdict } from '../domain/reception/stability';
 import type { DeviceConfig, StationConfig } from '../domain/workshop';
 import type {
   AlertSettings,
@@ -128,6 +129,19 @@ export type CalibrationFromReports = {
     /** tone 0 as planned (dial + the station's audio offset) */
     plannedCarrierHz: number;
   })[];
+};
+
+/** GET /api/stations/:id/stability?band=&from=&to=: heard error and drift per transmission beside the unit's temperature. */
+export type StabilityAnswer = {
+  bandId: BandId;
+  fromUtc: string;
+  toUtc: string;
+  carrierHz: number;
+  points: StabilityPoint[];
+  verdict: StabilityVerdict;
+  /** the station's unit and the coefficient it states now, so the estimate can be saved to it */
+  unitId: number | null;
+  unitTempCoPpmPerC: number | null;
 };
 
 /** GET /api/stations/:id/plan: the shared expansion plus the editor checks. */

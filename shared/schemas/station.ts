@@ -115,3 +115,6 @@ export type MeasurementInput = z.infer<typeof measurementInput>;
 
 /** GET /api/stations/:id/calibration/from-reports?from=&to= (ISO UTC; the last 7 days unless told). */
 export const calibrationFromReportsQuery = z.object({ from: utcTimestampField('from').optional(), to: utcTimestampField('to').optional() });
+
+/** GET /api/stations/:id/stability?band=&from=&to= (the station's first enabled band and the last 7 days unless told). */
+export const stabilityQuery = calibrationFromReportsQuery.extend({ band: bandIdField.optional() });

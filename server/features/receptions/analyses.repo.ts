@@ -40,3 +40,19 @@ export async function othersHeardOn(sequelize: Sequelize, stationId: number, ban
   );
   return rows.length > 0;
 }
+
+export type HeardSampleRow = { slotStartMs: number; frequencyErrorHz: number; driftHz: number };
+
+/** Heard error and reported drift of a station's reports on one band in [fromMs, toMs), for stability. */
+export async function heardSamples(sequelize: Sequelize, stationId: number, bandId: string, fromMs: number, toMs: number) {
+  const rows = await sequelize.query<{ slotStart: Date | string; frequencyErrorHz: number; driftHz: number }>(
+    `SELECT slotStart, frequencyErrorHz, driftHz FROM reception_reports
+      WHERE stationId = ? AND slotStart >= ? AND slotStart < ? AND bandId = ? AND frequencyErrorHz IS NOT NULL`,
+    { replacements: [stationId, sqlTime(fromMs), sqlTime(toMs), bandId], type: QueryTypes.SELECT },
+  );
+  return rows.map((r): HeardSampleRow => ({
+    slotStartMs: utcMs(r.slotStart),
+    frequencyErrorHz: Number(r.frequencyErrorHz),
+    driftHz: Number(r.driftHz),
+  }));
+}

@@ -227,3 +227,5 @@ export const reportsOfStation = (sequelize: Sequelize, stationId: number, fromMs
   analyses.reportsOfStation(sequelize, stationId, fromMs, toMs);
 export const othersHeardOn = (sequelize: Sequelize, stationId: number, bandIds: string[], fromMs: number, toMs: number) =>
   analyses.othersHeardOn(sequelize, stationId, bandIds, fromMs, toMs);
+export const heardSamples = (sequelize: Sequelize, stationId: number, bandId: string, fromMs: number, toMs: number) =>
+  analyses.heardSamples(sequelize, stationId, bandId, fromMs, toMs);
