@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { CalibrationFromReports, CalibrationProposal } from '@/shared/api/answers';
+import type { CalibrationFromReports, CalibrationProposal, StabilityAnswer } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 import type { BandId } from '@/shared/domain/bands';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput } from '@/shared/schemas';
@@ -50,5 +50,14 @@ export function useCalibrationFromReportsQuery(stationId: number, enabled: boole
     queryKey: fromReportsKey(stationId),
     queryFn: () => api<CalibrationFromReports>(`/stations/${stationId}/calibration/from-reports`),
     enabled: enabled && stationId > 0,
+  });
+}
+
+/** The last 7 days' heard error and drift per transmission on the station's first enabled band, beside the unit's temperature. */
+export function useStabilityQuery(stationId: number) {
+  return useQuery({
+    queryKey: ['stability', stationId] as const,
+    queryFn: () => api<StabilityAnswer>(`/stations/${stationId}/stability`),
+    enabled: stationId > 0,
   });
 }

@@ -16,6 +16,7 @@ import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { useCalibrationFromReportsQuery, useSaveCalibrationMutation, type CalibrationFromReports } from './queries';
+import { StabilityCard } from './stability-card';
 import { WindowGauge } from './window-gauge';
 
 type BandResult = CalibrationFromReports['bands'][number];
@@ -130,12 +131,13 @@ export function ReportsCalibration({ station, unit }: ReportsCalibrationProps) {
           <BandCard key={result.bandId} station={station} unit={unit} result={result} onApply={() => apply.ask(result)} />
         ))
       )}
+      <StabilityCard stationId={station.id} region={station.region} readOnly={false} />
       <ConfirmDialog
         {...apply.dialog}
         title={asking ? `Apply ${formatSigned(asking.proposedOffsetHz ?? 0, 2, 'Hz')} to ${bandName(station, asking.bandId)}?` : 'Apply?'}
         message={
           asking
-            ? `The device will be told to send ${bandName(station, asking.bandId)} that much lower from its next configuration poll. The change is kept in the station’s history.`
+            ? `The offset on ${bandName(station, asking.bandId)} goes from ${asking.currentOffsetHz === null ? 'none' : formatSigned(asking.currentOffsetHz, 2, 'Hz')} to ${formatSigned(asking.proposedOffsetHz ?? 0, 2, 'Hz')}: from its next configuration poll the device sends ${formatValue(Math.abs(asking.medianErrorHz ?? 0), 2, 'Hz')} ${(asking.medianErrorHz ?? 0) >= 0 ? 'lower' : 'higher'} than now. The change is kept in the station’s history.`
             : ''
         }
         confirmLabel="Apply offset"

@@ -45,6 +45,8 @@ describe('calibration from reports', () => {
           await visibleText(page, /Receivers heard you/).waitFor();
           await visibleText(page, /As heard now/).waitFor();
           await visibleText(page, /After applying/).waitFor();
+          await visibleText(page, /^Stability on /).waitFor();
+          await visibleText(page, /^Verdict: (steady|drifts as it warms|wanders|too few reports)/).waitFor();
           await screenshot(page, `e2e-calibration-reports-${viewport.name}`);
           assert.deepEqual(await axeFindings(page), [], 'axe findings on the proposal');
 
