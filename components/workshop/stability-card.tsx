@@ -32,6 +32,7 @@ export function StabilityCard({ stationId, region, readOnly }: { stationId: numb
   const name = found.ok ? found.band.name : data.bandId;
   const verdict = data.verdict;
   const newest = data.points.slice(-SHOWN).reverse();
+  const withTemperature = newest.some((p) => p.temperatureC !== null);
   return (
     <View style={[styles.card, { borderColor: colors.border }]}>
       <Text variant="heading" accessibilityRole="header">
@@ -47,12 +48,15 @@ export function StabilityCard({ stationId, region, readOnly }: { stationId: numb
       {newest.length ? (
         <View accessibilityLabel="Newest transmissions heard" style={styles.rows}>
           <Text variant="caption" tone="muted">
-            Newest transmissions (UTC): heard error · drift · unit temperature
+            {withTemperature
+              ? 'Newest transmissions (month-day, UTC): heard error · drift · unit temperature'
+              : 'Newest transmissions (month-day, UTC): heard error · drift. The device sent no temperatures for them.'}
           </Text>
           {newest.map((p) => (
-            <Text key={p.slotStartMs} variant="mono">
-              {formatUtcDateTime(new Date(p.slotStartMs).toISOString())} · {formatSigned(p.medianErrorHz, 1, 'Hz')} ·{' '}
-              {formatSigned(p.medianDriftHz, 0, 'Hz')} · {p.temperatureC === null ? 'no temperature' : `${p.temperatureC.toFixed(1)} °C`}
+            <Text key={p.slotStartMs}>
+              {formatUtcDateTime(new Date(p.slotStartMs).toISOString()).slice(5)} · {formatSigned(p.medianErrorHz, 1, 'Hz')} ·{' '}
+              {formatSigned(p.medianDriftHz, 0, 'Hz')}
+              {withTemperature ? ` · ${p.temperatureC === null ? 'no temperature' : `${p.temperatureC.toFixed(1)} °C`}` : ''}
             </Text>
           ))}
         </View>

@@ -48,6 +48,8 @@ describe('calibration from reports', () => {
           await visibleText(page, /^Stability on /).waitFor();
           await visibleText(page, /^Verdict: (steady|drifts as it warms|wanders|too few reports)/).waitFor();
           await screenshot(page, `e2e-calibration-reports-${viewport.name}`);
+          await visibleText(page, /^Stability on /).scrollIntoViewIfNeeded();
+          await screenshot(page, `e2e-calibration-stability-${viewport.name}`);
           assert.deepEqual(await axeFindings(page), [], 'axe findings on the proposal');
 
           await page
