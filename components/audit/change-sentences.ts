@@ -30,7 +30,10 @@ const fieldWords: Record<string, { label: string; text: (value: unknown) => stri
   enabled: { label: 'Band', text: (v) => (v ? 'enabled' : 'disabled') },
   bandId: { label: 'Band', text: (v) => bandName(v as BandId) },
   calibrationOffsetHz: { label: 'Calibration offset', text: (v) => (num(v) ? formatSigned(v, 1, 'Hz') : 'not calibrated') },
-  calibrationSource: { label: 'Calibration', text: (v) => (v === 'measured' ? 'measured' : v === 'typed' ? 'typed in' : 'none') },
+  calibrationSource: {
+    label: 'Calibration',
+    text: (v) => (v === 'measured' ? 'measured' : v === 'typed' ? 'typed in' : v === 'reports' ? 'from reports' : 'none'),
+  },
   calibratedAt: { label: 'Calibrated', text: (v) => (typeof v === 'string' ? formatUtcDateTime(v) : 'never') },
   referenceErrorPpm: { label: 'Reference error', text: (v) => (num(v) ? formatSigned(v, 2, 'ppm') : 'not given') },
   maxPowerDbm: { label: 'Power limit', text: (v) => (num(v) ? formatValue(v, 0, 'dBm') : plain(v)) },

@@ -33,6 +33,8 @@ export const ruleTitles: Record<AlertRule, string> = {
   'clock-offset': 'Clock off',
   'drift-out-of-window': 'Drift may leave the window',
   'transmitting-while-suspended': 'Transmitting while suspended',
+  'unheard-while-transmitting': 'Transmitting but nobody hears it',
+  'heard-off-frequency': 'Heard off frequency',
 };
 
 export type LinkState = 'online' | 'offline' | 'no-device';

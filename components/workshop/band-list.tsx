@@ -73,7 +73,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
                 enabled
                   ? offset == null
                     ? 'Not calibrated yet.'
-                    : `Calibration: ${formatSigned(offset, 2, 'Hz')} (${setting?.calibrationSource === 'typed' ? 'typed' : 'measured'}).`
+                    : `Calibration: ${formatSigned(offset, 2, 'Hz')} (${setting?.calibrationSource === 'typed' ? 'typed' : setting?.calibrationSource === 'reports' ? 'from reports' : 'measured'}).`
                   : 'Off: the beacon skips this band. A filter on the unit covers it.'
               }
               onChange={(next) => onToggle(band.id, next)}

@@ -62,3 +62,15 @@ export function LazyOnAirView(props: ComponentProps<typeof OnAirView>) {
     </LazyBoundary>
   );
 }
+
+const ReportsCalibration = lazy(() => import('./reports-calibration').then((m) => ({ default: m.ReportsCalibration })));
+
+export function LazyReportsCalibration(props: ComponentProps<typeof ReportsCalibration>) {
+  return (
+    <LazyBoundary what="calibration from reports">
+      <Suspense fallback={<LoadingState label="Opening the reports…" />}>
+        <ReportsCalibration {...props} />
+      </Suspense>
+    </LazyBoundary>
+  );
+}

@@ -1,13 +1,15 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { CalibrationProposal } from '@/shared/api/answers';
+import type { CalibrationFromReports, CalibrationProposal, StabilityAnswer } from '@/shared/api/answers';
 import { api } from '@/shared/api/client';
 import type { BandId } from '@/shared/domain/bands';
 import type { CalibrationInput, MeasurementInput, Station, StationBandInput } from '@/shared/schemas';
 
 import { stationKeys } from '../stations/queries';
 
-export type { CalibrationProposal };
+export type { CalibrationFromReports, CalibrationProposal };
+
+export const fromReportsKey = (stationId: number) => ['calibration-from-reports', stationId] as const;
 
 function useStationWrite<TInput>(stationId: number, request: (input: TInput) => Promise<Station>) {
   const queryClient = useQueryClient();
@@ -15,7 +17,10 @@ function useStationWrite<TInput>(stationId: number, request: (input: TInput) => 
     mutationFn: request,
     onSuccess: (station) => {
       queryClient.setQueryData(stationKeys.detail(stationId), station);
-      return queryClient.invalidateQueries({ queryKey: stationKeys.list() });
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: stationKeys.list() }),
+        queryClient.invalidateQueries({ queryKey: fromReportsKey(stationId) }),
+      ]);
     },
   });
 }
@@ -36,5 +41,23 @@ export function useCalibrationProposalMutation(stationId: number) {
   return useMutation({
     mutationFn: (measurement: MeasurementInput) =>
       api<CalibrationProposal>(`/stations/${stationId}/calibration/proposal`, { method: 'POST', body: measurement }),
+  });
+}
+
+/** The last 7 days' reports, per band: the median heard error and the offset it proposes. */
+export function useCalibrationFromReportsQuery(stationId: number, enabled: boolean) {
+  return useQuery({
+    queryKey: fromReportsKey(stationId),
+    queryFn: () => api<CalibrationFromReports>(`/stations/${stationId}/calibration/from-reports`),
+    enabled: enabled && stationId > 0,
+  });
+}
+
+/** The last 7 days' heard error and drift per transmission on the station's first enabled band, beside the unit's temperature. */
+export function useStabilityQuery(stationId: number) {
+  return useQuery({
+    queryKey: ['stability', stationId] as const,
+    queryFn: () => api<StabilityAnswer>(`/stations/${stationId}/stability`),
+    enabled: stationId > 0,
   });
 }

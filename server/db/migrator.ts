@@ -13,6 +13,7 @@ import * as m0010 from './migrations/0010-reception-imports';
 import * as m0011 from './migrations/0011-station-change-feed';
 import * as m0014 from './migrations/0014-email-changes';
 import * as m0018 from './migrations/0018-reception-hour-counts';
+import * as m0019 from './migrations/0019-batches-received';
 
 // An explicit list: the same code path under tsx, jest and compiled output.
 const migrations = [
@@ -29,6 +30,7 @@ const migrations = [
   { name: '0011-station-change-feed', ...m0011 },
   { name: '0014-email-changes', ...m0014 },
   { name: '0018-reception-hour-counts', ...m0018 },
+  { name: '0019-batches-received', ...m0019 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

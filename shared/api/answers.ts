@@ -5,6 +5,8 @@
  */
 import type { BandId } from '../domain/bands';
 import type { FleetConflict, FleetProposal, PlanResult, ScheduleIssue } from '../domain/schedule';
+import type { BandCalibrationFromReports } from '../domain/reception/calibration-from-reports';
+import type { StabilityPoint, StabilityVerdict } from '../domain/reception/stability';
 import type { DeviceConfig, StationConfig } from '../domain/workshop';
 import type {
   AlertSettings,
@@ -117,6 +119,35 @@ export type CalibrationProposal = {
   referenceErrorPpm: number;
   errorHz: number;
   offsets: { bandId: BandId; frequencyHz: number; calibrationOffsetHz: number }[];
+};
+
+/**
+ * GET /api/stations/:id/calibration/from-reports: per band, the median heard error and the offset it proposes
+ * (sign of calibrationOffsetHz: positive = radiates high). Only reports since the band's last calibration count.
+ */
+export type CalibrationFromReports = {
+  fromUtc: string;
+  toUtc: string;
+  bands: (BandCalibrationFromReports & {
+    /** the start of the reports used on this band: the period's start or the band's last calibration, whichever is later */
+    sinceUtc: string;
+    dialHz: number;
+    /** tone 0 as planned (dial + the station's audio offset) */
+    plannedCarrierHz: number;
+  })[];
+};
+
+/** GET /api/stations/:id/stability?band=&from=&to=: heard error and drift per transmission beside the unit's temperature. */
+export type StabilityAnswer = {
+  bandId: BandId;
+  fromUtc: string;
+  toUtc: string;
+  carrierHz: number;
+  points: StabilityPoint[];
+  verdict: StabilityVerdict;
+  /** the station's unit and the coefficient it states now, so the estimate can be saved to it */
+  unitId: number | null;
+  unitTempCoPpmPerC: number | null;
 };
 
 /** GET /api/stations/:id/plan: the shared expansion plus the editor checks. */

@@ -43,7 +43,8 @@ export const alertSettingsInput = z.object({
 });
 export type AlertSettings = z.infer<typeof alertSettingsInput>;
 
-export type AlertRule = 'silent' | 'clock-offset' | 'drift-out-of-window' | 'transmitting-while-suspended';
+export type AlertRule =
+  'silent' | 'clock-offset' | 'drift-out-of-window' | 'transmitting-while-suspended' | 'unheard-while-transmitting' | 'heard-off-frequency';
 export type Alert = {
   id: number;
   stationId: number;

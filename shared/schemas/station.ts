@@ -1,7 +1,7 @@
 import { LICENCE_REGIONS, type BandId, type LicenceRegion } from '../domain/bands';
 import { validateCallsign } from '../domain/wspr/callsign';
 import { WINDOW_HIGH_OFFSET_HZ, WINDOW_LOW_OFFSET_HZ } from '../domain/tones';
-import { callsignField, locatorField, nameText, noteText } from './fields';
+import { callsignField, locatorField, nameText, noteText, utcTimestampField } from './fields';
 import { bandIdField } from './unit';
 import { z } from './zod-setup';
 
@@ -56,7 +56,7 @@ export type StationBand = {
   enabled: boolean;
   /** measured or typed error of the generator on this band, Hz (positive = radiates high); null = not calibrated */
   calibrationOffsetHz: number | null;
-  calibrationSource: 'typed' | 'measured' | null;
+  calibrationSource: 'typed' | 'measured' | 'reports' | null;
   calibratedAt: string | null;
 };
 
@@ -94,9 +94,9 @@ export const stationBandInput = z.object({
 });
 export type StationBandInput = z.input<typeof stationBandInput>;
 
-/** POST /api/stations/:id/calibration: typed offsets, or a guided measurement's accepted proposals. */
+/** POST /api/stations/:id/calibration: typed offsets, a guided measurement's accepted proposals, or the proposals from reports. */
 export const calibrationInput = z.object({
-  source: z.enum(['typed', 'measured']),
+  source: z.enum(['typed', 'measured', 'reports']),
   referenceErrorPpm: z.number().min(-1000).max(1000).nullable().optional(),
   offsets: z
     .array(z.object({ bandId: bandIdField, calibrationOffsetHz: stationBandInput.shape.calibrationOffsetHz.unwrap().unwrap() }))
@@ -112,3 +112,9 @@ export const measurementInput = z.object({
   observedHz: z.number().positive('Give the frequency your receiver heard, in Hz'),
 });
 export type MeasurementInput = z.infer<typeof measurementInput>;
+
+/** GET /api/stations/:id/calibration/from-reports?from=&to= (ISO UTC; the last 7 days unless told). */
+export const calibrationFromReportsQuery = z.object({ from: utcTimestampField('from').optional(), to: utcTimestampField('to').optional() });
+
+/** GET /api/stations/:id/stability?band=&from=&to= (the station's first enabled band and the last 7 days unless told). */
+export const stabilityQuery = calibrationFromReportsQuery.extend({ band: bandIdField.optional() });

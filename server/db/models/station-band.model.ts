@@ -6,7 +6,7 @@ export class StationBandModel extends Model<InferAttributes<StationBandModel>, I
   declare bandId: string;
   declare enabled: boolean;
   declare calibrationOffsetHz: number | null;
-  declare calibrationSource: 'typed' | 'measured' | null;
+  declare calibrationSource: 'typed' | 'measured' | 'reports' | null;
   declare calibratedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;

@@ -1,9 +1,12 @@
 import type { Sequelize } from 'sequelize';
+import { bandFor } from '@/shared/domain/bands';
+import { calibrationFromReports, heardWindow, OFF_FREQUENCY_MARGIN_HZ } from '@/shared/domain/reception';
 import { bandOnAir } from '@/shared/domain/workshop';
 import type { AlertRule, Station } from '@/shared/schemas';
 import type { OutgoingMail } from '../../mail/mailer';
 import { contactOf } from '../auth/auth.service';
 import { planFor } from '../schedules/plan';
+import { heardErrors, othersHeardOn, reportsOfStation } from '../receptions/receptions.service';
 import { planInputsOf } from '../schedules/schedules.service';
 import { stationById } from '../stations/stations.service';
 import * as repo from './alerts.repo';
@@ -21,7 +24,60 @@ const ruleTitles: Record<AlertRule, string> = {
   'clock-offset': 'clock off',
   'drift-out-of-window': 'drift leaves the window',
   'transmitting-while-suspended': 'transmitting while suspended',
+  'unheard-while-transmitting': 'transmitting but unheard',
+  'heard-off-frequency': 'heard off frequency',
 };
+
+const HOUR_MS = 3_600_000;
+/** "Transmitting but unheard" looks back this far (our rule): a beacon with a sound antenna is heard within hours. */
+export const UNHEARD_HOURS = 6;
+/** "Heard off frequency" reads the last day's reports (our rule). */
+const OFF_FREQUENCY_LOOKBACK_MS = 24 * HOUR_MS;
+
+/** The two rules that read what receivers heard. */
+async function reportFindingsFor(sequelize: Sequelize, station: Station, nowMs: number): Promise<Finding[]> {
+  const findings: Finding[] = [];
+  const { unit, schedule } = await planInputsOf(station);
+  const sinceMs = nowMs - UNHEARD_HOURS * HOUR_MS;
+  if (schedule && station.transmitEnabled && !station.suspension) {
+    // sending all along: the device reported transmissions in the window's first hour and since, and the plan has them
+    const sentEarly = await transmissions.countBetween(station.id, new Date(sinceMs), new Date(sinceMs + HOUR_MS));
+    const sentLate = sentEarly > 0 ? await transmissions.countBetween(station.id, new Date(sinceMs + HOUR_MS), new Date(nowMs)) : 0;
+    const planned = sentLate > 0 ? planFor(station, unit, schedule, sinceMs, nowMs).transmissions : [];
+    if (planned.length > 0 && (await reportsOfStation(sequelize, station.id, sinceMs, nowMs)) === 0) {
+      const bandIds = [...new Set(planned.map((t) => t.bandId as string))];
+      if (await othersHeardOn(sequelize, station.id, bandIds, sinceMs, nowMs)) {
+        findings.push({
+          rule: 'unheard-while-transmitting',
+          message: `The device says it transmitted on ${bandIds.join(', ')} for the last ${UNHEARD_HOURS} hours, but no receiver reported it while others on the same band were heard. Check the antenna, the filter and any amplifier.`,
+        });
+      }
+    }
+  }
+  const enabled = station.bands.filter((b) => b.enabled);
+  if (enabled.length === 0) return findings;
+  const heard = await heardErrors(sequelize, station.id, nowMs - OFF_FREQUENCY_LOOKBACK_MS, nowMs);
+  for (const band of enabled) {
+    const found = bandFor(band.bandId, station.region);
+    if (!found.ok) continue;
+    const calibratedMs = band.calibratedAt ? Date.parse(band.calibratedAt) : 0;
+    const result = calibrationFromReports(
+      band.bandId,
+      band.calibrationOffsetHz,
+      heard.filter((h) => h.bandId === band.bandId && h.slotStartMs >= calibratedMs),
+    );
+    if (result.medianErrorHz === null) continue;
+    const window = heardWindow(found.band.dialHz, found.band.dialHz + station.audioOffsetHz, result.medianErrorHz);
+    if (window.marginHz < OFF_FREQUENCY_MARGIN_HZ) {
+      findings.push({
+        rule: 'heard-off-frequency',
+        message: `Receivers hear ${found.band.name} ${Math.abs(result.medianErrorHz).toFixed(1)} Hz ${result.medianErrorHz >= 0 ? 'high' : 'low'} (median of ${result.reports} reports): a tone is ${window.marginHz < 0 ? 'outside the window' : `only ${window.marginHz.toFixed(1)} Hz from the window edge`}. Calibrate ${found.band.name} from reports.`,
+      });
+      break;
+    }
+  }
+  return findings;
+}
 
 /** Which of our rules a station breaks right now. */
 async function findingsFor(station: Station, nowMs: number, tokenIssuedMs: number): Promise<Finding[]> {
@@ -89,7 +145,10 @@ export async function evaluateAlerts(sequelize: Sequelize, nowMs = Date.now()): 
     for (const { stationId, updatedAt } of await tokens.findAllIssued(transaction)) {
       const station = await stationById(stationId, transaction);
       if (!station) continue;
-      const findings = await findingsFor(station, nowMs, updatedAt.getTime());
+      const findings = [
+        ...(await findingsFor(station, nowMs, updatedAt.getTime())),
+        ...(await reportFindingsFor(sequelize, station, nowMs)),
+      ];
       const open = await repo.findOpen(stationId, transaction);
       for (const finding of findings) {
         const existing = open.find((a) => a.rule === finding.rule);

@@ -15,3 +15,13 @@ export const lastAtOrBefore = (stationId: number, at: Date) =>
 /** Heartbeats received since `since`, oldest first. */
 export const findSince = (stationId: number, since: Date) =>
   HeartbeatModel.findAll({ where: { stationId, receivedAt: { [Op.gte]: since } }, order: [['receivedAt', 'ASC']] });
+
+/** Heartbeat temperatures of a station in [from, to), oldest first (stability from reports). */
+export async function temperaturesBetween(stationId: number, from: Date, to: Date) {
+  const rows = await HeartbeatModel.findAll({
+    attributes: ['receivedAt', 'temperatureC'],
+    where: { stationId, receivedAt: { [Op.gte]: from, [Op.lt]: to }, temperatureC: { [Op.ne]: null } },
+    order: [['receivedAt', 'ASC']],
+  });
+  return rows.map((r) => ({ atMs: r.receivedAt.getTime(), temperatureC: Number(r.temperatureC) }));
+}

@@ -1,11 +1,12 @@
 import { Router } from 'express';
 import type { DeviceTokenAnswer } from '@/shared/api/answers';
 import type { Sequelize } from 'sequelize';
-import { alertSettingsInput } from '@/shared/schemas';
+import { alertSettingsInput, stabilityQuery } from '@/shared/schemas';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import { getOwnedBy } from '../stations/stations.service';
 import * as beacons from './beacon-status.service';
+import { stabilityFor } from './stability.service';
 import * as tokens from './tokens.service';
 
 /** Mounted at /api/stations/:id — device credentials, beacon status and alert thresholds (cookie session). */
@@ -23,6 +24,9 @@ export function stationDevicesRouter({ sequelize, offlineAfterS }: { sequelize: 
   });
   router.get('/health', async (req, res) => {
     res.json(await beacons.forStation(currentUser(req), stationId(req.params), { offlineAfterS }));
+  });
+  router.get('/stability', async (req, res) => {
+    res.json(await stabilityFor(sequelize, currentUser(req), stationId(req.params), stabilityQuery.parse(req.query), Date.now()));
   });
   router.put('/alert-settings', async (req, res) => {
     const settings = alertSettingsInput.parse(req.body);

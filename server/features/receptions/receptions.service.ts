@@ -8,6 +8,7 @@ import type { ReceptionQuery } from '@/shared/schemas';
 import { AppError } from '../../lib/app-error';
 import { ownerInClubs, stationIdsOf, stationOwner } from './access.repo';
 import { forgetPlan, stationPlans } from './plan-cache';
+import * as analyses from './analyses.repo';
 import * as readings from './readings.repo';
 
 const HOUR_MS = 3_600_000;
@@ -216,3 +217,15 @@ export async function forgetStation(stationId: number, transaction?: Transaction
   if (transaction) transaction.afterCommit(() => void forgetPlan(stationId));
   else forgetPlan(stationId);
 }
+
+/** A station's heard-frequency errors in a period, for the calibration analysis (the caller decides who may see them). */
+export const heardErrors = (sequelize: Sequelize, stationId: number, fromMs: number, toMs: number) =>
+  analyses.heardErrors(sequelize, stationId, fromMs, toMs);
+
+/** For the report alerts: this station's reports in a period, and whether others on these bands are still being heard. */
+export const reportsOfStation = (sequelize: Sequelize, stationId: number, fromMs: number, toMs: number) =>
+  analyses.reportsOfStation(sequelize, stationId, fromMs, toMs);
+export const othersHeardOn = (sequelize: Sequelize, stationId: number, bandIds: string[], fromMs: number, toMs: number) =>
+  analyses.othersHeardOn(sequelize, stationId, bandIds, fromMs, toMs);
+export const heardSamples = (sequelize: Sequelize, stationId: number, bandId: string, fromMs: number, toMs: number) =>
+  analyses.heardSamples(sequelize, stationId, bandId, fromMs, toMs);

@@ -1,9 +1,18 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import { calibrationInput, measurementInput, stationBandInput, stationInput, stationPatch, bandIdField } from '@/shared/schemas';
+import {
+  calibrationFromReportsQuery,
+  calibrationInput,
+  measurementInput,
+  stationBandInput,
+  stationInput,
+  stationPatch,
+  bandIdField,
+} from '@/shared/schemas';
 import { parseId } from '../../lib/params';
 import { currentUser, requireSignedIn } from '../../middleware/auth';
 import { AppError } from '../../lib/app-error';
+import { fromReportsFor } from './calibration-from-reports.service';
 import * as stations from './stations.service';
 
 export function stationsRouter({ sequelize }: { sequelize: Sequelize }) {
@@ -37,6 +46,10 @@ export function stationsRouter({ sequelize }: { sequelize: Sequelize }) {
   });
   router.post('/:id/calibration', async (req, res) => {
     res.json(await stations.saveCalibration(sequelize, currentUser(req), id(req.params.id), calibrationInput.parse(req.body)));
+  });
+  router.get('/:id/calibration/from-reports', async (req, res) => {
+    const query = calibrationFromReportsQuery.parse(req.query);
+    res.json(await fromReportsFor(sequelize, currentUser(req), id(req.params.id), query, Date.now()));
   });
   router.post('/:id/calibration/proposal', async (req, res) => {
     res.json(await stations.proposeCalibration(currentUser(req), id(req.params.id), measurementInput.parse(req.body)));

@@ -9,7 +9,11 @@ import { useUnitQuery } from '@/components/units/queries';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
-import { LazyCalibrationForm as CalibrationForm, LazyTypedOffsetsForm as TypedOffsetsForm } from '@/components/workshop/lazy-parts';
+import {
+  LazyCalibrationForm as CalibrationForm,
+  LazyReportsCalibration as ReportsCalibration,
+  LazyTypedOffsetsForm as TypedOffsetsForm,
+} from '@/components/workshop/lazy-parts';
 import { useCalibrationProposalMutation, useSaveCalibrationMutation } from '@/components/workshop/queries';
 import { WorkshopHeader } from '@/components/workshop/workshop-header';
 import { bandFor, bandsFor, type BandId } from '@/shared/domain/bands';
@@ -23,7 +27,7 @@ export default function StationCalibrateRoute() {
   const unit = useUnitQuery(station.data?.unitId);
   const propose = useCalibrationProposalMutation(stationId);
   const save = useSaveCalibrationMutation(stationId);
-  const [mode, setMode] = useState<'measure' | 'typed'>('measure');
+  const [mode, setMode] = useState<'measure' | 'typed' | 'reports'>('measure');
   const toBands = () => router.replace({ pathname: '/stations/[id]/bands', params: { id } });
 
   return (
@@ -63,8 +67,9 @@ export default function StationCalibrateRoute() {
                 value={mode}
                 onChange={setMode}
                 options={[
-                  { value: 'measure', label: 'Guided measurement' },
-                  { value: 'typed', label: 'Type offsets' },
+                  { value: 'measure', label: 'Measure' },
+                  { value: 'typed', label: 'Type in' },
+                  { value: 'reports', label: 'From reports' },
                 ]}
               />
               <Card>
@@ -79,6 +84,8 @@ export default function StationCalibrateRoute() {
                       toBands();
                     }}
                   />
+                ) : mode === 'reports' ? (
+                  <ReportsCalibration station={data} unit={unit.data ?? null} />
                 ) : (
                   <TypedOffsetsForm region={data.region} bands={enabled} onSave={(input) => save.mutateAsync(input)} />
                 )}
