@@ -1,38 +1,13 @@
 import assert from 'node:assert/strict';
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { after, before, describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
-import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, visibleText, type RunningServer } from './harness';
+import { BASE_URL, VIEWPORTS, failureScreenshot, look, openBrowser, signIn, startServer, visibleText, type RunningServer } from './harness';
 
 let server: RunningServer;
 before(async () => {
   server = await startServer();
 });
 after(() => server.stop());
-
-const AXE = readFileSync(path.resolve(__dirname, '../../node_modules/axe-core/axe.min.js'), 'utf8');
-
-/** axe-core's critical and serious findings on the page as it is now (evaluated over DevTools, so the CSP does not apply). */
-async function axeFindings(page: Page) {
-  await page.evaluate(AXE);
-  return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> } }).axe;
-    const result = await axe.run();
-    return result.violations
-      .filter((v) => v.impact === 'critical' || v.impact === 'serious')
-      .map((v) => ({
-        id: v.id,
-        targets: v.nodes.map((n) => (n as { target: string[] }).target),
-      }))
-      .map((v) => `${v.id}: ${JSON.stringify(v.targets)}`);
-  });
-}
-
-async function look(page: Page, name: string) {
-  await screenshot(page, name);
-  assert.deepEqual(await axeFindings(page), [], `axe findings on ${name}`);
-}
 
 /** The newest link of this kind in a mail to `to`, from the local test inbox. */
 async function mailedLink(to: string, route: string): Promise<string> {
@@ -138,7 +113,7 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, 'Wrong e-mail or password').waitFor();
         assert.deepEqual(browser.errors, []);
       } catch (failure) {
-        await screenshot(page, `account-failed-${v}`);
+        await failureScreenshot(page, `account-failed-${v}`);
         throw failure;
       } finally {
         await browser.close();

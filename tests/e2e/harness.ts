@@ -1,5 +1,6 @@
+import assert from 'node:assert/strict';
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -106,10 +107,38 @@ export async function signIn(page: Page, email: string, password = 'faintline-de
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
+/** A PNG when E2E_SCREENSHOTS is set. */
 export async function screenshot(page: Page, name: string) {
+  await failureScreenshot(page, name);
+}
+
+/** A PNG and axe-core over the whole page, failing on any critical or serious finding (no rule set aside). */
+export async function look(page: Page, name: string) {
+  await failureScreenshot(page, name);
+  assert.deepEqual(await axeFindings(page), [], `axe-core findings on ${name}`);
+}
+
+/** A PNG only, for a test's failure path (a check here would hide the failure being recorded). */
+export async function failureScreenshot(page: Page, name: string) {
   if (process.env.E2E_SCREENSHOTS) {
     await page.screenshot({ path: path.join(ROOT, 'screenshots', `${name}.png`), fullPage: false });
   }
+}
+
+let axeSource: string | undefined;
+
+/** axe-core's critical and serious findings on the page as it is now (evaluated over DevTools, so the CSP does not apply). */
+export async function axeFindings(page: Page): Promise<string[]> {
+  axeSource ??= readFileSync(path.join(ROOT, 'node_modules/axe-core/axe.min.js'), 'utf8');
+  await page.evaluate(axeSource);
+  return page.evaluate(async () => {
+    type Violation = { id: string; impact: string; nodes: { target: string[] }[] };
+    const axe = (window as unknown as { axe: { run(): Promise<{ violations: Violation[] }> } }).axe;
+    const result = await axe.run();
+    return result.violations
+      .filter((v) => v.impact === 'critical' || v.impact === 'serious')
+      .map((v) => `${v.id}: ${JSON.stringify(v.nodes.map((n) => n.target))}`);
+  });
 }
 
 /** The first visible element with this text (screens lower in the stack stay in the DOM, hidden). */
