@@ -8,6 +8,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function NoticesRoute() {
   const notices = useNoticesQuery();
@@ -35,9 +36,7 @@ export default function NoticesRoute() {
   const unread = unreadCount(notices.data);
   return (
     <Screen>
-      <Text variant="title" accessibilityRole="header">
-        Notices
-      </Text>
+      <ScreenTitle>Notices</ScreenTitle>
       <Text tone="muted">{unread ? `${unread} unread.` : 'You have read everything.'}</Text>
       <View style={styles.links}>
         <TextLink href="/proposals" label="Offset proposals" />

@@ -23,6 +23,7 @@ import { bandChoices } from './band-choices';
 import { PresetPicker, type PresetOption } from './preset-picker';
 import { previewDraft, type SchedulePreview } from './preview-model';
 import { StepCard } from './step-card';
+import { Heading } from '../ui/heading';
 
 export type ScheduleEditorProps = {
   station: Station;
@@ -137,9 +138,7 @@ export function ScheduleEditor({
         <FormTextField control={form.control} name="name" label="Schedule name" hint="Your own name for this rotation." />
       </Card>
       <View style={styles.sectionHead}>
-        <Text variant="heading" accessibilityRole="header">
-          Rotation
-        </Text>
+        <Heading level={2}>Rotation</Heading>
         <Text variant="caption" tone="muted">
           The steps run in turn, top to bottom, then round again; a step outside its hours passes its turn on.
         </Text>
@@ -181,9 +180,7 @@ export function ScheduleEditor({
       ) : null}
       <CadenceFields form={form} />
       <Card>
-        <Text variant="heading" accessibilityRole="header">
-          Stagger
-        </Text>
+        <Heading level={2}>Stagger</Heading>
         <Text variant="caption" tone="muted">
           Moves the audio offset from one transmission to the next, so two stations on the same offset do not meet every time.
         </Text>
@@ -253,9 +250,7 @@ function CadenceFields({ form }: { form: FormApi }) {
   const value = cadence.field.value;
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        How often
-      </Text>
+      <Heading level={2}>How often</Heading>
       <ChoiceChips<ScheduleValues['cadence']['kind']>
         label="Cadence"
         showLabel={false}
@@ -304,9 +299,7 @@ function DateFields({ form }: { form: FormApi }) {
   const end = useController({ control: form.control, name: 'endDate' });
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        Dates (UTC)
-      </Text>
+      <Heading level={2}>Dates (UTC)</Heading>
       <View style={styles.fields}>
         <TextField
           label="Start date (UTC)"

@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { formatLocator, formatUtcDateTime } from '../ui/format';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { List, ListItem } from '../ui/list';
 
 export type StationListProps = {
   stations: Station[];
@@ -33,10 +34,6 @@ export function StationList({ stations, layout, showOwner = false, hrefFor = own
   );
 }
 
-function openLabel(station: Station) {
-  return `Open station ${station.name}, ${station.callsign}`;
-}
-
 export type StationCardProps = { station: Station; href: Href; showOwner?: boolean };
 
 export function StationCard({ station, href, showOwner = false }: StationCardProps) {
@@ -45,7 +42,6 @@ export function StationCard({ station, href, showOwner = false }: StationCardPro
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(station)}
         // Link's asChild spreads the child's style into an object: pass one flat object
         style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
       >
@@ -87,7 +83,7 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
     { key: 'updated', label: 'Updated (UTC)', style: styles.colUpdated },
   ];
   return (
-    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
+    <List style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
         {header.map((column) => (
           <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
@@ -96,9 +92,11 @@ function StationTable({ stations, showOwner, hrefFor }: StationTableProps) {
         ))}
       </View>
       {stations.map((station, index) => (
-        <StationRow key={station.id} station={station} href={hrefFor(station)} showOwner={showOwner} last={index === stations.length - 1} />
+        <ListItem key={station.id}>
+          <StationRow station={station} href={hrefFor(station)} showOwner={showOwner} last={index === stations.length - 1} />
+        </ListItem>
       ))}
-    </View>
+    </List>
   );
 }
 
@@ -111,7 +109,6 @@ function StationRow({ station, href, showOwner, last }: StationRowProps) {
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(station)}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
         // Link's asChild spreads the child's style into an object: pass one flat object

@@ -8,11 +8,11 @@ import { Text } from '../ui/text';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandName, filterBands, generatorSummary } from './unit-summary';
+import { List, ListItem } from '../ui/list';
 
 export type UnitListProps = { units: Unit[]; layout: 'cards' | 'table' };
 
 const detail = (unit: Unit): Href => ({ pathname: '/units/[id]', params: { id: String(unit.id) } });
-const openLabel = (unit: Unit) => `Open unit ${unit.name}`;
 
 /** The beacon hardware register: cards on phones, columns on wide screens. */
 export function UnitList({ units, layout }: UnitListProps) {
@@ -76,7 +76,6 @@ function UnitCard({ unit }: { unit: Unit }) {
     <Link href={detail(unit)} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(unit)}
         style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
       >
         <Thumb unit={unit} size={64} />
@@ -111,7 +110,7 @@ function UnitTable({ units }: { units: Unit[] }) {
     { key: 'bands', label: 'Filter bands', style: styles.colBands },
   ];
   return (
-    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
+    <List style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
         {head.map((column) => (
           <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
@@ -120,9 +119,11 @@ function UnitTable({ units }: { units: Unit[] }) {
         ))}
       </View>
       {units.map((unit, index) => (
-        <UnitRow key={unit.id} unit={unit} last={index === units.length - 1} />
+        <ListItem key={unit.id}>
+          <UnitRow unit={unit} last={index === units.length - 1} />
+        </ListItem>
       ))}
-    </View>
+    </List>
   );
 }
 
@@ -133,7 +134,6 @@ function UnitRow({ unit, last }: { unit: Unit; last: boolean }) {
     <Link href={detail(unit)} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(unit)}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
         style={StyleSheet.flatten([

@@ -13,6 +13,7 @@ import { useAppTheme } from '../ui/theme-provider';
 import { formatMHz, formatSigned } from '../ui/format';
 import { Switch } from '../ui/switch';
 import { WindowGauge } from './window-gauge';
+import { Heading } from '../ui/heading';
 
 export type BandListProps = {
   station: Station;
@@ -108,9 +109,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
       })}
       {closed.length ? (
         <Card style={styles.card}>
-          <Text variant="heading" accessibilityRole="header">
-            {unit ? 'Bands no filter covers' : 'Bands'}
-          </Text>
+          <Heading level={2}>{unit ? 'Bands no filter covers' : 'Bands'}</Heading>
           {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
           {closed.map(({ band, blocked }) => (
             <View key={band.id} style={[styles.closedRow, { borderColor: colors.border }]}>

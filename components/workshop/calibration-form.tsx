@@ -20,6 +20,7 @@ import { NumberField } from '../form/number-field';
 import { parseNumberText } from '../form/number-text';
 import { formatHz, formatSigned } from '../ui/format';
 import type { CalibrationProposal } from './queries';
+import { Heading } from '../ui/heading';
 
 /** The shared measurement schema, with the words for a frequency left empty. */
 const measurementFields = measurementInput.extend({
@@ -150,9 +151,7 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
 
       {proposal ? (
         <View style={[styles.proposal, { borderColor: colors.primary, backgroundColor: colors.primarySoft }]}>
-          <Text variant="heading" accessibilityRole="header">
-            Proposed offsets
-          </Text>
+          <Heading level={2}>Proposed offsets</Heading>
           <Text>
             Reference error{' '}
             <Text variant="mono" tone="primary">

@@ -107,15 +107,31 @@ export async function signIn(page: Page, email: string, password = 'faintline-de
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** A PNG when E2E_SCREENSHOTS is set. */
+/**
+ * The step every test takes on each screen it visits, at each size: a PNG when E2E_SCREENSHOTS is set, the screen's
+ * structure (one level-1 heading, a document title naming the screen and the product), then axe-core over the whole
+ * page, failing on any critical or serious finding (no rule set aside).
+ */
 export async function screenshot(page: Page, name: string) {
   await failureScreenshot(page, name);
+  const structure = await screenStructure(page);
+  assert.ok(structure.fine, `${name} needs one level-1 heading and a title ending "· Faintline": ${JSON.stringify(structure)}`);
+  assert.deepEqual(await axeFindings(page), [], `axe-core findings on ${name}`);
 }
 
-/** A PNG and axe-core over the whole page, failing on any critical or serious finding (no rule set aside). */
-export async function look(page: Page, name: string) {
-  await failureScreenshot(page, name);
-  assert.deepEqual(await axeFindings(page), [], `axe-core findings on ${name}`);
+/** Visible level-1 headings and the tab title (titles settle just after a render, so it looks again for up to 2 s). */
+async function screenStructure(page: Page) {
+  const read = async () => ({
+    h1: await page.locator('h1, [role="heading"][aria-level="1"]').locator('visible=true').allInnerTexts(),
+    title: await page.title(),
+  });
+  const fine = (found: { h1: string[]; title: string }) => found.h1.length === 1 && / · Faintline$/.test(found.title);
+  let found = await read();
+  for (let tries = 0; tries < 20 && !fine(found); tries++) {
+    await page.waitForTimeout(100);
+    found = await read();
+  }
+  return { ...found, fine: fine(found) };
 }
 
 /** A PNG only, for a test's failure path (a check here would hide the failure being recorded). */
