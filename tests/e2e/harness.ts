@@ -109,13 +109,16 @@ export async function signIn(page: Page, email: string, password = 'faintline-de
 
 /**
  * The step every test takes on each screen it visits, at each size: a PNG when E2E_SCREENSHOTS is set, the screen's
- * structure (one level-1 heading, a document title naming the screen and the product), then axe-core over the whole
+ * structure (one level-1 heading, one main landmark, a document title naming the screen and the product), then axe-core over the whole
  * page, failing on any critical or serious finding (no rule set aside).
  */
 export async function screenshot(page: Page, name: string) {
   await failureScreenshot(page, name);
   const structure = await screenStructure(page);
-  assert.ok(structure.fine, `${name} needs one level-1 heading and a title ending "· Faintline": ${JSON.stringify(structure)}`);
+  assert.ok(
+    structure.fine,
+    `${name} needs one level-1 heading, one main landmark and a title ending "· Faintline": ${JSON.stringify(structure)}`,
+  );
   assert.deepEqual(await axeFindings(page), [], `axe-core findings on ${name}`);
 }
 
@@ -123,9 +126,11 @@ export async function screenshot(page: Page, name: string) {
 async function screenStructure(page: Page) {
   const read = async () => ({
     h1: await page.locator('h1, [role="heading"][aria-level="1"]').locator('visible=true').allInnerTexts(),
+    main: await page.locator('main, [role="main"]').locator('visible=true').count(),
     title: await page.title(),
   });
-  const fine = (found: { h1: string[]; title: string }) => found.h1.length === 1 && / · Faintline$/.test(found.title);
+  const fine = (found: { h1: string[]; main: number; title: string }) =>
+    found.h1.length === 1 && found.main === 1 && / · Faintline$/.test(found.title);
   let found = await read();
   for (let tries = 0; tries < 20 && !fine(found); tries++) {
     await page.waitForTimeout(100);
