@@ -7,6 +7,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { layout, space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function NotFoundRoute() {
   return (
@@ -14,9 +15,7 @@ export default function NotFoundRoute() {
       <Stack.Screen options={{ title: 'Page not found · Faintline' }} />
       <Card style={styles.card}>
         <FaintlineMark size={48} />
-        <Text variant="title" accessibilityRole="header">
-          Nothing on this frequency
-        </Text>
+        <ScreenTitle>Nothing on this frequency</ScreenTitle>
         <Text tone="muted">The page you asked for does not exist, or it has moved.</Text>
         <View style={styles.link}>
           <TextLink href="/" label="Go to the overview" />

@@ -10,12 +10,18 @@ import { Stack, ThemeProvider } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useState } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { enableScreens } from 'react-native-screens';
 
 import { useSessionQuery } from '@/components/auth/queries';
 import { createQueryClient } from '@/components/query/query-client';
 import { BootScreen } from '@/components/shell/boot-screen';
 import { navigationTheme } from '@/components/ui/navigation-theme';
+import { useDocumentTitle } from '@/components/ui/use-document-title';
 import { AppThemeProvider, useAppTheme } from '@/components/ui/theme-provider';
+
+// In the browser a tab left behind is hidden (display: none) instead of lying under the open one, where screen
+// readers, Tab and axe-core still found its headings and controls.
+if (Platform.OS === 'web') enableScreens(true);
 
 export { CrashScreen as ErrorBoundary } from '@/components/shell/crash-screen';
 
@@ -56,6 +62,7 @@ function ThemedRoot({ fontsReady }: { fontsReady: boolean }) {
 /** Auth is decided here, once: signed-out people see (auth), signed-in people see (tabs). */
 function RootStack({ fontsReady }: { fontsReady: boolean }) {
   const session = useSessionQuery();
+  useDocumentTitle();
   if (session.isError) return <BootScreen error={session.error} onRetry={() => session.refetch()} />;
   if (!fontsReady || session.isPending) return <BootScreen />;
   const user = session.data;

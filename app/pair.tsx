@@ -22,6 +22,7 @@ import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { layout, space } from '@/components/ui/theme';
 import { formatUserCode, isUserCode, type PairingDecision } from '@/shared/schemas';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 const TITLE = 'Pair a device · Faintline';
 
@@ -140,9 +141,7 @@ function SignedInPairing({ initialCode }: { initialCode: string }) {
       <Stack.Screen options={{ title: TITLE }} />
       <View style={styles.head}>
         <Wordmark />
-        <Text variant="title" accessibilityRole="header" style={styles.title}>
-          Pair a device
-        </Text>
+        <ScreenTitle style={styles.title}>Pair a device</ScreenTitle>
         <TextLink href="/stations" label="Back to your stations" />
       </View>
       {body}

@@ -2,7 +2,7 @@ import { AuditIntro, AuditList } from '@/components/audit/audit-list';
 import { auditCsvPath, useMyAuditQuery } from '@/components/audit/queries';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
-import { Text } from '@/components/ui/text';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function ActivityRoute() {
   const log = useMyAuditQuery();
@@ -14,9 +14,7 @@ export default function ActivityRoute() {
   else body = <AuditList entries={log.data} />;
   return (
     <Screen>
-      <Text variant="title" accessibilityRole="header">
-        Your activity log
-      </Text>
+      <ScreenTitle>Your activity log</ScreenTitle>
       <AuditIntro
         text="Every change to your stations and equipment, by you or by a club admin, with the time in UTC."
         csvHref={auditCsvPath.mine()}

@@ -14,6 +14,8 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
 import { Screen } from '@/components/ui/screen';
+import { Heading } from '@/components/ui/heading';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function OverviewRoute() {
   const router = useRouter();
@@ -24,9 +26,7 @@ export default function OverviewRoute() {
     <Screen>
       <Stack.Screen options={{ title: 'Overview · Faintline' }} />
       <View style={styles.greeting}>
-        <Text variant="title" accessibilityRole="header">
-          Hello, {user?.displayName ?? 'operator'}
-        </Text>
+        <ScreenTitle>{`Hello, ${user?.displayName ?? 'operator'}`}</ScreenTitle>
         {user?.callsign ? (
           <Text variant="monoLarge" tone="primary">
             {user.callsign}
@@ -57,9 +57,7 @@ export default function OverviewRoute() {
       </View>
       {stations.data?.length ? (
         <>
-          <Text variant="heading" accessibilityRole="header">
-            Your stations at a glance
-          </Text>
+          <Heading level={2}>Your stations at a glance</Heading>
           {glances.isError ? <Text tone="muted">Reception figures are not available right now.</Text> : null}
           <StationGlance stations={stations.data} glances={glances.data ?? []} />
         </>

@@ -15,6 +15,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function NoticesRoute() {
   const notices = useNoticesQuery();
@@ -43,9 +44,7 @@ export default function NoticesRoute() {
   const unread = unreadCount(notices.data);
   return (
     <Screen>
-      <Text variant="title" accessibilityRole="header">
-        Notices
-      </Text>
+      <ScreenTitle>Notices</ScreenTitle>
       <View style={styles.unread}>
         <Text tone="muted">{unread ? `${unread} unread.` : 'You have read everything.'}</Text>
         {unread ? <Button label="Mark all read" variant="secondary" busy={markAll.isPending} onPress={() => markAll.mutate()} /> : null}

@@ -6,6 +6,7 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-stat
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import type { OffsetProposal } from '@/shared/schemas';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function ProposalsRoute() {
   const proposals = useMyProposalsQuery();
@@ -37,9 +38,7 @@ export default function ProposalsRoute() {
   else body = <ProposalList proposals={proposals.data} busy={busy} error={error} onDecide={onDecide} />;
   return (
     <Screen>
-      <Text variant="title" accessibilityRole="header">
-        Offset proposals
-      </Text>
+      <ScreenTitle>Offset proposals</ScreenTitle>
       <Text tone="muted">
         A new audio offset keeps your station clear of another club station in the same slots. Accepting changes the station’s offset
         straight away; declining leaves it as it is.

@@ -18,6 +18,7 @@ import { Text } from '@/components/ui/text';
 import type { ThemePreference } from '@/components/ui/theme';
 import { space } from '@/components/ui/theme';
 import { useAppTheme } from '@/components/ui/theme-provider';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 const themeOptions: { value: ThemePreference; label: string }[] = [
   { value: 'system', label: 'System' },
@@ -56,9 +57,7 @@ export default function SettingsRoute() {
         </>
       }
     >
-      <Text variant="title" accessibilityRole="header">
-        Settings
-      </Text>
+      <ScreenTitle>Settings</ScreenTitle>
       <Card>
         <Text variant="heading">Account</Text>
         <Row label="Clubs" value={user?.clubs.length ? user.clubs.map((club) => club.clubName).join(', ') : 'None'} />

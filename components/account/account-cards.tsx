@@ -3,7 +3,7 @@ import type { AccountDeleteInput } from '@/shared/schemas';
 
 import { ErrorState, LoadingState } from '../ui/query-states';
 import { Card } from '../ui/card';
-import { Text } from '../ui/text';
+import { Heading } from '../ui/heading';
 import { DeleteAccountForm } from './delete-account-form';
 import { EmailChangeForm } from './email-change-form';
 import { PasswordForm } from './password-form';
@@ -15,12 +15,6 @@ import {
   useRequestEmailChangeMutation,
 } from './queries';
 
-const Heading = ({ children }: { children: string }) => (
-  <Text variant="heading" role="heading" aria-level={2}>
-    {children}
-  </Text>
-);
-
 /** Settings: sign-in e-mail and password. */
 export function SignInCards({ user }: { user: SessionUser }) {
   const pending = usePendingEmailChangeQuery();
@@ -30,7 +24,7 @@ export function SignInCards({ user }: { user: SessionUser }) {
   return (
     <>
       <Card>
-        <Heading>Sign-in e-mail</Heading>
+        <Heading level={2}>Sign-in e-mail</Heading>
         <EmailChangeForm
           currentEmail={user.email}
           pending={pending.data}
@@ -41,7 +35,7 @@ export function SignInCards({ user }: { user: SessionUser }) {
         />
       </Card>
       <Card>
-        <Heading>Password</Heading>
+        <Heading level={2}>Password</Heading>
         <PasswordForm onSubmit={changePassword.mutateAsync} />
       </Card>
     </>
@@ -53,7 +47,7 @@ export function DeleteAccountCard({ onAsk }: { onAsk: (values: AccountDeleteInpu
   const preview = useDeletionPreviewQuery();
   return (
     <Card>
-      <Heading>Delete account</Heading>
+      <Heading level={2}>Delete account</Heading>
       {preview.isPending ? (
         <LoadingState label="Finding what goes with your account…" />
       ) : preview.isError ? (

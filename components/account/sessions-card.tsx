@@ -5,6 +5,7 @@ import { Card } from '../ui/card';
 import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 export type SessionsCardProps = {
   onSignOut: () => void;
@@ -19,9 +20,7 @@ export type SessionsCardProps = {
 export function SessionsCard({ onSignOut, signingOut, signOutError, onEndOthers, endedMessage }: SessionsCardProps) {
   return (
     <Card>
-      <Text variant="heading" role="heading" aria-level={2}>
-        Sessions
-      </Text>
+      <Heading level={2}>Sessions</Heading>
       <Text tone="muted">Signed in on a shared or lost computer or phone? Sign out everywhere else; this browser stays signed in.</Text>
       {signOutError ? <Notice message={signOutError} /> : null}
       {endedMessage ? <Notice tone="success" message={endedMessage} /> : null}

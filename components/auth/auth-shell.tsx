@@ -6,6 +6,7 @@ import { Card } from '../ui/card';
 import { Screen } from '../ui/screen';
 import { Text } from '../ui/text';
 import { layout, space } from '../ui/theme';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type AuthShellProps = { title: string; intro?: string; children: ReactNode; footer?: ReactNode };
 
@@ -18,9 +19,7 @@ export function AuthShell({ title, intro, children, footer }: AuthShellProps) {
         <Text tone="muted">Plan, tune and look after your low-power WSPR beacons.</Text>
       </View>
       <Card style={styles.card}>
-        <Text variant="title" accessibilityRole="header">
-          {title}
-        </Text>
+        <ScreenTitle>{title}</ScreenTitle>
         {intro ? <Text tone="muted">{intro}</Text> : null}
         <View style={styles.body}>{children}</View>
       </Card>

@@ -40,7 +40,7 @@ export type WordmarkProps = { size?: 'small' | 'large' };
 export function Wordmark({ size = 'small' }: WordmarkProps) {
   const large = size === 'large';
   return (
-    <View style={styles.row} accessibilityRole="header" accessibilityLabel="Faintline">
+    <View style={styles.row} role="img" aria-label="Faintline">
       <FaintlineMark size={large ? 44 : 28} />
       <Text variant={large ? 'display' : 'heading'} style={large ? undefined : styles.smallName}>
         Faintline

@@ -66,7 +66,6 @@ function ClubRow({ club }: { club: ClubMembership }) {
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={`Open ${club.clubName}`}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
         // Link's asChild spreads the child's style into an object: pass one flat object

@@ -13,6 +13,7 @@ import { ClubForm } from './club-form';
 import { InvitationList } from './invitation-list';
 import { InviteForm, type InviteInput } from './invite-form';
 import { MemberList } from './member-list';
+import { Heading } from '../ui/heading';
 
 export type ClubMembersViewProps = {
   club: ClubDetail;
@@ -58,9 +59,7 @@ export function ClubMembersView({
       />
       {isAdmin ? (
         <Card style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Invite a member
-          </Text>
+          <Heading level={2}>Invite a member</Heading>
           <InviteForm onSubmit={onInvite} />
           <Text variant="label" tone="muted" style={styles.pendingTitle}>
             Waiting for an answer
@@ -76,9 +75,7 @@ export function ClubMembersView({
       ) : null}
       {isAdmin ? (
         <Card style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Club settings
-          </Text>
+          <Heading level={2}>Club settings</Heading>
           <ClubForm
             initialValues={{ name: club.name, maxPowerDbm: club.maxPowerDbm }}
             submitLabel="Save club settings"
@@ -87,15 +84,19 @@ export function ClubMembersView({
         </Card>
       ) : null}
       <Card style={styles.section}>
-        <Text variant="heading" accessibilityRole="header">
-          Leave the club
-        </Text>
+        <Heading level={2}>Leave the club</Heading>
         <Text tone="muted">
           {lastAdmin
             ? 'You are the only admin. A club always keeps one: make another member an admin before you leave.'
             : 'Your stations leave the club’s review and plan. You need a new invitation to come back.'}
         </Text>
-        <Button label="Leave club" variant="secondary" accessibilityLabel={`Leave ${club.name}`} onPress={onLeave} style={styles.leave} />
+        <Button
+          label="Leave club"
+          variant="secondary"
+          accessibilityLabel={`Leave club ${club.name}`}
+          onPress={onLeave}
+          style={styles.leave}
+        />
       </Card>
     </View>
   );

@@ -4,6 +4,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type ClubSection = 'members' | 'review' | 'conflicts' | 'occupancy' | 'reach' | 'log';
 
@@ -42,9 +43,7 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
   const shown = sections.filter((section) => isAdmin || !section.adminOnly);
   return (
     <View style={styles.wrap}>
-      <Text variant="title" accessibilityRole="header">
-        {clubName}
-      </Text>
+      <ScreenTitle>{clubName}</ScreenTitle>
       {shown.length > 1 ? (
         <View style={styles.row}>
           {shown.map((section) => {
@@ -54,7 +53,7 @@ export function ClubNav({ clubId, clubName, current, isAdmin }: ClubNavProps) {
                 <Pressable
                   accessibilityRole="link"
                   accessibilityLabel={`${section.label} of ${clubName}`}
-                  accessibilityState={{ selected }}
+                  aria-current={selected ? 'page' : undefined}
                   // Link's asChild spreads the child's style into an object: pass one flat object
                   style={StyleSheet.flatten([
                     styles.item,

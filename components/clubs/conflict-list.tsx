@@ -10,6 +10,7 @@ import { space } from '../ui/theme';
 import { formatOffsetHz } from '../ui/format';
 import { bandLabel } from './club-words';
 import type { ClubConflicts, ConflictProposal } from './queries';
+import { Heading } from '../ui/heading';
 
 export type ProposalSendState = { status: 'sending' | 'sent' } | { status: 'failed'; message: string };
 
@@ -33,9 +34,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
   return (
     <View style={styles.wrap}>
       <View style={styles.section}>
-        <Text variant="heading" accessibilityRole="header">
-          Colliding pairs
-        </Text>
+        <Heading level={2}>Colliding pairs</Heading>
         {data.conflicts.map((conflict) => (
           <Card key={`${conflict.a}-${conflict.b}-${conflict.bandId}`} style={styles.card}>
             <View style={styles.pairRow}>
@@ -66,9 +65,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
         ))}
       </View>
       <View style={styles.section}>
-        <Text variant="heading" accessibilityRole="header">
-          Offsets that would part them
-        </Text>
+        <Heading level={2}>Offsets that would part them</Heading>
         <Text tone="muted">Each owner gets a proposal by e-mail and in their notices. Nothing changes until they accept it.</Text>
         {data.proposals.length === 0 ? (
           <Text tone="muted">No new offset helps here: there are more stations than the 200 Hz window can hold apart.</Text>
@@ -98,7 +95,7 @@ export function ConflictList({ data, sendState, onPropose }: ConflictListProps) 
               ) : (
                 <View style={styles.actions}>
                   <Button
-                    label="Propose to owner"
+                    label="Propose"
                     accessibilityLabel={`Propose ${formatOffsetHz(proposal.proposedOffsetHz)} to the owner of ${proposal.stationName}`}
                     busy={state?.status === 'sending'}
                     onPress={() => onPropose(proposal)}

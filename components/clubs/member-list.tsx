@@ -50,9 +50,7 @@ export function MemberList({ members, myUserId, canManage, busyUserId, onSetRole
                 <Button
                   label={member.role === 'admin' ? 'Make member' : 'Make admin'}
                   variant="secondary"
-                  accessibilityLabel={
-                    member.role === 'admin' ? `Make ${member.displayName} a member` : `Make ${member.displayName} an admin`
-                  }
+                  accessibilityLabel={`${member.role === 'admin' ? 'Make member' : 'Make admin'}: ${member.displayName}`}
                   busy={busyUserId === member.userId}
                   onPress={() => onSetRole(member, member.role === 'admin' ? 'member' : 'admin')}
                   style={styles.smallButton}

@@ -7,6 +7,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { formatOffsetHz, formatUtcDateTime } from '../ui/format';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 export type ProposalListProps = {
   proposals: OffsetProposal[];
@@ -64,9 +65,7 @@ export function ProposalList({ proposals, busy, error, onDecide }: ProposalListP
       ))}
       {decided.length ? (
         <View style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Decided
-          </Text>
+          <Heading level={2}>Decided</Heading>
           {decided.map((proposal) => (
             <Card key={proposal.id} style={styles.card}>
               <Text variant="label">{proposal.stationName}</Text>

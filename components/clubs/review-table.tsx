@@ -13,6 +13,7 @@ import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandLabel, statusRank, statusWords, verdictSentence, type ReviewStatus } from './club-words';
 import { FilterChips } from './filter-chips';
+import { List, ListItem } from '../ui/list';
 
 export type ReviewTableProps = {
   rows: ReviewRow[];
@@ -222,7 +223,7 @@ function ReviewCard({ row, href, onSuspend, onLift }: Omit<RowActionsProps, 'hre
 function ReviewColumns({ rows, stationHref, onSuspend, onLift }: Omit<ReviewTableProps, 'layout'>) {
   const { colors } = useAppTheme();
   return (
-    <View style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]} accessibilityRole="list">
+    <List style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.tr, styles.thead, { borderColor: colors.border }]}>
         {['Station', 'Member', 'Bands', 'Verdict', ''].map((title, index) => (
           <Text key={index} variant="caption" tone="muted" style={columnStyles[index]}>
@@ -231,11 +232,7 @@ function ReviewColumns({ rows, stationHref, onSuspend, onLift }: Omit<ReviewTabl
         ))}
       </View>
       {rows.map((row, index) => (
-        <View
-          key={row.stationId}
-          accessibilityRole="none"
-          style={[styles.tr, { borderColor: colors.border }, index === rows.length - 1 && styles.lastRow]}
-        >
+        <ListItem key={row.stationId} style={[styles.tr, { borderColor: colors.border }, index === rows.length - 1 && styles.lastRow]}>
           <View style={columnStyles[0]}>
             <Text variant="label">{row.stationName}</Text>
             <Text variant="mono" tone="muted" style={styles.small}>
@@ -254,9 +251,9 @@ function ReviewColumns({ rows, stationHref, onSuspend, onLift }: Omit<ReviewTabl
           <View style={columnStyles[4]}>
             <RowActions row={row} href={stationHref(row)} onSuspend={onSuspend} onLift={onLift} />
           </View>
-        </View>
+        </ListItem>
       ))}
-    </View>
+    </List>
   );
 }
 

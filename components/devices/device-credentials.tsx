@@ -9,6 +9,8 @@ import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { curlExamples, deviceApiBase } from './device-howto';
+import { Heading } from '../ui/heading';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type DeviceCredentialsProps = {
   stationName: string;
@@ -45,9 +47,7 @@ function FreshToken({ token, onHide }: { token: string; onHide: () => void }) {
   const [copied, setCopied] = useState<'yes' | 'no' | null>(null);
   return (
     <Card tone="signal">
-      <Text variant="heading" accessibilityRole="header">
-        Your new device token
-      </Text>
+      <Heading level={2}>Your new device token</Heading>
       <Text>Copy it into the device now. You will not see it again: Faintline keeps only a fingerprint of it.</Text>
       <View style={[styles.tokenBox, { backgroundColor: colors.surfaceRaised, borderColor: colors.signal }]}>
         <Text variant="mono" selectable accessibilityLabel="Device token" style={styles.token}>
@@ -57,7 +57,6 @@ function FreshToken({ token, onHide }: { token: string; onHide: () => void }) {
       <View style={styles.actions}>
         <Button
           label={copied === 'yes' ? 'Copied' : 'Copy token'}
-          accessibilityLabel="Copy token"
           onPress={async () => setCopied((await copyText(token)) ? 'yes' : 'no')}
         />
         <Button label="I have stored it" variant="ghost" onPress={onHide} />
@@ -87,9 +86,7 @@ export function DeviceCredentials({
   return (
     <>
       <View style={styles.titleBlock}>
-        <Text variant="title" accessibilityRole="header">
-          Device token
-        </Text>
+        <ScreenTitle>Device token</ScreenTitle>
         <Text tone="muted">
           The beacon at “{stationName}” signs every request with this token. One token per station; replacing it cuts the old one off at
           once.
@@ -117,21 +114,19 @@ export function DeviceCredentials({
             <View style={styles.actions}>
               <Button
                 label="Replace token"
-                accessibilityLabel="Rotate the device token"
+                accessibilityLabel="Replace token of the device"
                 variant="secondary"
                 busy={issuing}
                 onPress={onRotate}
               />
-              <Button label="Revoke token" accessibilityLabel="Revoke the device token" variant="danger" onPress={onRevoke} />
+              <Button label="Revoke token" accessibilityLabel="Revoke token of the device" variant="danger" onPress={onRevoke} />
             </View>
           )}
         </Card>
       ) : null}
 
       <View style={styles.section}>
-        <Text variant="heading" accessibilityRole="header">
-          How a device talks to Faintline
-        </Text>
+        <Heading level={2}>How a device talks to Faintline</Heading>
         <Text>
           Every request carries the header <Text variant="mono">Authorization: Bearer &lt;token&gt;</Text>. The configuration, with the plan
           of transmissions, is at:

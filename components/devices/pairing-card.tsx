@@ -5,6 +5,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { Button } from '../ui/button';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 // the QR encoder stays out of the start-up bundle: it loads when the example is asked for
 const QrCode = lazy(() => import('./qr-code'));
@@ -19,9 +20,7 @@ export function PairingCard({ origin, onPair }: PairingCardProps) {
   const [showQr, setShowQr] = useState(false);
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        Pair a device by code
-      </Text>
+      <Heading level={2}>Pair a device by code</Heading>
       <Text>
         A device that supports pairing shows (or prints on its serial console) a code of 8 letters. Type it on the pairing page and choose
         this station: the device receives its token by itself. It replaces any token the station has now.

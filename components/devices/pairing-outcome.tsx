@@ -7,6 +7,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 export type PairingOutcomeProps = { decision: PairingDecision; onAnother: () => void };
 
@@ -15,9 +16,7 @@ export function PairingOutcome({ decision, onAnother }: PairingOutcomeProps) {
   if (decision.status === 'refused') {
     return (
       <Card>
-        <Text variant="heading" accessibilityRole="header">
-          Device refused
-        </Text>
+        <Heading level={2}>Device refused</Heading>
         <Text>The device is told so at its next poll and receives nothing. Its code cannot be used again.</Text>
         <Button label="Pair another device" variant="secondary" onPress={onAnother} style={styles.button} />
       </Card>
@@ -26,9 +25,7 @@ export function PairingOutcome({ decision, onAnother }: PairingOutcomeProps) {
   const id = String(decision.target.id);
   return (
     <Card tone="primary">
-      <Text variant="heading" accessibilityRole="header">
-        Paired with {decision.target.name}
-      </Text>
+      <Heading level={2}>Paired with {decision.target.name}</Heading>
       <Text>
         The device receives its token at its next poll (within seconds) and fetches its configuration with it. Keep it powered until it
         shows it is connected.

@@ -11,6 +11,7 @@ import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { Heading } from '../ui/heading';
 
 export type PairingReviewProps = {
   request: PairingRequestView;
@@ -39,9 +40,8 @@ function TargetChoice({ target, selected, onSelect }: { target: PairingTarget; s
   const { colors } = useAppTheme();
   return (
     <Pressable
-      accessibilityRole="radio"
-      accessibilityLabel={`${target.name} (${target.callsign})`}
-      accessibilityState={{ checked: selected }}
+      role="radio"
+      aria-checked={selected}
       onPress={onSelect}
       style={[
         styles.choice,
@@ -77,9 +77,7 @@ export function PairingReview({
   return (
     <>
       <Card tone="signal">
-        <Text variant="heading" accessibilityRole="header">
-          A device is asking to be paired
-        </Text>
+        <Heading level={2}>A device is asking to be paired</Heading>
         <View style={styles.facts}>
           <Fact label="Code" value={request.userCode} />
           <Fact label="Model" value={request.model ?? 'not given'} />
@@ -102,9 +100,7 @@ export function PairingReview({
         />
       ) : (
         <View style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Which station is it?
-          </Text>
+          <Heading level={2}>Which station is it?</Heading>
           <View accessibilityRole="radiogroup" accessibilityLabel="Station for this device" style={styles.choices}>
             {request.targets.map((target) => (
               <TargetChoice key={target.id} target={target} selected={target.id === selectedId} onSelect={() => onSelect(target.id)} />

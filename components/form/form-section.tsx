@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 export type FormSectionProps = { title: string; description?: string; children: ReactNode; action?: ReactNode };
 
@@ -13,9 +14,7 @@ export function FormSection({ title, description, children, action }: FormSectio
     <Card style={styles.card}>
       <View style={styles.head}>
         <View style={styles.words}>
-          <Text variant="heading" accessibilityRole="header">
-            {title}
-          </Text>
+          <Heading level={2}>{title}</Heading>
           {description ? <Text tone="muted">{description}</Text> : null}
         </View>
         {action}

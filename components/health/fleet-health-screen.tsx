@@ -14,6 +14,7 @@ import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { FleetHealth } from './fleet-health';
 import { fleetSummary } from './words';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type FleetHealthScreenProps = {
   title: string;
@@ -82,9 +83,7 @@ export function FleetHealthScreen({
     <Screen maxWidth={1120}>
       <View style={styles.titleRow}>
         <View style={styles.titleBlock}>
-          <Text variant="title" accessibilityRole="header">
-            {title}
-          </Text>
+          <ScreenTitle>{title}</ScreenTitle>
           <Text tone="muted">{intro}</Text>
         </View>
         {clubLink ? <Button label={clubLink.label} variant="secondary" onPress={clubLink.onPress} style={styles.clubLink} /> : null}

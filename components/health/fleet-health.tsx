@@ -64,7 +64,7 @@ function CreateToken({
   return (
     <Button
       label={short ? 'Create token' : 'Create a device token'}
-      accessibilityLabel={`Create a device token for ${health.stationName}`}
+      accessibilityLabel={`${short ? 'Create token' : 'Create a device token'} for ${health.stationName}`}
       variant="secondary"
       onPress={() => onOpenDevice(health.stationId)}
       style={styles.createButton}

@@ -26,6 +26,8 @@ import {
   recentWords,
   utcTime,
 } from './words';
+import { Heading } from '../ui/heading';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type StationHealthViewProps = {
   health: StationHealth;
@@ -46,9 +48,7 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
     <>
       <View style={styles.head}>
         <View style={styles.headTitle}>
-          <Text variant="title" accessibilityRole="header">
-            {health.stationName}
-          </Text>
+          <ScreenTitle>{health.stationName}</ScreenTitle>
           <Text variant="mono" tone="muted">
             {health.callsign}
           </Text>
@@ -82,17 +82,13 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
       )}
 
       <View style={styles.section}>
-        <Text variant="heading" accessibilityRole="header">
-          Open alerts
-        </Text>
+        <Heading level={2}>Open alerts</Heading>
         {open.length === 0 ? <Text tone="muted">No open alerts.</Text> : <AlertList alerts={open} />}
       </View>
 
       {health.hasDevice ? (
         <Card>
-          <Text variant="heading" accessibilityRole="header">
-            Last 24 hours
-          </Text>
+          <Heading level={2}>Last 24 hours</Heading>
           <View style={styles.chartBox} onLayout={(event) => setChartWidth(Math.floor(event.nativeEvent.layout.width))}>
             {chartWidth > 0 ? (
               <LazyHealthCharts series={health.series} nowMs={nowMs} width={chartWidth} clockLimitMs={health.settings.clockOffsetMs} />
@@ -103,9 +99,7 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
 
       {health.hasDevice ? (
         <View style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Transmissions
-          </Text>
+          <Heading level={2}>Transmissions</Heading>
           <Text tone="muted">{recentWords(health.recent)} (checked against the station's schedule).</Text>
           {health.recent.length > 0 ? (
             <View style={[styles.txList, { borderColor: colors.border }]}>
@@ -127,17 +121,13 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
 
       {history.length > 0 ? (
         <View style={styles.section}>
-          <Text variant="heading" accessibilityRole="header">
-            Alert history (24 h)
-          </Text>
+          <Heading level={2}>Alert history (24 h)</Heading>
           <AlertList alerts={history} />
         </View>
       ) : null}
 
       <Card>
-        <Text variant="heading" accessibilityRole="header">
-          Alert thresholds
-        </Text>
+        <Heading level={2}>Alert thresholds</Heading>
         <Text variant="caption" tone="muted">
           The server checks every station once a minute; an alert opens once, is mailed once, and closes by itself when the cause goes away.
         </Text>
@@ -147,7 +137,7 @@ export function StationHealthView({ health, nowMs, readOnly, onSaveSettings, onO
       {health.hasDevice && onOpenDevice ? (
         <Button
           label="Device token"
-          accessibilityLabel="Manage the device token"
+          accessibilityLabel="Device token: manage it"
           variant="secondary"
           onPress={onOpenDevice}
           style={styles.deviceButton}

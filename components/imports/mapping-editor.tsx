@@ -88,7 +88,7 @@ export function MappingEditor({ mapping, samples, onChange }: MappingEditorProps
                 </Text>
                 <Button
                   label={open === column.index ? 'Close' : 'Change'}
-                  accessibilityLabel={`Change what ${columnName(column)} holds`}
+                  accessibilityLabel={`${open === column.index ? 'Close' : 'Change'} what ${columnName(column)} holds`}
                   variant="ghost"
                   onPress={() => setOpen(open === column.index ? null : column.index)}
                 />

@@ -29,7 +29,7 @@ export function SavedMappings({ saved, saving, error, onUse, onSave }: SavedMapp
             <Button
               key={m.id}
               label={m.name}
-              accessibilityLabel={`Use the saved mapping ${m.name}`}
+              accessibilityLabel={`${m.name}: use this saved mapping`}
               variant="secondary"
               onPress={() => onUse(m)}
             />

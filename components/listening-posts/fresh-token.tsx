@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { receptionsCurlExample, receptionsEndpoint } from './howto';
+import { Heading } from '../ui/heading';
 
 async function copyText(text: string): Promise<boolean> {
   if (Platform.OS !== 'web' || typeof navigator === 'undefined' || !navigator.clipboard) return false;
@@ -27,9 +28,7 @@ export function FreshListeningToken({ postName, token, origin, onDone }: FreshLi
   const [copied, setCopied] = useState<'yes' | 'no' | null>(null);
   return (
     <Card tone="signal">
-      <Text variant="heading" accessibilityRole="header">
-        Token for “{postName}”
-      </Text>
+      <Heading level={2}>Token for “{postName}”</Heading>
       <Text>Put it into the receiver now. You will not see it again: Faintline keeps only a fingerprint of it.</Text>
       <View style={[styles.box, { backgroundColor: colors.surfaceRaised, borderColor: colors.signal }]}>
         <Text variant="mono" selectable accessibilityLabel="Listening post token" style={styles.breakable}>
@@ -39,7 +38,6 @@ export function FreshListeningToken({ postName, token, origin, onDone }: FreshLi
       <View style={styles.actions}>
         <Button
           label={copied === 'yes' ? 'Copied' : 'Copy token'}
-          accessibilityLabel="Copy token"
           onPress={async () => setCopied((await copyText(token)) ? 'yes' : 'no')}
         />
         <Button label="I have stored it" variant="ghost" onPress={onDone} />

@@ -42,7 +42,7 @@ export function ListeningPostList({ posts, issuingId, onIssueToken, onDelete }: 
           <View style={styles.actions}>
             <Button
               label={post.hasToken ? 'Replace token' : 'Issue a token'}
-              accessibilityLabel={`${post.hasToken ? 'Replace the token of' : 'Issue a token for'} ${post.name}`}
+              accessibilityLabel={`${post.hasToken ? 'Replace token' : 'Issue a token'} for ${post.name}`}
               variant="secondary"
               busy={issuingId === post.id}
               onPress={() => onIssueToken(post)}

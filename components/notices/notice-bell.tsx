@@ -29,7 +29,8 @@ export function NoticeBell({ unread, variant }: NoticeBellProps) {
     <Link href="/notices" asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={label}
+        // the row is named by what it shows ("Notices 2" and, for screen readers only, "unread"); the icon needs a label
+        accessibilityLabel={variant === 'icon' ? label : undefined}
         hitSlop={8}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
@@ -43,12 +44,14 @@ export function NoticeBell({ unread, variant }: NoticeBellProps) {
           </Text>
         ) : null}
         {badge}
+        {variant === 'row' && unread ? <Text style={styles.screenReaderOnly}> unread</Text> : null}
       </Pressable>
     </Link>
   );
 }
 
 const styles = StyleSheet.create({
+  screenReaderOnly: { position: 'absolute', width: 1, height: 1, overflow: 'hidden', opacity: 0 },
   icon: { width: 40, height: 40, alignItems: 'center', justifyContent: 'center', borderRadius: radius.pill },
   row: {
     flexDirection: 'row',

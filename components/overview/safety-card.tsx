@@ -4,6 +4,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { Heading } from '../ui/heading';
 
 const points = [
   'Transmit only while you hold a valid licence, and only with your own callsign.',
@@ -19,9 +20,7 @@ export function SafetyCard() {
   const { colors } = useAppTheme();
   return (
     <Card tone="signal" style={styles.card}>
-      <Text variant="heading" accessibilityRole="header">
-        Before you go on the air
-      </Text>
+      <Heading level={2}>Before you go on the air</Heading>
       <View style={styles.list}>
         {points.map((point) => (
           <View key={point} style={styles.item}>

@@ -14,6 +14,7 @@ import { fonts, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandColour, sortBands } from './colours';
 import { bandName, formatCount } from './format';
+import { Heading } from '../ui/heading';
 
 export type ReceptionChartsProps = { hourBand: HourBandCount[]; snrByDistance: Reach['snrByDistance']; width: number };
 
@@ -45,9 +46,7 @@ export function HourBandChart({ hourBand, width }: { hourBand: HourBandCount[]; 
   const summary = bands.map((band) => stripSummary(band, counts.get(band)!)).join('; ');
   return (
     <View style={styles.chart}>
-      <Text variant="heading" accessibilityRole="header">
-        When each band was heard (UTC hour)
-      </Text>
+      <Heading level={2}>When each band was heard (UTC hour)</Heading>
       <Text variant="caption" tone="muted">
         One strip per band; the deeper the colour, the more reports in that hour.
       </Text>
@@ -138,9 +137,7 @@ export function SnrDistanceChart({ points, width }: { points: Reach['snrByDistan
   for (let db = snrLow; db <= snrHigh; db += 10) dbTicks.push(db);
   return (
     <View style={styles.chart}>
-      <Text variant="heading" accessibilityRole="header">
-        SNR against distance
-      </Text>
+      <Heading level={2}>SNR against distance</Heading>
       <Text variant="caption" tone="muted">
         One dot per receiver and band, at its best SNR.
       </Text>

@@ -78,9 +78,9 @@ function TableRows({ page, wide }: { page: ReceptionPage; wide: boolean }) {
   const { colors } = useAppTheme();
   if (!wide) return page.reports.map((report) => <ReportCard key={report.id} report={report} />);
   const header = (
-    <View style={[styles.row, styles.headerRow, { borderColor: colors.border }]} accessibilityRole="header">
+    <View style={[styles.row, styles.headerRow, { borderColor: colors.border }]} {...webRole('row')}>
       {COLUMNS.map((c) => (
-        <Text key={c.key} variant="label" tone="muted" style={{ width: c.width }}>
+        <Text key={c.key} variant="label" tone="muted" style={{ width: c.width }} {...webRole('columnheader')}>
           {c.title}
         </Text>
       ))}
@@ -88,16 +88,23 @@ function TableRows({ page, wide }: { page: ReceptionPage; wide: boolean }) {
   );
   return (
     <ScrollView horizontal contentContainerStyle={styles.tableScroll}>
-      <View accessibilityLabel="Reports" style={webRole('table')}>
+      <View accessibilityLabel="Reports" {...webRole('table')}>
         {header}
         {page.reports.map((report, i) => (
           <View
             key={report.id}
             style={[styles.row, { borderColor: colors.border }, i % 2 === 1 && { backgroundColor: colors.surface }]}
             accessibilityLabel={`${report.rxCallsign} on ${bandName(report.bandId)} at ${formatUtcDateTime(report.slotUtc)}`}
+            {...webRole('row')}
           >
             {COLUMNS.map((c) => (
-              <Text key={c.key} variant={c.mono ? 'mono' : 'body'} style={[{ width: c.width }, styles.cell]} numberOfLines={1}>
+              <Text
+                key={c.key}
+                variant={c.mono ? 'mono' : 'body'}
+                style={[{ width: c.width }, styles.cell]}
+                numberOfLines={1}
+                {...webRole('cell')}
+              >
                 {c.value(report)}
               </Text>
             ))}

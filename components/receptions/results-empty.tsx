@@ -4,14 +4,13 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
+import { Heading } from '../ui/heading';
 
 /** No reports in the period: says how reports reach Faintline, with the way to each. */
 export function ResultsEmpty({ filtered }: { filtered: boolean }) {
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        {filtered ? 'Nobody reported hearing it in this period' : 'No reception reports yet'}
-      </Text>
+      <Heading level={2}>{filtered ? 'Nobody reported hearing it in this period' : 'No reception reports yet'}</Heading>
       <Text tone="muted">
         Reports arrive in two ways: a listening post (a receiver of yours that posts each decode to Faintline with its own token), or a file
         of reports you import. Once a report names this station’s callsign on one of its bands, it shows here.

@@ -18,6 +18,8 @@ import { ReachFigures } from './reach-figures';
 import { ReceptionTable } from './reception-table';
 import { ResultsEmpty } from './results-empty';
 import { ResultsFilters, type ResultsFiltersProps } from './results-filters';
+import { Heading } from '../ui/heading';
+import { ScreenTitle } from '../ui/screen-title';
 
 type QueryView<T> = { data: T | undefined; isPending: boolean; isFetching: boolean; error: Error | null; refetch: () => unknown };
 
@@ -61,9 +63,7 @@ export function ResultsView(props: ResultsViewProps) {
       <>
         <View style={[styles.top, wide && styles.topWide]}>
           <Card style={[styles.mapCard, wide && styles.mapWide]}>
-            <Text variant="heading" accessibilityRole="header">
-              Who heard it
-            </Text>
+            <Heading level={2}>Who heard it</Heading>
             <View onLayout={onMapLayout}>
               {mapWidth > 0 ? (
                 <LazyWorldMap station={data.station} receivers={data.mapReceivers} width={mapWidth} bandId={data.bandId} />
@@ -81,9 +81,9 @@ export function ResultsView(props: ResultsViewProps) {
         </Card>
         <Card>
           <View style={styles.tableHead}>
-            <Text variant="heading" accessibilityRole="header" style={styles.grow}>
+            <Heading level={2} style={styles.grow}>
               Every report
-            </Text>
+            </Heading>
             <DownloadLink href={props.csvHref} label="Export CSV" fileName={props.csvFileName} />
           </View>
           {page.data ? (
@@ -109,9 +109,7 @@ export function ResultsView(props: ResultsViewProps) {
   return (
     <>
       <View style={styles.heading}>
-        <Text variant="title" accessibilityRole="header">
-          Who heard {stationName}
-        </Text>
+        <ScreenTitle>{`Who heard ${stationName}`}</ScreenTitle>
         <Text tone="muted">
           <Text variant="mono">{callsign}</Text> · {formatUtcDateTime(filters.fromIso)} to {formatUtcDateTime(filters.toIso)}
         </Text>

@@ -8,6 +8,8 @@ import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandName, byFrequency, formatMinutes, formatPercent } from './schedule-words';
+import { Heading } from '../ui/heading';
+import { List, ListItem } from '../ui/list';
 
 export type AirtimeSummaryProps = {
   /** A plan over whole UTC days: its transmissions and slot counts. */
@@ -39,15 +41,14 @@ export function AirtimeSummary({ plan, days }: AirtimeSummaryProps) {
   });
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        Time on the air
-      </Text>
+      <Heading level={2}>Time on the air</Heading>
       <Text variant="caption" tone="muted">
         Minutes of signal per band and UTC day (each transmission lasts about 1.8 minutes).
       </Text>
       {bands.length ? (
-        <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border }]}>
-          <View style={[styles.row, { borderColor: colors.border }]}>
+        <List style={[styles.table, { borderColor: colors.border }]}>
+          {/* the column heads are for the eye: each row's label already names its days */}
+          <View style={[styles.row, { borderColor: colors.border }]} aria-hidden>
             <Text variant="caption" tone="muted" style={styles.bandCol}>
               Band
             </Text>
@@ -58,10 +59,10 @@ export function AirtimeSummary({ plan, days }: AirtimeSummaryProps) {
             ))}
           </View>
           {bands.map((bandId) => (
-            <View
+            <ListItem
               key={bandId}
               style={[styles.row, { borderColor: colors.border }]}
-              accessibilityLabel={`${bandName(bandId)}: ${days
+              aria-label={`${bandName(bandId)}: ${days
                 .map((date) => `${date} ${formatMinutes(cell(date, bandId)?.minutesOnAir ?? 0)}`)
                 .join(', ')}`}
             >
@@ -79,9 +80,9 @@ export function AirtimeSummary({ plan, days }: AirtimeSummaryProps) {
                   </View>
                 );
               })}
-            </View>
+            </ListItem>
           ))}
-        </View>
+        </List>
       ) : (
         <Text tone="muted">No time on the air in these days.</Text>
       )}

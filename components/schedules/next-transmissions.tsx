@@ -9,6 +9,8 @@ import { useAppTheme } from '../ui/theme-provider';
 import { useTickingClock } from '../ui/use-ticking-clock';
 import { formatCountdown, formatMHz, formatUtcTime } from '../ui/format';
 import { bandName } from './schedule-words';
+import { Heading } from '../ui/heading';
+import { List, ListItem } from '../ui/list';
 
 export type UpcomingTransmission = {
   startMs: number;
@@ -37,9 +39,7 @@ export function NextTransmissions({ transmissions, now = Date.now, count = 6, qu
   const first = coming[0];
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        Next transmissions
-      </Text>
+      <Heading level={2}>Next transmissions</Heading>
       {first ? (
         <View
           accessibilityRole="timer"
@@ -58,11 +58,11 @@ export function NextTransmissions({ transmissions, now = Date.now, count = 6, qu
         <Text tone="muted">{quietMessage ?? 'Nothing is planned in the next 24 hours.'}</Text>
       )}
       {coming.length ? (
-        <View accessibilityRole="list" style={styles.list}>
+        <List style={styles.list}>
           {coming.map((t) => (
-            <View
+            <ListItem
               key={`${t.startMs}-${t.bandId}`}
-              accessibilityLabel={`${formatUtcTime(t.startMs)}, ${bandName(t.bandId)}, ${t.messageText}`}
+              aria-label={`${formatUtcTime(t.startMs)}, ${bandName(t.bandId)}, ${t.messageText}`}
               style={[styles.row, { borderColor: colors.border }]}
             >
               <Text variant="mono" style={styles.time}>
@@ -79,9 +79,9 @@ export function NextTransmissions({ transmissions, now = Date.now, count = 6, qu
                   offset {Math.round(t.audioOffsetHz * 10) / 10} Hz · {t.messageText}
                 </Text>
               </View>
-            </View>
+            </ListItem>
           ))}
-        </View>
+        </List>
       ) : null}
     </Card>
   );

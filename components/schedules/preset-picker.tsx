@@ -7,6 +7,7 @@ import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { bandName, cadenceLabel, hoursLabel } from './schedule-words';
+import { Heading } from '../ui/heading';
 
 export type PresetOption = ReturnType<typeof presetsFor>[number];
 
@@ -20,9 +21,7 @@ export type PresetPickerProps = {
 export function PresetPicker({ presets, title, onPick }: PresetPickerProps) {
   return (
     <Card tone="primary">
-      <Text variant="heading" accessibilityRole="header">
-        {title}
-      </Text>
+      <Heading level={2}>{title}</Heading>
       <View style={styles.list}>
         {presets.map((option) => (
           <View key={option.preset.id} style={styles.item}>
@@ -39,7 +38,7 @@ export function PresetPicker({ presets, title, onPick }: PresetPickerProps) {
             <Button
               label="Use"
               variant="secondary"
-              accessibilityLabel={`Use the preset ${option.preset.title}`}
+              accessibilityLabel={`Use preset ${option.preset.title}`}
               onPress={() => onPick(option)}
               style={styles.button}
             />

@@ -24,6 +24,7 @@ import { PresetPicker, type PresetOption } from './preset-picker';
 import { previewDraft, type SchedulePreview } from './preview-model';
 import { StepCard } from './step-card';
 import { TermInfo } from '../help/term-info';
+import { Heading } from '../ui/heading';
 
 export type ScheduleEditorProps = {
   station: Station;
@@ -138,9 +139,7 @@ export function ScheduleEditor({
         <FormTextField control={form.control} name="name" label="Schedule name" hint="Your own name for this rotation." />
       </Card>
       <View style={styles.sectionHead}>
-        <Text variant="heading" accessibilityRole="header">
-          Rotation
-        </Text>
+        <Heading level={2}>Rotation</Heading>
         <Text variant="caption" tone="muted">
           The steps run in turn, top to bottom, then round again; a step outside its hours passes its turn on.
         </Text>
@@ -183,9 +182,7 @@ export function ScheduleEditor({
       <CadenceFields form={form} />
       <Card>
         <View style={styles.headingRow}>
-          <Text variant="heading" accessibilityRole="header">
-            Stagger
-          </Text>
+          <Heading level={2}>Stagger</Heading>
           <TermInfo term="stagger" />
         </View>
         <Text variant="caption" tone="muted">
@@ -258,9 +255,7 @@ function CadenceFields({ form }: { form: FormApi }) {
   return (
     <Card>
       <View style={styles.headingRow}>
-        <Text variant="heading" accessibilityRole="header">
-          How often
-        </Text>
+        <Heading level={2}>How often</Heading>
         <TermInfo term="slot" />
       </View>
       <ChoiceChips<ScheduleValues['cadence']['kind']>
@@ -311,9 +306,7 @@ function DateFields({ form }: { form: FormApi }) {
   const end = useController({ control: form.control, name: 'endDate' });
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header">
-        Dates (UTC)
-      </Text>
+      <Heading level={2}>Dates (UTC)</Heading>
       <View style={styles.fields}>
         <TextField
           label="Start date (UTC)"

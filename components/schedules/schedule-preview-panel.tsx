@@ -9,6 +9,7 @@ import { AirtimeSummary } from './airtime-summary';
 import { NextTransmissions, type UpcomingTransmission } from './next-transmissions';
 import type { SchedulePreview } from './preview-model';
 import { ScheduleTimeline } from './schedule-timeline';
+import { Heading } from '../ui/heading';
 
 export type SchedulePreviewPanelProps = {
   preview: SchedulePreview | null;
@@ -26,9 +27,7 @@ export function SchedulePreviewPanel({ preview, upcoming, quietMessage, note, no
   if (!preview) {
     return (
       <Card>
-        <Text variant="heading" accessibilityRole="header">
-          Preview
-        </Text>
+        <Heading level={2}>Preview</Heading>
         <Text tone="muted">Fix the marked fields to see the timeline.</Text>
       </Card>
     );

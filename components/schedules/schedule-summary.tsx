@@ -8,6 +8,8 @@ import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandName, cadenceLabel, hoursLabel } from './schedule-words';
+import { ScreenTitle } from '../ui/screen-title';
+import { List, ListItem } from '../ui/list';
 
 export type ScheduleSummaryProps = {
   schedule: Schedule;
@@ -47,9 +49,7 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
           <Text variant="caption" tone="muted">
             Schedule
           </Text>
-          <Text variant="title" accessibilityRole="header">
-            {schedule.name}
-          </Text>
+          <ScreenTitle>{schedule.name}</ScreenTitle>
         </View>
         <View
           accessibilityRole="summary"
@@ -62,12 +62,12 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
       </View>
       <Text tone="muted">{look.text}</Text>
 
-      <View accessibilityRole="list" style={styles.steps}>
+      <List style={styles.steps}>
         {schedule.steps.map((step, i) => (
-          <View
+          <ListItem
             key={i}
             style={[styles.step, { borderColor: colors.border }]}
-            accessibilityLabel={`Step ${i + 1}: ${bandName(step.bandId)}, ${step.slots} slots, ${hoursLabel(step.activeHoursUtc)}`}
+            aria-label={`Step ${i + 1}: ${bandName(step.bandId)}, ${step.slots} slots, ${hoursLabel(step.activeHoursUtc)}`}
           >
             <Text variant="mono" tone="primary" style={styles.stepNo}>
               {i + 1}
@@ -78,9 +78,9 @@ export function ScheduleSummary({ schedule, station, onEdit, onPause, onResume, 
             <Text variant="caption" tone="muted" style={styles.flex}>
               {step.slots === 1 ? '1 slot' : `${step.slots} slots`} in a row · {hoursLabel(step.activeHoursUtc)}
             </Text>
-          </View>
+          </ListItem>
         ))}
-      </View>
+      </List>
       <Text variant="caption" tone="muted">
         Transmits in {cadenceLabel(schedule.cadence)}
         {schedule.stagger.stepHz > 0

@@ -7,6 +7,7 @@ import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { formatUtcTime } from '../ui/format';
 import type { TimelineModel } from './timeline-model';
+import { Heading } from '../ui/heading';
 
 // victory is large and only these screens draw it: keep it out of the entry bundle
 const TimelineChart = lazy(() => import('../charts/all-charts').then((m) => ({ default: m.TimelineChart })));
@@ -22,9 +23,7 @@ export function ScheduleTimeline({ model, title = 'Next 24 hours (UTC)', note }:
   return (
     <Card>
       <View style={styles.head}>
-        <Text variant="heading" accessibilityRole="header">
-          {title}
-        </Text>
+        <Heading level={2}>{title}</Heading>
         <Text variant="caption" tone="muted">
           {formatUtcTime(model.fromMs)} to {formatUtcTime(model.toMs)}
         </Text>
@@ -36,7 +35,9 @@ export function ScheduleTimeline({ model, title = 'Next 24 hours (UTC)', note }:
         style={styles.chartBox}
       >
         {width > 0 ? (
-          <Suspense fallback={<ActivityIndicator color={colors.primary} style={styles.loading} />}>
+          <Suspense
+            fallback={<ActivityIndicator color={colors.primary} style={styles.loading} accessibilityLabel="Loading the timeline" />}
+          >
             <TimelineChart model={model} width={width} />
           </Suspense>
         ) : null}

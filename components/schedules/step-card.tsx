@@ -9,6 +9,7 @@ import type { ScheduleValues } from '@/shared/schemas';
 
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
@@ -64,18 +65,14 @@ export function StepCard({
   const activeHours = watched?.activeHoursUtc ?? (hours.field.value as ScheduleValues['steps'][number]['activeHoursUtc']);
   return (
     <Card style={blocks.length || serverError ? [styles.blocked, { borderColor: colors.danger }] : undefined}>
-      <View
-        style={styles.head}
-        accessibilityRole="header"
-        accessibilityLabel={`Step ${n}: ${bandName(bandId)}, ${hoursLabel(activeHours)}`}
-      >
+      <View style={styles.head}>
         <View style={styles.title}>
           <Text variant="caption" tone="muted">
             Step {n} of {count}
           </Text>
-          <Text variant="heading">
+          <Heading level={3} aria-label={`Step ${n}: ${bandName(bandId)}, ${hoursLabel(activeHours)}`}>
             {bandName(bandId)} <Text tone="muted">· {hoursLabel(activeHours)}</Text>
-          </Text>
+          </Heading>
         </View>
         <View style={styles.actions}>
           <Button

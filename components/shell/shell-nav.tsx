@@ -44,9 +44,9 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
     return (
       <Pressable
         key={route.key}
-        accessibilityRole="tab"
-        accessibilityLabel={tab.label}
-        accessibilityState={{ selected: focused }}
+        role="tab"
+        aria-label={tab.label}
+        aria-selected={focused}
         onPress={onPress}
         style={({ hovered }: { pressed: boolean; hovered?: boolean }) => [
           rail ? styles.railItem : styles.barItem,
@@ -84,7 +84,8 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
   }
   return (
     <View
-      accessibilityRole="tablist"
+      role="navigation"
+      aria-label="Main"
       style={[
         styles.bar,
         {
@@ -95,7 +96,9 @@ export function ShellNav({ state, navigation, variant, now, accessory }: ShellNa
         },
       ]}
     >
-      {buttons}
+      <View accessibilityRole="tablist" style={styles.barItems}>
+        {buttons}
+      </View>
     </View>
   );
 }
@@ -116,7 +119,8 @@ export function ShellHeader({ now, accessory }: { now?: () => number; accessory?
 }
 
 const styles = StyleSheet.create({
-  bar: { flexDirection: 'row', borderTopWidth: 1 },
+  bar: { borderTopWidth: 1 },
+  barItems: { flex: 1, flexDirection: 'row' },
   barItem: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: 2, paddingTop: 4 },
   barLabel: { fontSize: 12, lineHeight: 16 },
   barMarker: { position: 'absolute', top: 0, width: 28, height: 3, borderBottomLeftRadius: 3, borderBottomRightRadius: 3 },

@@ -6,6 +6,7 @@ import { Button } from '../ui/button';
 import { formatLocator } from '../ui/format';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type StationHeaderProps = {
   station: Station;
@@ -18,9 +19,7 @@ export function StationHeader({ station, onEdit, onDelete }: StationHeaderProps)
   return (
     <View style={styles.head}>
       <View style={styles.titleBlock}>
-        <Text variant="title" accessibilityRole="header">
-          {station.name}
-        </Text>
+        <ScreenTitle>{station.name}</ScreenTitle>
         <Text variant="mono" tone="primary">
           {station.callsign} · {formatLocator(station.locator)}
         </Text>

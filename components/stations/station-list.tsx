@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { formatLocator, formatUtcDateTime } from '../ui/format';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
+import { List, ListItem } from '../ui/list';
 
 export type StationListProps = {
   stations: Station[];
@@ -50,10 +51,6 @@ export function StationList({ stations, layout, showOwner = false, hrefFor = own
   );
 }
 
-function openLabel(station: Station) {
-  return `Open station ${station.name}, ${station.callsign}`;
-}
-
 export type StationCardProps = { station: Station; href: Href; showOwner?: boolean; deviceOnline?: ReadonlyMap<number, boolean> };
 
 export function StationCard({ station, href, showOwner = false, deviceOnline }: StationCardProps) {
@@ -63,7 +60,6 @@ export function StationCard({ station, href, showOwner = false, deviceOnline }: 
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(station)}
         // Link's asChild spreads the child's style into an object: pass one flat object
         style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
       >
@@ -114,7 +110,7 @@ function StationTable({ stations, showOwner, hrefFor, deviceOnline }: StationTab
     { key: 'updated', label: 'Updated (UTC)', style: styles.colUpdated },
   ];
   return (
-    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
+    <List style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
         {header.map((column) => (
           <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
@@ -123,16 +119,17 @@ function StationTable({ stations, showOwner, hrefFor, deviceOnline }: StationTab
         ))}
       </View>
       {stations.map((station, index) => (
-        <StationRow
-          key={station.id}
-          station={station}
-          href={hrefFor(station)}
-          showOwner={showOwner}
-          last={index === stations.length - 1}
-          state={stationState(station, deviceOnline)}
-        />
+        <ListItem key={station.id}>
+          <StationRow
+            station={station}
+            href={hrefFor(station)}
+            showOwner={showOwner}
+            last={index === stations.length - 1}
+            state={stationState(station, deviceOnline)}
+          />
+        </ListItem>
       ))}
-    </View>
+    </List>
   );
 }
 
@@ -151,7 +148,6 @@ function StationRow({ station, href, showOwner, last, state }: StationRowProps) 
     <Link href={href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(station)}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
         // Link's asChild spreads the child's style into an object: pass one flat object

@@ -12,7 +12,7 @@ export type ButtonProps = {
   variant?: ButtonVariant;
   busy?: boolean;
   disabled?: boolean;
-  /** Screen-reader label when it should differ from the visible one. */
+  /** Screen-reader label when it should say more than the visible one; it begins with the visible label (WCAG 2.5.3). */
   accessibilityLabel?: string;
   accessibilityHint?: string;
   style?: StyleProp<ViewStyle>;
@@ -39,7 +39,7 @@ export function Button({
   return (
     <Pressable
       accessibilityRole="button"
-      accessibilityLabel={accessibilityLabel ?? label}
+      accessibilityLabel={nameWithVisibleLabel(label, accessibilityLabel)}
       accessibilityHint={accessibilityHint}
       accessibilityState={{ disabled: inactive, busy }}
       disabled={inactive}
@@ -47,15 +47,22 @@ export function Button({
       style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
         styles.base,
         { backgroundColor: look.bg, borderColor: look.border },
-        (pressed || hovered) && !inactive && styles.pressed,
+        // hover and press darken (never fade) the button, so its label keeps its contrast
+        (pressed || hovered) && !inactive && (look.bg === 'transparent' ? { backgroundColor: colors.primarySoft } : styles.pressed),
         inactive && styles.inactive,
         style,
       ]}
     >
-      {busy ? <ActivityIndicator size="small" color={look.fg} /> : null}
+      {busy ? <ActivityIndicator size="small" color={look.fg} aria-hidden /> : null}
       <Text style={[styles.label, { color: look.fg }]}>{label}</Text>
     </Pressable>
   );
+}
+
+/** The accessible name always holds what is seen, so speech users can say it (axe: label-content-name-mismatch). */
+export function nameWithVisibleLabel(label: string, accessibilityLabel?: string): string {
+  if (!accessibilityLabel) return label;
+  return accessibilityLabel.toLowerCase().includes(label.toLowerCase()) ? accessibilityLabel : `${label}: ${accessibilityLabel}`;
 }
 
 const styles = StyleSheet.create({
@@ -70,6 +77,6 @@ const styles = StyleSheet.create({
     gap: space.sm,
   },
   label: { fontFamily: fonts.medium, fontSize: 16 },
-  pressed: { opacity: 0.85 },
+  pressed: { filter: 'brightness(0.88)' },
   inactive: { opacity: 0.55 },
 });

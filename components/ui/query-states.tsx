@@ -11,7 +11,8 @@ export function LoadingState({ label = 'Loading…' }: { label?: string }) {
   const { colors } = useAppTheme();
   return (
     <View style={styles.center} accessibilityRole="progressbar" accessibilityLabel={label}>
-      <ActivityIndicator color={colors.primary} />
+      {/* the spinner is drawing only: the view around it is the named progress bar */}
+      <ActivityIndicator color={colors.primary} aria-hidden />
       <Text tone="muted">{label}</Text>
     </View>
   );

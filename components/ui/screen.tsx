@@ -14,12 +14,12 @@ export type ScreenProps = {
   contentStyle?: StyleProp<ViewStyle>;
 };
 
-/** A scrolling page with a centred content column, capped on wide screens. */
+/** A scrolling page with a centred content column, capped on wide screens; the `main` landmark of its screen. */
 export function Screen({ children, maxWidth = layout.maxContentWidth, overlay, contentStyle }: ScreenProps) {
   const { colors } = useAppTheme();
   const { isTablet } = useBreakpoints();
   return (
-    <View style={[styles.root, { backgroundColor: colors.background }]}>
+    <View role="main" style={[styles.root, { backgroundColor: colors.background }]}>
       <ScrollView
         style={styles.root}
         contentContainerStyle={[styles.scroll, { padding: isTablet ? space.xxl : space.lg }]}

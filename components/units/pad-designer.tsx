@@ -112,7 +112,7 @@ export function PadDesigner({ generatorDbm, amplifier, filterLossDb, onUse }: Pa
                       key={f.attenuationDb}
                       variant="secondary"
                       label={`${f.attenuationDb} dB part → ${formatValue(f.outputDbm, 1, 'dBm')}`}
-                      accessibilityLabel={`Use a ${f.attenuationDb} dB attenuator, giving ${formatValue(f.outputDbm, 1, 'dBm')}`}
+                      accessibilityLabel={`Use a ${f.attenuationDb} dB attenuator: ${f.attenuationDb} dB part → ${formatValue(f.outputDbm, 1, 'dBm')}`}
                       onPress={() => onUse?.(f.attenuationDb)}
                     />
                   ))}

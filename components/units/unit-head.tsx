@@ -8,6 +8,7 @@ import { Notice } from '../ui/notice';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { generatorSummary } from './unit-summary';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type UnitHeadProps = {
   unit: Unit;
@@ -26,9 +27,7 @@ export function UnitHead({ unit, readOnly, copying, copyError, onEdit, onCopy, o
     <>
       <View style={styles.head}>
         <View style={styles.titleBlock}>
-          <Text variant="title" accessibilityRole="header">
-            {unit.name}
-          </Text>
+          <ScreenTitle>{unit.name}</ScreenTitle>
           <Text variant="mono" tone="primary">
             {generatorSummary(unit)}
             {unit.serialLabel ? ` · ${unit.serialLabel}` : ''}

@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { fonts, radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
 import { bandName, filterBands, generatorSummary } from './unit-summary';
+import { List, ListItem } from '../ui/list';
 
 export type UnitListProps = {
   units: Unit[];
@@ -23,7 +24,6 @@ const usedByWords = (unit: Unit, usedBy?: ReadonlyMap<number, string[]>) => {
 };
 
 const detail = (unit: Unit): Href => ({ pathname: '/units/[id]', params: { id: String(unit.id) } });
-const openLabel = (unit: Unit) => `Open unit ${unit.name}`;
 
 /** The beacon hardware register: cards on phones, columns on wide screens. */
 export function UnitList({ units, layout, usedBy }: UnitListProps) {
@@ -87,7 +87,6 @@ function UnitCard({ unit, usedBy }: { unit: Unit; usedBy: string | null }) {
     <Link href={detail(unit)} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(unit)}
         style={StyleSheet.flatten([styles.card, { backgroundColor: colors.surface, borderColor: colors.border }])}
       >
         <Thumb unit={unit} size={64} />
@@ -128,7 +127,7 @@ function UnitTable({ units, usedBy }: { units: Unit[]; usedBy?: ReadonlyMap<numb
     ...(usedBy ? [{ key: 'used', label: 'Stations', style: styles.colUsed }] : []),
   ];
   return (
-    <View accessibilityRole="list" style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
+    <List style={[styles.table, { borderColor: colors.border, backgroundColor: colors.surface }]}>
       <View style={[styles.row, styles.headRow, { borderColor: colors.border }]}>
         {head.map((column) => (
           <Text key={column.key} variant="caption" tone="muted" style={[column.style, styles.headCell]}>
@@ -137,9 +136,11 @@ function UnitTable({ units, usedBy }: { units: Unit[]; usedBy?: ReadonlyMap<numb
         ))}
       </View>
       {units.map((unit, index) => (
-        <UnitRow key={unit.id} unit={unit} last={index === units.length - 1} usedBy={usedBy ? (usedBy.get(unit.id) ?? []) : null} />
+        <ListItem key={unit.id}>
+          <UnitRow unit={unit} last={index === units.length - 1} usedBy={usedBy ? (usedBy.get(unit.id) ?? []) : null} />
+        </ListItem>
       ))}
-    </View>
+    </List>
   );
 }
 
@@ -150,7 +151,6 @@ function UnitRow({ unit, last, usedBy }: { unit: Unit; last: boolean; usedBy: st
     <Link href={detail(unit)} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={openLabel(unit)}
         onHoverIn={() => setHovered(true)}
         onHoverOut={() => setHovered(false)}
         style={StyleSheet.flatten([

@@ -15,6 +15,7 @@ import { Switch } from '../ui/switch';
 import { TextLink } from '../ui/text-link';
 import { WindowGauge } from './window-gauge';
 import { TermInfo } from '../help/term-info';
+import { Heading } from '../ui/heading';
 
 export type BandListProps = {
   station: Station;
@@ -116,9 +117,7 @@ export function BandList({ station, unit, readOnly, pendingBandId, errors = {}, 
       })}
       {closed.length ? (
         <Card style={styles.card}>
-          <Text variant="heading" accessibilityRole="header">
-            {unit ? 'Bands no filter covers' : 'Bands'}
-          </Text>
+          <Heading level={2}>{unit ? 'Bands no filter covers' : 'Bands'}</Heading>
           {unit ? <Text tone="muted">These stay off until the unit has a low-pass filter made for them.</Text> : null}
           {unit && !readOnly ? <UnitFiltersLink unitId={unit.id} /> : null}
           {closed.map(({ band, blocked }) => (

@@ -21,6 +21,7 @@ import { parseNumberText } from '../form/number-text';
 import { formatHz, formatSigned } from '../ui/format';
 import type { CalibrationProposal } from './queries';
 import { TermInfo } from '../help/term-info';
+import { Heading } from '../ui/heading';
 
 /** The shared measurement schema, with the words for a frequency left empty. */
 const measurementFields = measurementInput.extend({
@@ -152,9 +153,7 @@ export function CalibrationForm({ region, audioOffsetHz, bandIds, onPropose, onA
       {proposal ? (
         <View style={[styles.proposal, { borderColor: colors.primary, backgroundColor: colors.primarySoft }]}>
           <View style={styles.headingRow}>
-            <Text variant="heading" accessibilityRole="header">
-              Proposed offsets
-            </Text>
+            <Heading level={2}>Proposed offsets</Heading>
             <TermInfo term="calibration" />
           </View>
           <Text>

@@ -53,7 +53,7 @@ export function StationWorkshop({
             <Text tone="danger">{unitError}</Text>
           ) : unitHref && unit ? (
             <Link href={unitHref} asChild>
-              <Pressable accessibilityRole="link" accessibilityLabel={`Open unit ${unit.name}`} hitSlop={6}>
+              <Pressable accessibilityRole="link" hitSlop={6}>
                 <Text variant="label" tone="primary" style={styles.underline}>
                   {unit.name}
                 </Text>

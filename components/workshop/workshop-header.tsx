@@ -6,6 +6,7 @@ import { Button } from '../ui/button';
 import { formatLocator } from '../ui/format';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
+import { ScreenTitle } from '../ui/screen-title';
 
 export type WorkshopHeaderProps = {
   title: string;
@@ -20,9 +21,7 @@ export function WorkshopHeader({ title, station, intro, actions = [] }: Workshop
     <View style={styles.wrap}>
       <View style={styles.head}>
         <View style={styles.titleBlock}>
-          <Text variant="title" accessibilityRole="header">
-            {title}
-          </Text>
+          <ScreenTitle context={station.name}>{title}</ScreenTitle>
           <Text variant="mono" tone="primary">
             {station.name} · {station.callsign} · {formatLocator(station.locator)}
           </Text>

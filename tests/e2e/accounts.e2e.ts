@@ -1,18 +1,23 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
-import { BASE_URL, VIEWPORTS, axeFindings, openBrowser, screenshot, signIn, startServer, visibleText, type RunningServer } from './harness';
+import {
+  BASE_URL,
+  VIEWPORTS,
+  failureScreenshot,
+  openBrowser,
+  screenshot,
+  signIn,
+  startServer,
+  visibleText,
+  type RunningServer,
+} from './harness';
 
 let server: RunningServer;
 before(async () => {
   server = await startServer();
 });
 after(() => server.stop());
-
-async function look(page: Page, name: string) {
-  await screenshot(page, name);
-  assert.deepEqual(await axeFindings(page), [], `axe findings on ${name}`);
-}
 
 /** The newest link of this kind in a mail to `to`, from the local test inbox. */
 async function mailedLink(to: string, route: string): Promise<string> {
@@ -51,7 +56,7 @@ for (const viewport of VIEWPORTS) {
         await page.goto(`${BASE_URL}/settings`);
         await visibleText(page, 'Sign-in e-mail').waitFor();
         await visibleText(page, 'Reception reports stay').waitFor(); // what deletion takes has loaded
-        await look(page, `account-settings-${v}`);
+        await screenshot(page, `account-settings-${v}`);
 
         // — change password: a wrong current password is refused beside its field; Enter submits
         const current = page.getByLabel('Current password', { exact: true });
@@ -66,7 +71,7 @@ for (const viewport of VIEWPORTS) {
         const changed = page.getByRole('status').filter({ hasText: 'Password changed.' });
         await changed.waitFor();
         assert.ok(await changed.isVisible());
-        await look(page, `account-password-changed-${v}`);
+        await screenshot(page, `account-password-changed-${v}`);
 
         // — sign out, and in again with the new password
         await button(page, 'Sign out').click();
@@ -83,12 +88,12 @@ for (const viewport of VIEWPORTS) {
         await button(page, 'Send confirmation link').click();
         await visibleText(page, `We sent a confirmation link to ${moved}`).waitFor();
         await visibleText(page, `Waiting for you to open the link we sent to ${moved}`).waitFor();
-        await look(page, `account-email-pending-${v}`);
+        await screenshot(page, `account-email-pending-${v}`);
         const confirmLink = await mailedLink(moved, '/confirm-email');
         await page.goto(`${BASE_URL}/dev/inbox`);
         await page.locator(`a[href="${confirmLink}"]`).first().click();
         await visibleText(page, `Your sign-in e-mail is now ${moved}.`).waitFor();
-        await look(page, `account-email-confirmed-${v}`);
+        await screenshot(page, `account-email-confirmed-${v}`);
         await page.getByRole('link', { name: 'Back to settings' }).click();
         await visibleText(page, `You sign in with ${moved}`).waitFor();
 
@@ -111,14 +116,14 @@ for (const viewport of VIEWPORTS) {
         await page.getByLabel('Type your password to confirm', { exact: true }).fill('second-password-2');
         await button(page, 'Delete my account…').click();
         await visibleText(page, 'Delete your account for good?').waitFor();
-        await look(page, `account-delete-dialog-${v}`);
+        await screenshot(page, `account-delete-dialog-${v}`);
         await button(page, 'Delete my account').click();
         await page.getByRole('button', { name: 'Sign in' }).waitFor();
         await signIn(page, moved, 'second-password-2');
         await visibleText(page, 'Wrong e-mail or password').waitFor();
         assert.deepEqual(browser.errors, []);
       } catch (failure) {
-        await screenshot(page, `account-failed-${v}`);
+        await failureScreenshot(page, `account-failed-${v}`);
         throw failure;
       } finally {
         await browser.close();

@@ -1,3 +1,4 @@
+import assert from 'node:assert/strict';
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -106,31 +107,62 @@ export async function signIn(page: Page, email: string, password = 'faintline-de
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
+/**
+ * The step every test takes on each screen it visits, at each size: a PNG when E2E_SCREENSHOTS is set, the screen's
+ * structure (one level-1 heading, one main landmark, a document title naming the screen and the product), then axe-core over the whole
+ * page, failing on any critical or serious finding (no rule set aside).
+ */
 export async function screenshot(page: Page, name: string) {
+  await failureScreenshot(page, name);
+  const structure = await screenStructure(page);
+  assert.ok(
+    structure.fine,
+    `${name} needs one level-1 heading, one main landmark and a title ending "· Faintline": ${JSON.stringify(structure)}`,
+  );
+  assert.deepEqual(await axeFindings(page), [], `axe-core findings on ${name}`);
+}
+
+/** Visible level-1 headings and the tab title (titles settle just after a render, so it looks again for up to 2 s). */
+async function screenStructure(page: Page) {
+  const read = async () => ({
+    h1: await page.locator('h1, [role="heading"][aria-level="1"]').locator('visible=true').allInnerTexts(),
+    main: await page.locator('main, [role="main"]').locator('visible=true').count(),
+    title: await page.title(),
+  });
+  const fine = (found: { h1: string[]; main: number; title: string }) =>
+    found.h1.length === 1 && found.main === 1 && / · Faintline$/.test(found.title);
+  let found = await read();
+  for (let tries = 0; tries < 20 && !fine(found); tries++) {
+    await page.waitForTimeout(100);
+    found = await read();
+  }
+  return { ...found, fine: fine(found) };
+}
+
+/** A PNG only, for a test's failure path (a check here would hide the failure being recorded). */
+export async function failureScreenshot(page: Page, name: string) {
   if (process.env.E2E_SCREENSHOTS) {
     await page.screenshot({ path: path.join(ROOT, 'screenshots', `${name}.png`), fullPage: false });
   }
 }
 
-/** The first visible element with this text (screens lower in the stack stay in the DOM, hidden). */
-export function visibleText(page: Page, text: string | RegExp) {
-  return page.getByText(text).locator('visible=true').first();
-}
-
-const AXE = readFileSync(path.resolve(__dirname, '../../node_modules/axe-core/axe.min.js'), 'utf8');
+let axeSource: string | undefined;
 
 /** axe-core's critical and serious findings on the page as it is now (evaluated over DevTools, so the CSP does not apply). */
-export async function axeFindings(page: Page) {
-  await page.evaluate(AXE);
+export async function axeFindings(page: Page): Promise<string[]> {
+  axeSource ??= readFileSync(path.join(ROOT, 'node_modules/axe-core/axe.min.js'), 'utf8');
+  await page.evaluate(axeSource);
   return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(): Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> } }).axe;
+    type Violation = { id: string; impact: string; nodes: { target: string[] }[] };
+    const axe = (window as unknown as { axe: { run(): Promise<{ violations: Violation[] }> } }).axe;
     const result = await axe.run();
     return result.violations
       .filter((v) => v.impact === 'critical' || v.impact === 'serious')
-      .map((v) => ({
-        id: v.id,
-        targets: v.nodes.map((n) => (n as { target: string[] }).target),
-      }))
-      .map((v) => `${v.id}: ${JSON.stringify(v.targets)}`);
+      .map((v) => `${v.id}: ${JSON.stringify(v.nodes.map((n) => n.target))}`);
   });
+}
+
+/** The first visible element with this text (screens lower in the stack stay in the DOM, hidden). */
+export function visibleText(page: Page, text: string | RegExp) {
+  return page.getByText(text).locator('visible=true').first();
 }

@@ -144,9 +144,9 @@ for (const viewport of VIEWPORTS) {
         await visibleText(page, /No device yet|A token is active/).waitFor();
         if (await visibleText(page, 'A token is active').isVisible()) {
           // the other screen size made one: revoke it (asked first) and start again
-          await page.getByRole('button', { name: 'Revoke the device token' }).click();
+          await page.getByRole('button', { name: 'Revoke token of the device' }).click();
           await visibleText(page, 'Revoke the device token?').waitFor();
-          await page.getByRole('button', { name: 'Revoke token' }).click();
+          await page.getByRole('button', { name: 'Revoke token', exact: true }).click();
         }
         await visibleText(page, 'No device yet').waitFor();
         await page.getByRole('button', { name: 'Create a device token' }).click();
@@ -160,7 +160,7 @@ for (const viewport of VIEWPORTS) {
         await page.goto(`${BASE_URL}/stations/${garden.id}/device`);
         await visibleText(page, 'A token is active').waitFor();
         assert.equal(await page.getByText(token).count(), 0);
-        await page.getByRole('button', { name: 'Rotate the device token' }).click();
+        await page.getByRole('button', { name: 'Replace token of the device' }).click();
         await visibleText(page, 'Replace the device token?').waitFor();
         await screenshot(page, `e2e-device-rotate-${viewport.name}`);
         await page.getByRole('button', { name: 'Cancel' }).click();

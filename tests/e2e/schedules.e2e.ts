@@ -2,7 +2,17 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 
-import { BASE_URL, VIEWPORTS, openBrowser, screenshot, signIn, startServer, visibleText, type RunningServer } from './harness';
+import {
+  BASE_URL,
+  VIEWPORTS,
+  failureScreenshot,
+  openBrowser,
+  screenshot,
+  signIn,
+  startServer,
+  visibleText,
+  type RunningServer,
+} from './harness';
 
 let server: RunningServer;
 before(async () => {
@@ -142,7 +152,7 @@ for (const viewport of VIEWPORTS) {
         await screenshot(page, `e2e-schedule-seeded-${viewport.name}`);
         assert.deepEqual(browser.errors, []);
       } catch (error) {
-        await screenshot(page, `e2e-schedule-failure-${viewport.name}`);
+        await failureScreenshot(page, `e2e-schedule-failure-${viewport.name}`);
         throw error;
       } finally {
         await browser.close();

@@ -8,6 +8,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function ClubRoute() {
   const user = useSessionQuery().data;
@@ -16,9 +17,7 @@ export default function ClubRoute() {
   return (
     <Screen>
       <View style={styles.titleBlock}>
-        <Text variant="title" accessibilityRole="header">
-          Club
-        </Text>
+        <ScreenTitle>Club</ScreenTitle>
         <Text tone="muted">
           A club lets operators who share bands look after their beacons together: one plan, no collisions, the same limits.
         </Text>

@@ -6,15 +6,14 @@ import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { layout } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function NewClubRoute() {
   const create = useCreateClubMutation();
   return (
     <Screen maxWidth={layout.maxFormWidth + 120}>
       <Stack.Screen options={{ title: 'New club' }} />
-      <Text variant="title" accessibilityRole="header">
-        Start a club
-      </Text>
+      <ScreenTitle>Start a club</ScreenTitle>
       <Text tone="muted">You become its admin: you invite members, review their stations and keep them apart on the air.</Text>
       <Card>
         <ClubForm

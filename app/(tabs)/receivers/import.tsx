@@ -24,6 +24,8 @@ import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/ui/theme';
 import type { ImportMapping } from '@/shared/api/receptions';
+import { Heading } from '@/components/ui/heading';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function ImportReportsRoute() {
   const router = useRouter();
@@ -56,9 +58,7 @@ export default function ImportReportsRoute() {
     <Screen>
       <Stack.Screen options={{ title: 'Import reports · Faintline' }} />
       <View style={styles.heading}>
-        <Text variant="title" accessibilityRole="header">
-          Import a file of reports
-        </Text>
+        <ScreenTitle>Import a file of reports</ScreenTitle>
         <Text tone="muted">
           A CSV or TSV file of decodes in any column order (up to 200 MB). Faintline proposes how to read each column and shows the first
           rows before anything is stored. A report counts once, however often it arrives.
@@ -77,9 +77,7 @@ export default function ImportReportsRoute() {
       {file && mapping && preview.data && !jobId && !start.isPending ? (
         <>
           <Card>
-            <Text variant="heading" accessibilityRole="header">
-              How the columns are read
-            </Text>
+            <Heading level={2}>How the columns are read</Heading>
             {preview.data.notes.map((note) => (
               <Notice key={note} tone="info" message={note} />
             ))}
@@ -101,9 +99,7 @@ export default function ImportReportsRoute() {
             />
           </Card>
           <Card>
-            <Text variant="heading" accessibilityRole="header">
-              The first rows as they will be read
-            </Text>
+            <Heading level={2}>The first rows as they will be read</Heading>
             <PreviewRows preview={preview.data} />
           </Card>
           {start.isError ? <Notice message={start.error.message} /> : null}

@@ -20,6 +20,8 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
 import type { ListeningPost } from '@/shared/api/receptions';
+import { Heading } from '@/components/ui/heading';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 type Pending = { kind: 'rotate' | 'delete'; post: ListeningPost } | null;
 
@@ -93,9 +95,7 @@ export default function ListeningPostsRoute() {
     >
       <Stack.Screen options={{ title: 'Listening posts · Faintline' }} />
       <View style={styles.heading}>
-        <Text variant="title" accessibilityRole="header">
-          Listening posts and imports
-        </Text>
+        <ScreenTitle>Listening posts and imports</ScreenTitle>
         <Text tone="muted">Reception reports reach Faintline from your receivers, or from files of reports you import.</Text>
       </View>
       <View style={styles.actions}>
@@ -105,9 +105,7 @@ export default function ListeningPostsRoute() {
       {issue.isError && !pending ? <Notice message={issue.error.message} /> : null}
       {fresh ? <FreshListeningToken postName={fresh.name} token={fresh.token} origin={pageOrigin()} onDone={() => setFresh(null)} /> : null}
       {list}
-      <Text variant="heading" accessibilityRole="header">
-        Recent imports
-      </Text>
+      <Heading level={2}>Recent imports</Heading>
       {imports.isPending ? (
         <LoadingState label="Loading your imports…" />
       ) : imports.isError ? (

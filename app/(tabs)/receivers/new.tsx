@@ -10,6 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { layout } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function NewListeningPostRoute() {
   const router = useRouter();
@@ -21,9 +22,7 @@ export default function NewListeningPostRoute() {
   return (
     <Screen maxWidth={layout.maxFormWidth + 280}>
       <View>
-        <Text variant="title" accessibilityRole="header">
-          New listening post
-        </Text>
+        <ScreenTitle>New listening post</ScreenTitle>
         <Text tone="muted">A receiver of yours that posts what it decodes. It gets its own token, shown once.</Text>
       </View>
       {issued ? (

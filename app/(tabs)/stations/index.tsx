@@ -11,6 +11,7 @@ import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function StationsRoute() {
   const router = useRouter();
@@ -38,9 +39,7 @@ export default function StationsRoute() {
     <Screen>
       <View style={styles.head}>
         <View style={styles.titleBlock}>
-          <Text variant="title" accessibilityRole="header">
-            Stations
-          </Text>
+          <ScreenTitle>Stations</ScreenTitle>
           <Text tone="muted">Your beacons, each with its callsign and Maidenhead locator.</Text>
         </View>
         {stations.data?.length ? <Button label="Add station" onPress={addStation} /> : null}

@@ -14,6 +14,7 @@ import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { space } from '@/components/ui/theme';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function UnitsRoute() {
   const router = useRouter();
@@ -74,9 +75,7 @@ export default function UnitsRoute() {
     <Screen>
       <View style={styles.head}>
         <View style={styles.titleBlock}>
-          <Text variant="title" accessibilityRole="header">
-            Units
-          </Text>
+          <ScreenTitle>Units</ScreenTitle>
           <Text tone="muted">Your beacon hardware register: boards, crystals, filters and antennas.</Text>
         </View>
         {units.data?.length ? <Button label="Register unit" onPress={addUnit} /> : null}

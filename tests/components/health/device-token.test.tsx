@@ -91,19 +91,19 @@ describe('/stations/[id]/device', () => {
     await waitFor(() => expect(screenText()).toContain('A token is active'));
     expect(screenText()).not.toContain('fld_secret_token_1');
 
-    fireEvent.press(screen.getByLabelText('Rotate the device token'));
+    fireEvent.press(screen.getByLabelText('Replace token of the device'));
     expect(screenText()).toContain('Replace the device token?');
     fireEvent.press(screen.getByLabelText('Cancel'));
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1);
 
-    fireEvent.press(screen.getByLabelText('Rotate the device token'));
+    fireEvent.press(screen.getByLabelText('Replace token of the device'));
     fireEvent.press(screen.getByLabelText('Replace token'));
     await waitFor(() => expect(screenText()).toContain('fld_secret_token_2'));
     expect(screenText()).not.toContain('Replace the device token?');
     fireEvent.press(screen.getByLabelText('I have stored it'));
 
-    await waitFor(() => expect(screen.getByLabelText('Revoke the device token')).toBeTruthy());
-    fireEvent.press(screen.getByLabelText('Revoke the device token'));
+    await waitFor(() => expect(screen.getByLabelText('Revoke token of the device')).toBeTruthy());
+    fireEvent.press(screen.getByLabelText('Revoke token of the device'));
     expect(screenText()).toContain('Revoke the device token?');
     expect(calls.some((c) => c.method === 'DELETE')).toBe(false);
     fireEvent.press(screen.getByLabelText('Revoke token'));

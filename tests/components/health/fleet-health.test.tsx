@@ -73,7 +73,8 @@ describe.each(['cards', 'table'] as const)('FleetHealth as %s', (layout) => {
       <FleetHealth fleet={[online, noDevice]} layout={layout} onOpenStation={onOpenStation} onOpenDevice={onOpenDevice} />,
     );
     fireEvent.press(screen.getByLabelText('Health of Attic beacon'));
-    fireEvent.press(screen.getByLabelText('Create a device token for Garden mast'));
+    // the visible label (shorter in the table), then whose station
+    fireEvent.press(screen.getByLabelText(`${layout === 'table' ? 'Create token' : 'Create a device token'} for Garden mast`));
     expect(onOpenStation).toHaveBeenCalledWith(11);
     expect(onOpenDevice).toHaveBeenCalledWith(13);
   });

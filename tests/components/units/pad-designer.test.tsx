@@ -12,7 +12,7 @@ describe('PadDesigner', () => {
     expect(screenText()).toContain('Needed: 6.5 dB for 23.0 dBm');
     // standard 50 Ω table (from memory) at 6.5 dB: pi shunt ≈ 140 Ω → E24 150 Ω
     expect(screenText()).toContain('140 Ω → E24 150 Ω');
-    fireEvent.press(screen.getByLabelText('Use a 6 dB attenuator, giving 23.5 dBm'));
+    fireEvent.press(screen.getByLabelText('Use a 6 dB attenuator: 6 dB part → 23.5 dBm'));
     expect(onUse).toHaveBeenCalledWith(6);
   });
 

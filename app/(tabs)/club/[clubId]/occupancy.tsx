@@ -11,6 +11,7 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-stat
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
+import { Heading } from '@/components/ui/heading';
 
 // the chart library is large: it loads only when this screen opens
 const OccupancyChart = lazy(() => import('@/components/charts/all-charts').then((m) => ({ default: m.OccupancyChart })));
@@ -30,9 +31,7 @@ export default function ClubOccupancyRoute() {
     body = (
       <>
         <Card>
-          <Text variant="heading" accessibilityRole="header">
-            Transmissions per hour
-          </Text>
+          <Heading level={2}>Transmissions per hour</Heading>
           <Text variant="caption" tone="muted">
             From {formatUtcDateTime(occupancy.data.hoursUtc[0] ?? occupancy.data.fromUtc)}, hour by hour in UTC, stacked by band.
           </Text>
@@ -45,9 +44,7 @@ export default function ClubOccupancyRoute() {
           </View>
         </Card>
         <Card>
-          <Text variant="heading" accessibilityRole="header">
-            Per band, next 24 hours
-          </Text>
+          <Heading level={2}>Per band, next 24 hours</Heading>
           <DutyTable bands={occupancy.data.bands} />
         </Card>
       </>

@@ -10,6 +10,7 @@ import { useBreakpoints } from '@/components/ui/breakpoints';
 import { ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 export default function EditScheduleRoute() {
   const router = useRouter();
@@ -50,9 +51,7 @@ export default function EditScheduleRoute() {
     });
     body = (
       <>
-        <Text variant="title" accessibilityRole="header">
-          {schedule.data ? 'Edit the schedule' : 'Build a rotation'}
-        </Text>
+        <ScreenTitle>{schedule.data ? 'Edit the schedule' : 'Build a rotation'}</ScreenTitle>
         <Text variant="mono" tone="primary">
           {station.data.name} · {station.data.callsign}
         </Text>
