@@ -2,11 +2,12 @@ import { useEffect } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
 
 import { Card } from '../ui/card';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
-import { GLOSSARY } from './glossary';
+import { GLOSSARY } from './glossary-text';
 
 const LIFE: {
   title: string;
@@ -50,7 +51,7 @@ const LIFE: {
   },
 ];
 
-/** The Help screen: the beacon's life in Faintline, then the glossary; `term` opens one entry and scrolls to it. */
+/** The Help screen's body (under its title): the beacon's life in Faintline, then the glossary; `term` opens one entry and scrolls to it. */
 export function HelpView({ term }: { term?: string }) {
   const { colors } = useAppTheme();
   useEffect(() => {
@@ -59,20 +60,15 @@ export function HelpView({ term }: { term?: string }) {
   }, [term]);
   return (
     <View style={styles.page}>
-      <Text variant="title" accessibilityRole="header" aria-level={1}>
-        Help
-      </Text>
       <Text tone="muted">
         How a beacon goes from a board on the bench to reports from far away, and what the words on the screens mean.
       </Text>
-      <Text variant="heading" accessibilityRole="header" aria-level={2}>
-        A beacon’s life in Faintline
-      </Text>
+      <Heading level={2}>A beacon’s life in Faintline</Heading>
       {LIFE.map((step) => (
         <Card key={step.title}>
-          <Text variant="label" accessibilityRole="header" aria-level={3}>
+          <Heading level={3} variant="label">
             {step.title}
-          </Text>
+          </Heading>
           <Text>{step.body}</Text>
           <TextLink href={step.link.href} label={step.link.label} />
         </Card>
@@ -84,16 +80,13 @@ export function HelpView({ term }: { term?: string }) {
           antennas clear of people and power lines. Your local licence conditions always win over Faintline’s defaults.
         </Text>
       </Card>
-      <Text variant="heading" accessibilityRole="header" aria-level={2}>
-        Words used in Faintline
-      </Text>
-      <View role="list" style={styles.glossary}>
+      <Heading level={2}>Words used in Faintline</Heading>
+      <View style={styles.glossary}>
         {GLOSSARY.map((entry) => {
           const chosen = entry.id === term;
           return (
             <View
               key={entry.id}
-              role="listitem"
               nativeID={`term-${entry.id}`}
               style={[
                 styles.entry,
@@ -101,9 +94,9 @@ export function HelpView({ term }: { term?: string }) {
                 chosen && { backgroundColor: colors.primarySoft },
               ]}
             >
-              <Text variant="label" accessibilityRole="header" aria-level={3}>
+              <Heading level={3} variant="label">
                 {entry.term}
-              </Text>
+              </Heading>
               <Text>{entry.body}</Text>
             </View>
           );

@@ -3,16 +3,16 @@ import { Pressable, StyleSheet } from 'react-native';
 
 import { Text } from '../ui/text';
 import { useAppTheme } from '../ui/theme-provider';
-import { glossaryEntry } from './glossary';
+import { GLOSSARY_TERMS } from './glossary';
 
 /** A small "?" beside a trade word: opens its glossary entry on the Help screen. 44 × 44 px to tap. */
 export function TermInfo({ term }: { term: string }) {
   const { colors } = useAppTheme();
-  const entry = glossaryEntry(term);
-  if (!entry) return null;
+  const word = GLOSSARY_TERMS[term];
+  if (!word) return null;
   return (
     <Link href={{ pathname: '/help', params: { term } }} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`What is “${entry.term}”?`} style={styles.target}>
+      <Pressable accessibilityRole="link" accessibilityLabel={`What is “${word}”?`} style={styles.target}>
         <Text variant="label" style={[styles.mark, { color: colors.primary, borderColor: colors.primary }]} aria-hidden>
           ?
         </Text>

@@ -5,6 +5,7 @@ import type { ClubMembership } from '@/shared/api/contracts';
 import { useClubQuery, useReviewQuery } from '../clubs/queries';
 import { useClubHealthQuery } from '../health/queries';
 import { Card } from '../ui/card';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { TextLink } from '../ui/text-link';
 import { fonts, space } from '../ui/theme';
@@ -22,9 +23,7 @@ export function ClubSummaryCard({ club }: { club: ClubMembership }) {
   const id = String(club.clubId);
   return (
     <Card>
-      <Text variant="heading" accessibilityRole="header" aria-level={2}>
-        {club.clubName}: club summary
-      </Text>
+      <Heading level={2}>{`${club.clubName}: club summary`}</Heading>
       <View style={styles.figures}>
         <Figure label="members" value={figure(!!detail.data, detail.isError, detail.data?.members.length ?? 0)} />
         <Figure label="stations on the air" value={figure(!!review.data, review.isError, onAir)} />

@@ -6,6 +6,8 @@ import { useStationsAtAGlanceQuery } from '../receptions/queries';
 import { useStationsQuery } from '../stations/queries';
 import { useUnitsQuery } from '../units/queries';
 import { Card } from '../ui/card';
+import { List, ListItem } from '../ui/list';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
@@ -24,17 +26,15 @@ export function FirstStepsCard() {
   const next = steps.find((s) => !s.done);
   return (
     <Card tone="primary">
-      <Text variant="heading" accessibilityRole="header" aria-level={2}>
-        Getting your beacon on the air
-      </Text>
+      <Heading level={2}>Getting your beacon on the air</Heading>
       <Text tone="muted">
         {done} of {steps.length} steps done. Each step ticks itself off when it is done.
       </Text>
-      <View role="list" style={styles.list}>
+      <List style={styles.list}>
         {steps.map((step, index) => (
           <StepRow key={step.key} step={step} number={index + 1} next={step === next} />
         ))}
-      </View>
+      </List>
     </Card>
   );
 }
@@ -42,7 +42,7 @@ export function FirstStepsCard() {
 function StepRow({ step, number, next }: { step: FirstStep; number: number; next: boolean }) {
   const { colors } = useAppTheme();
   return (
-    <View role="listitem" style={styles.row}>
+    <ListItem style={styles.row}>
       <View style={[styles.tick, { borderColor: colors.primary, backgroundColor: step.done ? colors.primary : 'transparent' }]} aria-hidden>
         <Text variant="label" style={{ color: step.done ? colors.onPrimary : colors.primary }}>
           {step.done ? '✓' : String(number)}
@@ -55,17 +55,21 @@ function StepRow({ step, number, next }: { step: FirstStep; number: number; next
             accessibilityLabel={`Step ${number}: ${step.title}${step.done ? ', done' : next ? ', next' : ''}`}
             style={styles.target}
           >
-            <Text variant="label" tone="primary" style={[styles.link]}>
+            <Text variant="label" tone="primary" style={styles.link}>
               {step.title}
-              {next ? ' → next' : ''}
             </Text>
           </Pressable>
         </Link>
+        {next ? (
+          <Text variant="caption" tone="primary">
+            Next step
+          </Text>
+        ) : null}
         <Text variant="caption" tone="muted">
           {step.done ? 'Done.' : step.detail}
         </Text>
       </View>
-    </View>
+    </ListItem>
   );
 }
 
