@@ -2,8 +2,7 @@ import { Stack, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { useSessionQuery } from '@/components/auth/queries';
-import { ClubSummaryCard } from '@/components/overview/club-summary-card';
-import { FirstStepsCard } from '@/components/overview/first-steps-card';
+import { LazyClubSummaryCard, LazyFirstStepsCard } from '@/components/overview/lazy-cards';
 import { SafetyCard } from '@/components/overview/safety-card';
 import { StationCountCard } from '@/components/overview/station-count-card';
 import { StationGlance } from '@/components/overview/station-glance';
@@ -35,11 +34,11 @@ export default function OverviewRoute() {
           <Text tone="muted">No callsign on your account yet.</Text>
         )}
       </View>
-      <FirstStepsCard />
+      <LazyFirstStepsCard />
       {(user?.clubs ?? [])
         .filter((club) => club.role === 'admin')
         .map((club) => (
-          <ClubSummaryCard key={club.clubId} club={club} />
+          <LazyClubSummaryCard key={club.clubId} club={club} />
         ))}
       <View style={styles.row}>
         <StationCountCard count={stations.data?.length ?? null} status={stations.status} />
