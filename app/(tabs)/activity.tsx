@@ -1,4 +1,5 @@
-import { AuditIntro, AuditList } from '@/components/audit/audit-list';
+import { AuditIntro } from '@/components/audit/audit-intro';
+import { LazyAuditList } from '@/components/audit/lazy-audit-list';
 import { auditCsvPath, useMyAuditQuery } from '@/components/audit/queries';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
@@ -11,7 +12,7 @@ export default function ActivityRoute() {
   else if (log.isError) body = <ErrorState title="Your log could not be loaded" error={log.error} onRetry={() => log.refetch()} />;
   else if (log.data.length === 0)
     body = <EmptyState title="Nothing logged yet" message="Changes to your stations, units, bands and schedules show up here." />;
-  else body = <AuditList entries={log.data} />;
+  else body = <LazyAuditList entries={log.data} />;
   return (
     <Screen>
       <ScreenTitle>Your activity log</ScreenTitle>

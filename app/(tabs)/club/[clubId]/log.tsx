@@ -1,6 +1,7 @@
 import { Stack, useLocalSearchParams } from 'expo-router';
 
-import { AuditIntro, AuditList } from '@/components/audit/audit-list';
+import { AuditIntro } from '@/components/audit/audit-intro';
+import { LazyAuditList } from '@/components/audit/lazy-audit-list';
 import { auditCsvPath, useClubAuditQuery } from '@/components/audit/queries';
 import { ClubNav } from '@/components/clubs/club-nav';
 import { useClubQuery } from '@/components/clubs/queries';
@@ -15,7 +16,7 @@ export default function ClubLogRoute() {
   if (log.isPending) body = <LoadingState label="Loading the log…" />;
   else if (log.isError) body = <ErrorState title="The log could not be loaded" error={log.error} onRetry={() => log.refetch()} />;
   else if (log.data.length === 0) body = <EmptyState title="Nothing logged yet" message="Changes by members and admins show up here." />;
-  else body = <AuditList entries={log.data} />;
+  else body = <LazyAuditList entries={log.data} />;
   const name = club.data?.name ?? 'Club';
   return (
     <Screen>

@@ -3,7 +3,7 @@ import { useState } from 'react';
 
 import { ClubNav } from '@/components/clubs/club-nav';
 import { useClubQuery, useLiftSuspensionMutation, useReviewQuery, useSuspendMutation } from '@/components/clubs/queries';
-import { ReviewTable } from '@/components/clubs/review-table';
+import { LazyReviewTable as ReviewTable } from '@/components/clubs/lazy-review-table';
 import { SuspendDialog } from '@/components/clubs/suspend-dialog';
 import { QueryBoundary } from '@/components/query/query-boundary';
 import { useConfirmedMutation } from '@/components/query/use-confirmed-mutation';
