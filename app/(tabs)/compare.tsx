@@ -8,6 +8,7 @@ import { useSessionQuery } from '@/components/auth/queries';
 import { Card } from '@/components/ui/card';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/query-states';
 import { Screen } from '@/components/ui/screen';
+import { ScreenTitle } from '@/components/ui/screen-title';
 import { Text } from '@/components/ui/text';
 
 export default function CompareRoute() {
@@ -45,9 +46,7 @@ export default function CompareRoute() {
   return (
     <Screen maxWidth={1040}>
       <Stack.Screen options={{ title: 'Compare · Faintline' }} />
-      <Text variant="title" accessibilityRole="header">
-        Compare
-      </Text>
+      <ScreenTitle>Compare</ScreenTitle>
       <Text tone="muted">
         Which antenna, station or period is heard better? Only reports of the same receiver at the same UTC hour count, with SNR referred to
         1 W, so power makes no difference.

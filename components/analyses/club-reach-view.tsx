@@ -8,6 +8,7 @@ import { formatCount, formatKm } from '../receptions/format';
 import { FigureGrid } from '../receptions/reach-figures';
 import { Card } from '../ui/card';
 import { EmptyState } from '../ui/query-states';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { ClubPostsTable, ClubStationsTable } from './club-reach-tables';
@@ -27,9 +28,7 @@ export function ClubReachView({ reach, wide }: { reach: ClubReach; wide: boolean
     <View style={styles.root}>
       <FigureGrid label="The club's figures for this period" figures={figures} />
       <Card style={styles.card}>
-        <Text variant="heading" accessibilityRole="header">
-          Who heard the club
-        </Text>
+        <Heading level={2}>Who heard the club</Heading>
         {reach.centre && reach.mapReceivers.length > 0 ? (
           <View onLayout={(e) => setMapWidth(Math.floor(e.nativeEvent.layout.width))}>
             <LazyWorldMap station={reach.centre} receivers={reach.mapReceivers} width={mapWidth} bandId={null} />
@@ -44,9 +43,7 @@ export function ClubReachView({ reach, wide }: { reach: ClubReach; wide: boolean
         ) : null}
       </Card>
       <Card style={styles.card}>
-        <Text variant="heading" accessibilityRole="header">
-          Member stations
-        </Text>
+        <Heading level={2}>Member stations</Heading>
         {reach.stations.length ? (
           <ClubStationsTable stations={reach.stations} wide={wide} />
         ) : (
@@ -54,9 +51,7 @@ export function ClubReachView({ reach, wide }: { reach: ClubReach; wide: boolean
         )}
       </Card>
       <Card style={styles.card}>
-        <Text variant="heading" accessibilityRole="header">
-          The club’s listening posts
-        </Text>
+        <Heading level={2}>The club’s listening posts</Heading>
         {reach.posts.length ? (
           <ClubPostsTable posts={reach.posts} wide={wide} />
         ) : (

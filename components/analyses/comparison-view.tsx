@@ -6,6 +6,7 @@ import { bandName } from '../receptions/format';
 import { FigureGrid } from '../receptions/reach-figures';
 import { Card } from '../ui/card';
 import { formatSigned, formatUtcDateTime } from '../ui/format';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { barSpanDb, DeltaTable } from './delta-table';
@@ -36,9 +37,7 @@ export function ComparisonView({ comparison }: { comparison: Comparison }) {
   return (
     <View style={styles.root}>
       <Card tone="primary" style={styles.verdict}>
-        <Text variant="heading" accessibilityRole="header">
-          Verdict on {bandName(c.bandId)}
-        </Text>
+        <Heading level={2}>Verdict on {bandName(c.bandId)}</Heading>
         <Text accessibilityLabel={`Verdict: ${c.verdict}`} testID="comparison-verdict">
           {c.verdict}
         </Text>

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import type { GroupFigures } from '@/shared/domain/reception/comparison';
 
 import { formatSigned } from '../ui/format';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
@@ -47,9 +48,7 @@ export function DeltaTable({ title, groups, firstColumn, spanDb }: DeltaTablePro
   const { colors } = useAppTheme();
   return (
     <View style={styles.root}>
-      <Text variant="heading" accessibilityRole="header">
-        {title}
-      </Text>
+      <Heading level={2}>{title}</Heading>
       <View style={[styles.row, { borderColor: colors.border }]}>
         {[firstColumn, 'Paired', 'B − A per watt (95 % interval)'].map((heading, i) => (
           <Text key={heading} variant="caption" tone="muted" style={i === 2 ? styles.wide : styles.cell}>

@@ -4,6 +4,7 @@ import type { OneSideReceiver } from '@/shared/domain/reception/comparison';
 
 import { formatKm } from '../receptions/format';
 import { Card } from '../ui/card';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { space } from '../ui/theme';
 
@@ -13,9 +14,7 @@ export type OneSideListProps = { title: string; receivers: OneSideReceiver[]; mo
 export function OneSideList({ title, receivers, more }: OneSideListProps) {
   return (
     <Card style={styles.card}>
-      <Text variant="heading" accessibilityRole="header">
-        {title}
-      </Text>
+      <Heading level={2}>{title}</Heading>
       {receivers.length === 0 ? (
         <Text tone="muted">None: every receiver of this side also heard the other.</Text>
       ) : (

@@ -12,6 +12,7 @@ import { ConfirmDialog } from '../ui/confirm-dialog';
 import { formatSigned, formatUtcDateTime, formatValue } from '../ui/format';
 import { Notice } from '../ui/notice';
 import { EmptyState, ErrorState, LoadingState } from '../ui/query-states';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
@@ -70,9 +71,7 @@ function BandCard({ station, unit, result, onApply }: { station: Station; unit: 
   const current = result.currentOffsetHz === null ? 'not calibrated yet' : formatSigned(result.currentOffsetHz, 2, 'Hz');
   return (
     <View style={[styles.band, { borderColor: colors.border }]} accessibilityLabel={`${name} from reports`}>
-      <Text variant="heading" accessibilityRole="header">
-        {name}
-      </Text>
+      <Heading level={2}>{name}</Heading>
       <Text tone="muted">
         {result.reports} report{result.reports === 1 ? '' : 's'} from {result.receivers} receiver{result.receivers === 1 ? '' : 's'} since{' '}
         {formatUtcDateTime(result.sinceUtc)}. Current offset: {current}.

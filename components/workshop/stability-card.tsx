@@ -8,6 +8,7 @@ import { Button } from '../ui/button';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { formatSigned, formatUtcDateTime } from '../ui/format';
 import { ErrorState, LoadingState } from '../ui/query-states';
+import { Heading } from '../ui/heading';
 import { Text } from '../ui/text';
 import { radius, space } from '../ui/theme';
 import { useAppTheme } from '../ui/theme-provider';
@@ -35,9 +36,7 @@ export function StabilityCard({ stationId, region, readOnly }: { stationId: numb
   const withTemperature = newest.some((p) => p.temperatureC !== null);
   return (
     <View style={[styles.card, { borderColor: colors.border }]}>
-      <Text variant="heading" accessibilityRole="header">
-        Stability on {name}
-      </Text>
+      <Heading level={2}>Stability on {name}</Heading>
       <Text>Verdict: {verdict.words}.</Text>
       {verdict.tempCoPpmPerC !== null ? (
         <Text tone="muted">

@@ -32,7 +32,8 @@ describe('/stations', () => {
 
   it('when the server fails, shows the error and loads again on retry', async () => {
     let attempts = 0;
-    stubFetch(() => {
+    stubFetch((call) => {
+      if (call.url.includes('/fleet/health')) return jsonResponse(200, []); // the devices' state beside each station
       attempts += 1;
       return attempts === 1
         ? errorResponse(503, 'unavailable', 'The database is not answering right now.')

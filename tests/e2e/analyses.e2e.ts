@@ -94,7 +94,7 @@ for (const viewport of VIEWPORTS) {
         await signIn(admin.page, 'admin@faintline.example');
         await visibleText(admin.page, /Overview|Stations/).waitFor();
         await admin.page.goto(`${BASE_URL}/club`);
-        await link(admin.page, `Open ${CLUB}`).click();
+        await link(admin.page, CLUB).click(); // the row is a link named by what it shows
         await admin.page.waitForURL(/\/club\/\d+$/);
         const clubId = Number(admin.page.url().match(/\/club\/(\d+)$/)![1]);
         await link(admin.page, `Reach of ${CLUB}`).click();

@@ -93,6 +93,8 @@ export const API_ROUTES: RouteSpec[] = [
   { method: 'get', path: '/api/offset-proposals' },
   { method: 'post', path: '/api/offset-proposals/:proposal/accept' },
   { method: 'post', path: '/api/offset-proposals/:proposal/decline' },
+  { method: 'get', path: '/api/stations/:station/stability' },
+  { method: 'get', path: '/api/stations/:station/calibration/from-reports' },
   { method: 'get', path: '/api/notifications' },
   { method: 'post', path: '/api/notifications/:notification/read' },
   { method: 'post', path: '/api/notifications/read-all' },
