@@ -80,7 +80,7 @@ export function ScheduleEditor({
       issues: validateSchedule({ schedule, station, unit }),
       preview: previewDraft({ schedule: parsed.data, station, unit, nowMs }),
     };
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the serialized values: the form hands out a new object every render
   }, [serialized, station, unit, nowMs]);
   const blocks = issues.filter((i) => i.level === 'block');
   const general = issues.filter((i) => i.stepIndex === undefined);

@@ -64,7 +64,7 @@ export function renderRoute(
 
 // ---- fetch stubs with real Response objects ----
 // jsdom has no fetch API; whatwg-fetch (React Native's own fetch polyfill) supplies a spec Response.
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- the polyfill ships CommonJS only and must load before the stubs
 const { Response: FetchResponse } = require('whatwg-fetch') as { Response: typeof Response };
 
 export function jsonResponse(status: number, body?: unknown): Response {
